@@ -1,0 +1,122 @@
+import express, { type Express } from 'express';
+import session from 'express-session';
+import helmet from 'helmet';
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import type { DataSource } from 'typeorm';
+import { auditRoutes } from './audit/audit.routes.js';
+import { authRoutes } from './auth/auth.routes.js';
+import { invitationRoutes } from './auth/invitations.routes.js';
+import { createPassport } from './auth/passport.js';
+import { SESSION_COOKIE, SqliteSessionStore } from './auth/session-store.js';
+import { collectionRoutes } from './collection/collection.routes.js';
+import { publicRoute } from './core/access.js';
+import type { AppContext } from './core/context.js';
+import { csrfProtection } from './core/csrf.js';
+import { apiNotFound, problemHandler } from './core/problem.js';
+import type { Mailer } from './mail/mailer.js';
+import { outboxRoutes } from './mail/outbox.routes.js';
+import { userRoutes } from './users/users.routes.js';
+import { APP_VERSION } from './version.js';
+
+/** What createApp needs; main.ts and the tests both build one. */
+export interface AppOptions {
+  dataSource: DataSource;
+  mailer: Mailer;
+  sessionSecret: string;
+  /** Base URL for links in mails. */
+  publicUrl: string;
+  /** Folder of the built Angular client; null serves the API only. */
+  clientDir?: string | null;
+  /** Whether cookies are marked Secure (behind HTTPS). */
+  secureCookies?: boolean;
+  /** Express "trust proxy" setting, for a reverse proxy in front. */
+  trustProxy?: boolean | number | string;
+  /** Where 5xx errors are logged. */
+  logError?: (err: unknown) => void;
+}
+
+/** Session lifetime, renewed on activity: a working day in the field. */
+const SESSION_MAX_AGE_MS = 12 * 60 * 60 * 1000;
+
+/** Builds the Express app: security headers, sessions, CSRF, the API, the client, problem+json errors. */
+export function createApp(options: AppOptions): Express {
+  const app = express();
+  app.disable('x-powered-by');
+  if (options.trustProxy !== undefined) app.set('trust proxy', options.trustProxy);
+  const secure = options.secureCookies ?? false;
+  const sessions = new SqliteSessionStore(options.dataSource);
+  const ctx: AppContext = { ds: options.dataSource, mailer: options.mailer, publicUrl: options.publicUrl, sessions };
+  const passport = createPassport(options.dataSource);
+
+  app.use(helmet({ contentSecurityPolicy: { directives: cspDirectives() }, hsts: secure }));
+  app.use(express.json({ limit: '1mb' }));
+  app.use(
+    session({
+      name: SESSION_COOKIE,
+      secret: options.sessionSecret,
+      store: sessions,
+      resave: false,
+      saveUninitialized: false,
+      rolling: true,
+      cookie: { httpOnly: true, sameSite: 'lax', secure, maxAge: SESSION_MAX_AGE_MS },
+    }),
+  );
+  app.use(passport.initialize());
+  app.use(passport.session());
+
+  const api = express.Router();
+  api.use(csrfProtection(options.sessionSecret, secure));
+  api.get('/health', publicRoute, (_req, res) => {
+    res.json({ status: 'ok', version: APP_VERSION });
+  });
+  api.use('/auth', authRoutes(ctx, passport));
+  api.use('/invitations', invitationRoutes(ctx));
+  api.use('/users', userRoutes(ctx));
+  api.use('/outbox', outboxRoutes(ctx));
+  api.use('/audit', auditRoutes(ctx));
+  api.use('/', collectionRoutes(ctx));
+  api.use(apiNotFound);
+  app.use('/api', api);
+
+  if (options.clientDir) serveClient(app, options.clientDir);
+  app.use(problemHandler(options.logError));
+  return app;
+}
+
+/** Only our own origin: no CDN, no inline scripts. Styles allow inline because Angular injects component styles. */
+function cspDirectives() {
+  return {
+    defaultSrc: ["'self'"],
+    scriptSrc: ["'self'"],
+    styleSrc: ["'self'", "'unsafe-inline'"],
+    imgSrc: ["'self'", 'data:', 'blob:'],
+    fontSrc: ["'self'"],
+    connectSrc: ["'self'"],
+    workerSrc: ["'self'"],
+    manifestSrc: ["'self'"],
+    objectSrc: ["'none'"],
+    baseUri: ["'self'"],
+    formAction: ["'self'"],
+    frameAncestors: ["'none'"],
+    upgradeInsecureRequests: null,
+  };
+}
+
+/** Serves the built client: hashed files cached for a year, index.html never, deep links get index.html. */
+function serveClient(app: Express, clientDir: string): void {
+  const indexFile = path.join(clientDir, 'index.html');
+  if (!existsSync(indexFile)) throw new Error(`The client is not built: ${indexFile} is missing. Run npm run build.`);
+  app.use(
+    express.static(clientDir, {
+      index: false,
+      setHeaders: (res, file) => {
+        res.setHeader('Cache-Control', /-[A-Z0-9]{8}\.(js|css)$/.test(file) ? 'public, max-age=31536000, immutable' : 'no-cache');
+      },
+    }),
+  );
+  app.get('/{*splat}', (_req, res) => {
+    res.setHeader('Cache-Control', 'no-cache');
+    res.sendFile(indexFile);
+  });
+}

@@ -1,0 +1,21 @@
+import { Column, Entity, PrimaryGeneratedColumn } from 'typeorm';
+import type { Character as CharacterDto, Organ } from '../../shared/api/collection.js';
+
+/** What is read: an organ and its exact part, with how to read it and any caution. */
+@Entity('character')
+export class Character {
+  @PrimaryGeneratedColumn('increment') id: number;
+  @Column('varchar', { length: 60, unique: true }) code: string;
+  @Column('varchar', { length: 20 }) organ: Organ;
+  @Column('varchar', { length: 120 }) label: string;
+  @Column('text') howToRead: string;
+  @Column('text', { nullable: true }) caution: string | null;
+  @Column('boolean', { default: true }) colour: boolean;
+  @Column('boolean', { default: true }) active: boolean;
+  /** Catalogue order (organ by organ, from the top of the plant down). */
+  @Column('integer', { default: 0 }) sortOrder: number;
+}
+
+export function toCharacterDto(c: Character): CharacterDto {
+  return { id: c.id, code: c.code, organ: c.organ, label: c.label, howToRead: c.howToRead, caution: c.caution, colour: c.colour, active: c.active };
+}

@@ -1,0 +1,56 @@
+import { randomBytes } from 'node:crypto';
+import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { createApp } from './app.js';
+import { seedCharacterCatalogue } from './collection/seed-catalogue.js';
+import { readConfig } from './config.js';
+import { openDatabase } from './data-source.js';
+import { seedDemo } from './demo/seed-demo.js';
+import { startMailer } from './mail/mailer.js';
+
+const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
+
+/** The session secret: SESSION_SECRET, else one generated once into the data folder. */
+function sessionSecret(dataDir: string, fromEnv: string | null): string {
+  if (fromEnv) return fromEnv;
+  const file = path.join(dataDir, 'session-secret');
+  if (!existsSync(file)) writeFileSync(file, randomBytes(48).toString('base64url'), { mode: 0o600 });
+  return readFileSync(file, 'utf8').trim();
+}
+
+async function main(): Promise<void> {
+  const config = readConfig();
+  mkdirSync(config.dataDir, { recursive: true });
+  const ds = await openDatabase(path.join(config.dataDir, 'hueledger.sqlite'));
+  await seedCharacterCatalogue(ds);
+  if (config.demo && (await seedDemo(ds))) console.log('Loaded the invented demo scenario (password demo-pass-2026).');
+  const mailer = await startMailer(ds, config.smtpUrl, config.mailFrom);
+  const app = createApp({
+    dataSource: ds,
+    mailer,
+    sessionSecret: sessionSecret(config.dataDir, config.sessionSecret),
+    publicUrl: config.publicUrl,
+    clientDir: path.join(root, 'dist/client/browser'),
+  });
+  const server = app.listen(config.port, () => {
+    console.log(`Hueledger on http://localhost:${config.port} (data in ${config.dataDir}; mail ${mailer.catching ? 'caught in the outbox' : 'sent by SMTP'})`);
+  });
+  server.on('error', (err) => {
+    console.error(`Cannot listen on port ${config.port}: ${err.message}`);
+    process.exit(1);
+  });
+  const stop = () => {
+    server.close(() => {
+      void mailer.close().then(() => ds.destroy()).then(() => process.exit(0));
+    });
+    setTimeout(() => process.exit(0), 5000).unref();
+  };
+  process.once('SIGTERM', stop);
+  process.once('SIGINT', stop);
+}
+
+main().catch((err: unknown) => {
+  console.error(err instanceof Error ? err.message : err);
+  process.exit(1);
+});
