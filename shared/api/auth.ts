@@ -1,11 +1,8 @@
 import { z } from 'zod';
 
-/** The four roles; each API route states which of them it allows (DESIGN §4). */
-export const ROLES = ['admin', 'trainer', 'reviewer', 'recorder'] as const;
-export type Role = (typeof ROLES)[number];
+import { PASSWORD_MIN_LENGTH, ROLES, type Role } from './roles.js';
 
-/** Minimum length of a new password; long passphrases beat complexity rules (NIST SP 800-63B §3.1.1.2). */
-export const PASSWORD_MIN_LENGTH = 10;
+export { PASSWORD_MIN_LENGTH, ROLES, type Role };
 
 const email = z.string().trim().toLowerCase().pipe(z.email({ message: 'must be an e-mail address' }));
 const newPassword = z

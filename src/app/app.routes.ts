@@ -1,0 +1,52 @@
+import { Routes } from '@angular/router';
+
+import { authGuard } from './core/auth/auth-guard';
+import { roleGuard } from './core/auth/role-guard';
+
+/** Public pages first, then the signed-in shell; each section's roles match its entry in nav-items.ts. */
+export const routes: Routes = [
+  {
+    path: 'sign-in',
+    title: 'Sign in · Hueledger',
+    loadComponent: () => import('./features/sign-in/pages/sign-in-page').then((m) => m.SignInPage),
+  },
+  {
+    path: 'forgot-password',
+    title: 'Forgot password · Hueledger',
+    loadComponent: () => import('./features/sign-in/pages/forgot-password-page').then((m) => m.ForgotPasswordPage),
+  },
+  {
+    path: 'reset-password/:token',
+    title: 'New password · Hueledger',
+    loadComponent: () => import('./features/sign-in/pages/reset-password-page').then((m) => m.ResetPasswordPage),
+  },
+  {
+    path: 'invitation/:token',
+    title: 'Invitation · Hueledger',
+    loadComponent: () => import('./features/sign-in/pages/invitation-page').then((m) => m.InvitationPage),
+  },
+  {
+    path: '',
+    canActivate: [authGuard],
+    loadComponent: () => import('./core/layout/shell').then((m) => m.Shell),
+    children: [
+      { path: '', pathMatch: 'full', redirectTo: 'collection' },
+      {
+        path: 'collection',
+        title: 'Collection · Hueledger',
+        loadComponent: () => import('./features/collection/pages/collection-page').then((m) => m.CollectionPage),
+      },
+      {
+        path: 'account',
+        title: 'Account · Hueledger',
+        loadComponent: () => import('./features/account/pages/account-page').then((m) => m.AccountPage),
+      },
+      {
+        path: 'admin',
+        canActivate: [roleGuard('admin')],
+        loadChildren: () => import('./features/admin/admin.routes').then((m) => m.ADMIN_ROUTES),
+      },
+      { path: '**', redirectTo: 'collection' },
+    ],
+  },
+];

@@ -1,0 +1,45 @@
+import { ErrorHandler, Injectable, Injector, inject } from '@angular/core';
+import { MatSnackBar } from '@angular/material/snack-bar';
+
+import { ApiError } from './api-error';
+import { ErrorSnack, ErrorSnackData } from './error-snack';
+
+/** How long an error stays on screen; long enough to read with wet hands. */
+const ERROR_SNACK_MS = 8000;
+
+/** Shows any uncaught error as a snack bar in plain words, and keeps the full error in the console. */
+@Injectable()
+export class AppErrorHandler implements ErrorHandler {
+  // Resolved lazily: the ErrorHandler is created before most of the app's providers.
+  private readonly injector = inject(Injector);
+
+  handleError(error: unknown): void {
+    console.error(error);
+    const data = describeError(error);
+    this.injector.get(MatSnackBar).openFromComponent(ErrorSnack, {
+      data,
+      duration: ERROR_SNACK_MS,
+      panelClass: 'hl-error-snack',
+    });
+  }
+}
+
+/** Turns any thrown value into the words shown to the person. */
+export function describeError(error: unknown): ErrorSnackData {
+  const cause = unwrap(error);
+  if (cause instanceof ApiError) {
+    const message = cause.detail ? `${cause.title} ${cause.detail}` : cause.title;
+    return { message, fields: cause.fieldErrors };
+  }
+  return { message: 'Something went wrong. Reload the page and try again.', fields: [] };
+}
+
+/** Promise rejections and some wrappers carry the real error in `rejection` or `cause`. */
+function unwrap(error: unknown): unknown {
+  if (error instanceof ApiError) return error;
+  if (typeof error === 'object' && error !== null) {
+    const inner = (error as { rejection?: unknown; cause?: unknown }).rejection ?? (error as { cause?: unknown }).cause;
+    if (inner instanceof ApiError) return inner;
+  }
+  return error;
+}

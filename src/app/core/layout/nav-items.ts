@@ -1,0 +1,53 @@
+import { ROLES, type Role } from '../../../../shared/api/roles.js';
+
+/** Every role, for sections all signed-in people may open. */
+const EVERYONE: readonly Role[] = ROLES;
+
+/** One entry of the side navigation. */
+export interface NavItem {
+  label: string;
+  /** Material Symbols ligature name. */
+  icon: string;
+  /** Absolute router path. */
+  path: string;
+  /** Roles that see this entry. */
+  roles: readonly Role[];
+  /** Heading the entry is listed under, if any. */
+  group?: string;
+}
+
+/** A run of entries under one heading (or none). */
+export interface NavSection {
+  heading: string | null;
+  items: NavItem[];
+}
+
+/**
+ * The app's sections in the order shown. Adding a section is one line here; its route goes in
+ * app.routes.ts with the same roles.
+ */
+export const NAV_ITEMS: readonly NavItem[] = [
+  { label: 'Collection', icon: 'potted_plant', path: '/collection', roles: EVERYONE },
+  { label: 'Users', icon: 'group', path: '/admin/users', roles: ['admin'], group: 'Admin' },
+  { label: 'Outbox', icon: 'outgoing_mail', path: '/admin/outbox', roles: ['admin'], group: 'Admin' },
+  { label: 'Audit', icon: 'history', path: '/admin/audit', roles: ['admin'], group: 'Admin' },
+  { label: 'Account', icon: 'manage_accounts', path: '/account', roles: EVERYONE },
+];
+
+/** The entries a role may see, in order; nobody signed in sees none. */
+export function navItemsFor(role: Role | null, items: readonly NavItem[] = NAV_ITEMS): NavItem[] {
+  if (role === null) return [];
+  return items.filter((item) => item.roles.includes(role));
+}
+
+/** The entries a role may see, with consecutive entries of one group gathered under its heading. */
+export function navSectionsFor(role: Role | null, items: readonly NavItem[] = NAV_ITEMS): NavSection[] {
+  const sections: NavSection[] = [];
+  for (const item of navItemsFor(role, items)) {
+    const heading = item.group ?? null;
+    const last = sections.at(-1);
+    if (last && last.heading === heading) last.items.push(item);
+    else sections.push({ heading, items: [item] });
+  }
+  return sections;
+}

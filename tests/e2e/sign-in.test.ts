@@ -1,0 +1,129 @@
+import assert from 'node:assert/strict';
+import { after, before, describe, test } from 'node:test';
+import type { Page } from 'playwright-core';
+import type { Role } from '../../shared/api/roles.js';
+import { openBrowser, screenshot, type Browser } from './browser.js';
+import { startServer, type ServerProcess } from './server-process.js';
+
+/** The demo password (DESIGN §3). */
+const DEMO_PASSWORD = 'demo-pass-2026';
+
+/** What each role must and must not see in the side navigation (this issue's sections). */
+const EXPECTED_NAV: Record<Role, { shows: string[]; hides: string[] }> = {
+  admin: { shows: ['Collection', 'Users', 'Outbox', 'Audit', 'Account'], hides: [] },
+  trainer: { shows: ['Collection', 'Account'], hides: ['Users', 'Outbox', 'Audit'] },
+  reviewer: { shows: ['Collection', 'Account'], hides: ['Users', 'Outbox', 'Audit'] },
+  recorder: { shows: ['Collection', 'Account'], hides: ['Users', 'Outbox', 'Audit'] },
+};
+
+async function signIn(page: Page, url: string, email: string, password: string): Promise<void> {
+  await page.goto(`${url}/sign-in`);
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password', { exact: true }).fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
+}
+
+async function navLabels(page: Page): Promise<string[]> {
+  const nav = page.getByRole('navigation', { name: 'Sections' }).or(page.locator('mat-sidenav'));
+  await nav.first().locator('a').first().waitFor();
+  return (await nav.first().locator('a').allInnerTexts()).map((t) => t.replace(/^\S+\s*\n?/, '').trim());
+}
+
+describe('signing in as each demo role in Chromium', () => {
+  let server: ServerProcess;
+  let browser: Browser;
+
+  before(async () => {
+    server = await startServer();
+    browser = await openBrowser(server.url);
+  });
+  after(async () => {
+    await browser?.close();
+    await server?.stop();
+  });
+
+  for (const role of ['admin', 'trainer', 'reviewer', 'recorder'] as const) {
+    test(`should show the ${role} their own navigation, name and role, then sign out`, async () => {
+      const page = await browser.newPage();
+      await signIn(page, server.url, `${role}@demo.test`, DEMO_PASSWORD);
+      await page.getByRole('heading', { name: 'Collection' }).waitFor();
+      const toolbar = page.locator('mat-toolbar');
+      assert.match(await toolbar.innerText(), new RegExp(role));
+      const nav = (await page.locator('mat-sidenav a').allInnerTexts()).join(' | ');
+      for (const label of EXPECTED_NAV[role].shows) assert.match(nav, new RegExp(`\\b${label}\\b`), `${role} should see ${label}`);
+      for (const label of EXPECTED_NAV[role].hides) assert.doesNotMatch(nav, new RegExp(`\\b${label}\\b`), `${role} should not see ${label}`);
+      await page.getByRole('tab', { name: /Accessions/ }).waitFor();
+      await page.locator('text=HL-0001').first().waitFor();
+      await screenshot(page, `sign-in-${role}-desktop`);
+
+      await page.getByRole('button', { name: 'Account menu' }).click();
+      await page.getByRole('menuitem', { name: 'Sign out' }).click();
+      await page.waitForURL((u) => u.pathname.startsWith('/sign-in'));
+      const me = await page.evaluate(() => fetch('/api/auth/me').then((r) => r.status));
+      assert.equal(me, 401);
+      await page.close();
+    });
+  }
+
+  test('should refuse a wrong password with a readable message', async () => {
+    const page = await browser.newPage();
+    await page.goto(`${server.url}/sign-in`);
+    await page.getByLabel('E-mail').fill('recorder@demo.test');
+    await page.getByLabel('Password', { exact: true }).fill('not-the-password');
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.getByRole('alert').waitFor();
+    assert.match(await page.getByRole('alert').innerText(), /do not match|not right/i);
+    assert.ok(new URL(page.url()).pathname.startsWith('/sign-in'));
+    await page.close();
+  });
+
+  test('should send a recorder away from the admin pages', async () => {
+    const page = await browser.newPage();
+    await signIn(page, server.url, 'recorder@demo.test', DEMO_PASSWORD);
+    await page.goto(`${server.url}/admin/users`);
+    await page.getByRole('heading', { name: 'Collection' }).waitFor();
+    assert.ok(!new URL(page.url()).pathname.startsWith('/admin'));
+    await page.close();
+  });
+
+  test('should load nothing from another origin', () => {
+    assert.deepEqual(browser.foreignRequests, []);
+  });
+});
+
+describe('a recorder on a phone', () => {
+  let server: ServerProcess;
+  let browser: Browser;
+
+  before(async () => {
+    server = await startServer();
+    browser = await openBrowser(server.url, { phone: true });
+  });
+  after(async () => {
+    await browser?.close();
+    await server?.stop();
+  });
+
+  test('should find the navigation behind the menu button', async () => {
+    const page = await browser.newPage();
+    await page.goto(`${server.url}/sign-in`);
+    await screenshot(page, 'sign-in-phone');
+    await signIn(page, server.url, 'recorder@demo.test', DEMO_PASSWORD);
+    await page.getByRole('heading', { name: 'Collection' }).waitFor();
+    await page.locator('text=HL-0001').first().waitFor();
+    await screenshot(page, 'collection-recorder-phone');
+    const drawer = page.locator('mat-sidenav');
+    assert.equal(await drawer.isVisible(), false, 'the drawer starts closed on a phone');
+    await page.getByRole('button', { name: 'Open navigation' }).click();
+    await drawer.getByText('Collection').waitFor({ state: 'visible' });
+    const box = await drawer.locator('a').first().boundingBox();
+    assert.ok(box && box.height >= 48, `navigation targets are at least 48 px high (got ${box?.height})`);
+    await screenshot(page, 'navigation-recorder-phone');
+    await page.close();
+  });
+
+  test('should load nothing from another origin', () => {
+    assert.deepEqual(browser.foreignRequests, []);
+  });
+});
