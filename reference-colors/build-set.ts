@@ -1,0 +1,113 @@
+import { createChipIndex } from '../shared/colour/chip-index.js';
+import { colourName, HUE_FAMILY_ORDER, hueFamilyOfLch } from '../shared/colour/colour-name.js';
+import { OBSERVER_NAME, WHITE_NAME } from '../shared/colour/constants.js';
+import { displayHex } from '../shared/colour/display-hex.js';
+import { labFromTuple, labToLch, type Lab, type LabTuple } from '../shared/colour/lab.js';
+import type { ReferenceChip, ReferenceSetFile } from '../shared/colour/reference-set.js';
+import { fieldChipPositions } from './field-chips.js';
+import { fineLatticeChips } from './fine-lattice.js';
+
+/** Identity of the set this generator writes. A new version is a new id and file, never an edit. */
+export const SET_IDENTITY = {
+  id: 'v1',
+  version: 1,
+  name: 'Hueledger reference set, version 1',
+  generatedBy: 'reference-colors/generate.ts',
+} as const;
+
+/** Largest number of chips a three-digit code can count. */
+const CODE_CAPACITY = 999;
+
+/** Rounds to two decimals as the file stores them (−0 written as 0). */
+function round2(v: number): number {
+  const r = Math.round(v * 100) / 100;
+  return r === 0 ? 0 : r;
+}
+
+function roundLab(lab: Lab): LabTuple {
+  return [round2(lab.l), round2(lab.a), round2(lab.b)];
+}
+
+/**
+ * Card order: hue family (HUE_FAMILY_ORDER), then lightness from light to dark, then chroma from
+ * vivid to grey, then hue angle, then the raw numbers so that no two chips tie.
+ */
+function cardOrder(p: LabTuple, q: LabTuple): number {
+  const lp = labToLch(labFromTuple(p));
+  const lq = labToLch(labFromTuple(q));
+  return (
+    HUE_FAMILY_ORDER.indexOf(hueFamilyOfLch(lp)) - HUE_FAMILY_ORDER.indexOf(hueFamilyOfLch(lq)) ||
+    q[0] - p[0] ||
+    lq.c - lp.c ||
+    lp.h - lq.h ||
+    p[1] - q[1] ||
+    p[2] - q[2]
+  );
+}
+
+function pad3(n: number): string {
+  if (n > CODE_CAPACITY) throw new Error(`more than ${CODE_CAPACITY} chips in one group`);
+  return String(n).padStart(3, '0');
+}
+
+function chip(code: string, parent: string | null, lab: LabTuple): ReferenceChip {
+  const display = displayHex(labFromTuple(lab));
+  return { code, parent, name: colourName(labFromTuple(lab)), lab, hex: display.hex, inGamut: display.inGamut };
+}
+
+/** Removes repeats of the same rounded CIELAB, keeping the first. */
+function distinct(tuples: LabTuple[]): LabTuple[] {
+  const seen = new Set<string>();
+  return tuples.filter((t) => {
+    const key = t.join(',');
+    if (seen.has(key)) return false;
+    seen.add(key);
+    return true;
+  });
+}
+
+/**
+ * The whole reference set. Everything after rounding is computed from the rounded CIELAB the file
+ * holds, so each chip's parent, name, hex and gamut flag agree with its stored numbers.
+ */
+export function buildReferenceSet(): ReferenceSetFile {
+  const field = distinct(fieldChipPositions().map(roundLab)).sort(cardOrder);
+  const fieldKeys = new Set(field.map((t) => t.join(',')));
+  const fine = distinct(fineLatticeChips().map(roundLab)).filter((t) => !fieldKeys.has(t.join(',')));
+
+  // Each fine chip's parent is its nearest field chip by ΔE00 (ties: the earlier field code).
+  const fieldIndex = createChipIndex(field.map(labFromTuple));
+  const byParent: LabTuple[][] = field.map(() => []);
+  for (const t of fine) byParent[fieldIndex.nearest(labFromTuple(t), 1)[0].index].push(t);
+
+  const chips: ReferenceChip[] = [];
+  field.forEach((lab, f) => {
+    const code = `F-${pad3(f + 1)}`;
+    chips.push(chip(code, null, lab));
+    byParent[f].sort(cardOrder).forEach((fineLab, i) => chips.push(chip(`${code}.${pad3(i + 1)}`, code, fineLab)));
+  });
+  return { ...SET_IDENTITY, white: WHITE_NAME, observer: OBSERVER_NAME, chips };
+}
+
+/**
+ * The file's text: fixed key order, every CIELAB number with two decimals, one chip per line,
+ * chips in code order (each field chip followed by its fine chips), a final newline.
+ */
+export function formatReferenceSet(set: ReferenceSetFile): string {
+  const fixed = (v: number) => {
+    const s = v.toFixed(2);
+    return s === '-0.00' ? '0.00' : s;
+  };
+  const chipLine = (c: ReferenceChip) =>
+    `    {"code":${JSON.stringify(c.code)},"parent":${JSON.stringify(c.parent)},"name":${JSON.stringify(c.name)},` +
+    `"lab":[${c.lab.map(fixed).join(',')}],"hex":${JSON.stringify(c.hex)},"inGamut":${c.inGamut}}`;
+  const head = [
+    `  "id": ${JSON.stringify(set.id)}`,
+    `  "version": ${set.version}`,
+    `  "name": ${JSON.stringify(set.name)}`,
+    `  "white": ${JSON.stringify(set.white)}`,
+    `  "observer": ${JSON.stringify(set.observer)}`,
+    `  "generatedBy": ${JSON.stringify(set.generatedBy)}`,
+  ];
+  return `{\n${head.join(',\n')},\n  "chips": [\n${set.chips.map(chipLine).join(',\n')}\n  ]\n}\n`;
+}

@@ -1,0 +1,38 @@
+import type { Lch } from '../shared/colour/lab.js';
+
+/** A region of CIELAB D65 given in LCh(ab): L* and C*ab ranges, and a hue arc in degrees. */
+export interface TissueRegion {
+  id: string;
+  label: string;
+  /** L* from, to (inclusive). */
+  l: readonly [number, number];
+  /** C*ab from, to (inclusive). */
+  c: readonly [number, number];
+  /** h°ab arc from, to (to < from wraps through 0°); from inclusive, to exclusive. */
+  h: readonly [number, number];
+}
+
+/**
+ * Where taro tissue colours live, in CIELAB D65 LCh(ab) — the regions the fine chips are densest
+ * in and the coverage requirement is tested on (DESIGN §6). Our own definitions, drawn wide
+ * enough to hold the tissue colours named in the design (chlorophyll greens and yellow-greens of
+ * leaves and petioles; anthocyanin pinks, reds, red-purples and purples of petioles, skins and
+ * flesh flecks; creams and yellows of corm flesh; browns of skins and scars).
+ */
+export const TISSUE_REGIONS: readonly TissueRegion[] = [
+  { id: 'chlorophyll', label: 'chlorophyll greens and yellow-greens', l: [15, 80], c: [5, 55], h: [95, 155] },
+  { id: 'anthocyanin', label: 'anthocyanin pinks, reds, red-purples and purples', l: [10, 85], c: [5, 60], h: [290, 45] },
+  { id: 'corm-flesh', label: 'creams and yellows of corm flesh', l: [65, 97], c: [3, 50], h: [65, 105] },
+  { id: 'skin-scar', label: 'browns of skins and scars', l: [15, 60], c: [5, 45], h: [35, 80] },
+];
+
+/** Whether hue `h` lies on the arc [from, to), wrapping through 0° when to < from. */
+export function onHueArc(h: number, [from, to]: readonly [number, number]): boolean {
+  const x = ((h % 360) + 360) % 360;
+  return from <= to ? x >= from && x < to : x >= from || x < to;
+}
+
+/** Whether an LCh(ab) colour lies in the region. */
+export function inTissueRegion(lch: Lch, region: TissueRegion): boolean {
+  return lch.l >= region.l[0] && lch.l <= region.l[1] && lch.c >= region.c[0] && lch.c <= region.c[1] && onHueArc(lch.h, region.h);
+}
