@@ -25,7 +25,8 @@ export function authRoutes(ctx: AppContext, passport: ReturnType<typeof createPa
     skipSuccessfulRequests: true,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
-    keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '')}|${String((req.body as { email?: unknown })?.email ?? '').toLowerCase()}`,
+    // Normalised as loginBody does, so spacing or case variants of one address share one count.
+    keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '')}|${String((req.body as { email?: unknown })?.email ?? '').trim().toLowerCase()}`,
     handler: (_req, _res, next) =>
       next(new AppError(429, 'Too many sign-in attempts', 'Too many failed sign-ins for this account from here. Wait 15 minutes or reset the password.')),
   });

@@ -4,7 +4,15 @@ import { PASSWORD_MIN_LENGTH, ROLES, type Role } from './roles.js';
 
 export { PASSWORD_MIN_LENGTH, ROLES, type Role };
 
-const email = z.string().trim().toLowerCase().pipe(z.email({ message: 'must be an e-mail address' }));
+/** An address has at most 254 characters (RFC 5321 §4.5.3.1.3: a 256-octet path less its angle brackets). */
+const EMAIL_MAX_LENGTH = 254;
+
+const email = z
+  .string()
+  .trim()
+  .toLowerCase()
+  .max(EMAIL_MAX_LENGTH, { message: `must be at most ${EMAIL_MAX_LENGTH} characters` })
+  .pipe(z.email({ message: 'must be an e-mail address' }));
 const newPassword = z
   .string()
   .min(PASSWORD_MIN_LENGTH, { message: `must be at least ${PASSWORD_MIN_LENGTH} characters` })

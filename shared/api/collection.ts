@@ -91,7 +91,7 @@ export interface Character {
 }
 
 /** MCPD date: YYYYMMDD, unknown month/day as hyphens ("2019----", "201903--"). */
-export const MCPD_DATE = /^\d{4}(\d{2}|--)(\d{2}|--)$/;
+export const MCPD_DATE = /^\d{4}(0[1-9]|1[0-2]|--)(0[1-9]|[12]\d|3[01]|--)$/;
 
 const plantInput = z.object({
   label: z.string().trim().min(1).max(40),

@@ -5,6 +5,7 @@ import request from 'supertest';
 import type { Express } from 'express';
 import type { DataSource } from 'typeorm';
 import type { Role } from '../../shared/api/auth.js';
+import { MailMessage } from '../../server/mail/mail-message.entity.js';
 import { createApp } from '../../server/app.js';
 import { hashPassword } from '../../server/auth/passwords.js';
 import { User } from '../../server/auth/user.entity.js';
@@ -29,15 +30,25 @@ export interface Harness {
 export const TEST_SECRET = 'test-session-secret-that-is-long-enough-0123456789';
 export const PUBLIC_URL = 'http://hueledger.test';
 
-/** Starts a harness; `demo` loads the invented demo scenario. */
-export async function startHarness(opts: { demo?: boolean; dir?: string } = {}): Promise<Harness> {
+/** What a harness can be started with. */
+export interface HarnessOptions {
+  /** Whether to load the invented demo scenario. */
+  demo?: boolean;
+  /** An existing folder (restart); a new temporary one by default. */
+  dir?: string;
+  /** Where the app logs 5xx errors; dropped by default. */
+  logError?: (err: unknown) => void;
+}
+
+/** Starts a harness on a fresh SQLite file (or the one in `dir`). */
+export async function startHarness(opts: HarnessOptions = {}): Promise<Harness> {
   const dir = opts.dir ?? mkdtempSync(path.join(tmpdir(), 'hueledger-test-'));
   const dbFile = path.join(dir, 'hueledger.sqlite');
   const ds = await openDatabase(dbFile);
   await seedCharacterCatalogue(ds);
   if (opts.demo) await seedDemo(ds);
   const mailer = await startMailer(ds, null, 'Hueledger <no-reply@hueledger.invalid>');
-  const app = createApp({ dataSource: ds, mailer, sessionSecret: TEST_SECRET, publicUrl: PUBLIC_URL, logError: () => {} });
+  const app = createApp({ dataSource: ds, mailer, sessionSecret: TEST_SECRET, publicUrl: PUBLIC_URL, logError: opts.logError ?? (() => {}) });
   const shutdown = async () => {
     await mailer.close();
     await ds.destroy();
@@ -54,7 +65,7 @@ export async function startHarness(opts: { demo?: boolean; dir?: string } = {}):
     },
     async restart() {
       await shutdown();
-      return startHarness({ dir });
+      return startHarness({ dir, logError: opts.logError });
     },
   };
 }
@@ -66,6 +77,29 @@ export class Client {
 
   constructor(app: Express) {
     this.agent = request.agent(app);
+  }
+
+  /** A client of another app (e.g. after a restart) holding this one's cookies, as a browser would. */
+  static resume(app: Express, from: Client): Client {
+    const client = new Client(app);
+    client.agent.jar.setCookies(from.cookieHeader().split('; '), LOCAL_COOKIES.domain, LOCAL_COOKIES.path);
+    client.csrf = from.csrf;
+    return client;
+  }
+
+  /** The cookies this client would send, as a Cookie header value. */
+  cookieHeader(): string {
+    return this.agent.jar.getCookies(LOCAL_COOKIES).toValueString();
+  }
+
+  /** The value of one cookie this client holds. */
+  cookie(name: string): string | undefined {
+    return this.agent.jar.getCookie(name, LOCAL_COOKIES)?.value;
+  }
+
+  /** The CSRF token this client echoes. */
+  get csrfToken(): string {
+    return this.csrf;
   }
 
   /** Fetches the CSRF cookie (GET /api/health). */
@@ -88,6 +122,10 @@ export class Client {
   delete(url: string) {
     return this.agent.delete(url).set('X-XSRF-TOKEN', this.csrf);
   }
+  /** A request carrying the CSRF header and no body yet, for raw or malformed bodies. */
+  raw(method: 'post' | 'patch', url: string) {
+    return this.agent[method](url).set('X-XSRF-TOKEN', this.csrf);
+  }
 
   /** Signs in; fails the test if refused. */
   async signIn(email: string, password: string): Promise<this> {
@@ -99,11 +137,19 @@ export class Client {
   }
 }
 
+/** Where supertest's ephemeral servers listen, for reading the cookie jar. */
+const LOCAL_COOKIES = { domain: '127.0.0.1', path: '/', secure: false, script: false } as Parameters<Client['agent']['jar']['getCookies']>[0];
+
 export const PASSWORD = 'correct-horse-battery';
+
+/** One scrypt hash per distinct fixture password and process: hashing costs ~100 ms or more, and fixtures need no fresh salt. */
+const fixtureHashes = new Map<string, Promise<string>>();
 
 /** Adds a user directly to the database (faster than the API for fixtures). */
 export async function addUser(ds: DataSource, role: Role, email = `${role}@test.example`, password = PASSWORD): Promise<User> {
-  return ds.getRepository(User).save({ email, name: `Test ${role}`, role, passwordHash: await hashPassword(password), active: true, lastLoginAt: null });
+  if (!fixtureHashes.has(password)) fixtureHashes.set(password, hashPassword(password));
+  const passwordHash = await fixtureHashes.get(password)!;
+  return ds.getRepository(User).save({ email, name: `Test ${role}`, role, passwordHash, active: true, lastLoginAt: null });
 }
 
 /** A client signed in as a new user of the role. */
@@ -111,4 +157,28 @@ export async function signedInAs(h: Harness, role: Role): Promise<Client> {
   const email = `${role}-${Math.random().toString(36).slice(2, 8)}@test.example`;
   await addUser(h.ds, role, email);
   return new Client(h.app).signIn(email, PASSWORD);
+}
+
+/** Row counts of every table of the schema (not TypeORM's migrations table), to show a refused request changed nothing. */
+export async function rowCounts(ds: DataSource): Promise<Record<string, number>> {
+  const tables: { name: string }[] = await ds.query(`SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT LIKE 'sqlite_%' AND name != 'migrations' ORDER BY name`);
+  const counts: Record<string, number> = {};
+  for (const { name } of tables) {
+    const [row] = (await ds.query(`SELECT COUNT(*) AS n FROM "${name}"`)) as { n: number }[];
+    counts[name] = row!.n;
+  }
+  return counts;
+}
+
+/** The mails the fake SMTP server received for one address, oldest first. */
+export function mailsTo(ds: DataSource, address: string): Promise<MailMessage[]> {
+  return ds.getRepository(MailMessage).find({ where: { recipients: address }, order: { id: 'ASC' } });
+}
+
+/** The token of the first link to `${PUBLIC_URL}/<page>/<token>` in a mail's text; fails when there is none. */
+export function tokenFromLink(text: string, page: 'invitation' | 'reset-password'): string {
+  const escaped = PUBLIC_URL.replace(/[.*+?^${}()|[\]\\/]/g, '\\$&');
+  const match = new RegExp(`${escaped}/${page}/([A-Za-z0-9_-]+)`).exec(text);
+  if (!match) throw new Error(`No ${page} link in the mail:\n${text}`);
+  return match[1]!;
 }

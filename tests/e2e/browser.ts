@@ -51,6 +51,7 @@ export async function openBrowser(appUrl: string, opts: { phone?: boolean } = {}
 /** Saves a full-page screenshot under tests/e2e/screenshots/NAME.png. */
 export async function screenshot(page: Page, name: string): Promise<string> {
   const file = path.join(SCREENSHOTS, `${name}.png`);
+  await page.evaluate(() => document.fonts.ready.then(() => undefined));
   await page.screenshot({ path: file, fullPage: true });
   return file;
 }

@@ -1,0 +1,163 @@
+import { after, before, describe, test } from 'node:test';
+import assert from 'node:assert/strict';
+import { ROLES, type Role } from '../../shared/api/auth.js';
+import type { AccessRule } from '../../server/core/access.js';
+import { Site } from '../../server/collection/site.entity.js';
+import { listApiRoutes } from './api-routes.js';
+import { assertProblem } from './assert-problem.js';
+import { addUser, Client, mailsTo, PASSWORD, rowCounts, signedInAs, startHarness, tokenFromLink, type Harness } from './harness.js';
+
+/** What the table's requests need: tokens from real mails, ids of real rows, unique names. */
+interface Fixtures {
+  viewToken: string;
+  acceptToken: string;
+  resetToken: string;
+  patchTargetId: number;
+  messageId: number;
+  siteId: number;
+  /** A fresh number for unique e-mails and accession numbers. */
+  next(): number;
+}
+
+/** One API route: who may call it and a request that succeeds for them. */
+interface RouteCase {
+  method: 'GET' | 'POST' | 'PATCH';
+  /** The path pattern as the app mounts it. */
+  path: string;
+  access: 'public' | readonly Role[];
+  /** The status an admitted caller gets for the request below. */
+  ok: number;
+  url?: (f: Fixtures) => string;
+  body?: (f: Fixtures) => object;
+}
+
+const EVERYONE = ROLES;
+const ADMIN: readonly Role[] = ['admin'];
+
+/** Every API route (DESIGN §7 and the brief of this foundation); the first test checks the app has no others. */
+const ROUTES: readonly RouteCase[] = [
+  { method: 'GET', path: '/api/health', access: 'public', ok: 200 },
+  { method: 'POST', path: '/api/auth/login', access: 'public', ok: 200, body: () => ({ email: 'login@test.example', password: PASSWORD }) },
+  // Signing out is open to anyone, so a client whose session has already lapsed can still sign out cleanly.
+  { method: 'POST', path: '/api/auth/logout', access: 'public', ok: 204 },
+  { method: 'GET', path: '/api/auth/me', access: EVERYONE, ok: 200 },
+  { method: 'POST', path: '/api/auth/password', access: EVERYONE, ok: 204, body: () => ({ currentPassword: PASSWORD, newPassword: 'a-new-long-passphrase' }) },
+  { method: 'POST', path: '/api/auth/password-reset', access: 'public', ok: 202, body: (f) => ({ email: `someone-${f.next()}@test.example` }) },
+  { method: 'POST', path: '/api/auth/password-reset/confirm', access: 'public', ok: 204, body: (f) => ({ token: f.resetToken, password: 'a-new-long-passphrase' }) },
+  { method: 'GET', path: '/api/invitations', access: ADMIN, ok: 200 },
+  { method: 'POST', path: '/api/invitations', access: ADMIN, ok: 201, body: (f) => ({ email: `invitee-${f.next()}@test.example`, name: 'Invitee', role: 'recorder' }) },
+  { method: 'GET', path: '/api/invitations/:token', access: 'public', ok: 200, url: (f) => `/api/invitations/${f.viewToken}` },
+  { method: 'POST', path: '/api/invitations/accept', access: 'public', ok: 201, body: (f) => ({ token: f.acceptToken, password: 'a-new-long-passphrase' }) },
+  { method: 'GET', path: '/api/users', access: ADMIN, ok: 200 },
+  { method: 'POST', path: '/api/users', access: ADMIN, ok: 201, body: (f) => ({ email: `made-${f.next()}@test.example`, name: 'Made', role: 'reviewer', password: 'a-new-long-passphrase' }) },
+  { method: 'PATCH', path: '/api/users/:id', access: ADMIN, ok: 200, url: (f) => `/api/users/${f.patchTargetId}`, body: (f) => ({ name: `Renamed ${f.next()}` }) },
+  { method: 'GET', path: '/api/outbox', access: ADMIN, ok: 200 },
+  { method: 'GET', path: '/api/outbox/:id', access: ADMIN, ok: 200, url: (f) => `/api/outbox/${f.messageId}` },
+  { method: 'GET', path: '/api/audit', access: ADMIN, ok: 200 },
+  { method: 'GET', path: '/api/sites', access: EVERYONE, ok: 200 },
+  { method: 'GET', path: '/api/characters', access: EVERYONE, ok: 200 },
+  { method: 'GET', path: '/api/accessions', access: EVERYONE, ok: 200 },
+  { method: 'POST', path: '/api/accessions', access: ADMIN, ok: 201, body: (f) => ({ accessionNumber: `RT-${f.next()}`, name: 'Matrix Test', siteId: f.siteId }) },
+];
+
+function send(client: Client, route: RouteCase, f: Fixtures) {
+  const url = route.url?.(f) ?? route.path;
+  if (route.method === 'GET') return client.get(url);
+  if (route.method === 'PATCH') return client.patch(url, route.body?.(f));
+  return client.post(url, route.body?.(f));
+}
+
+/** Row counts and the user table: a refused request must change neither. */
+async function snapshot(h: Harness): Promise<string> {
+  return JSON.stringify([await rowCounts(h.ds), await h.ds.query('SELECT id, email, name, role, active, passwordHash FROM "user" ORDER BY id')]);
+}
+
+function article(word: string): string {
+  return /^[aeiou]/.test(word) ? 'an' : 'a';
+}
+
+function ruleOf(route: RouteCase): AccessRule {
+  return route.access === 'public' ? { public: true } : { public: false, roles: route.access };
+}
+
+describe('who may call each API route', () => {
+  let h: Harness;
+  let f: Fixtures;
+  const clients = new Map<Role, Client>();
+
+  before(async () => {
+    h = await startHarness({ demo: true });
+    const signedIn = await Promise.all(ROLES.map((role) => signedInAs(h, role)));
+    ROLES.forEach((role, i) => clients.set(role, signedIn[i]!));
+    const admin = clients.get('admin')!;
+    let n = 0;
+    const next = () => ++n;
+    await addUser(h.ds, 'recorder', 'login@test.example');
+    const target = await addUser(h.ds, 'recorder', 'target@test.example');
+    const forgetful = await addUser(h.ds, 'trainer', 'forgetful@test.example');
+
+    await admin.post('/api/invitations', { email: 'viewer@test.example', name: 'Viewer', role: 'trainer' }).expect(201);
+    await admin.post('/api/invitations', { email: 'accepter@test.example', name: 'Accepter', role: 'reviewer' }).expect(201);
+    const [viewMail] = await mailsTo(h.ds, 'viewer@test.example');
+    const [acceptMail] = await mailsTo(h.ds, 'accepter@test.example');
+    await (await new Client(h.app).prime()).post('/api/auth/password-reset', { email: forgetful.email }).expect(202);
+    const [resetMail] = await mailsTo(h.ds, forgetful.email);
+    assert.ok(viewMail && acceptMail && resetMail, 'the fixture mails arrived');
+
+    f = {
+      viewToken: tokenFromLink(viewMail.text, 'invitation'),
+      acceptToken: tokenFromLink(acceptMail.text, 'invitation'),
+      resetToken: tokenFromLink(resetMail.text, 'reset-password'),
+      patchTargetId: target.id,
+      messageId: viewMail.id,
+      siteId: (await h.ds.getRepository(Site).find({ take: 1 }))[0]!.id,
+      next,
+    };
+  });
+  after(() => h.close());
+
+  test('should have every mounted API route in the table, each with exactly the access rule the table gives', () => {
+    const mounted = listApiRoutes(h.app);
+    const key = (r: { method: string; path: string }) => `${r.method} ${r.path}`;
+    assert.deepEqual(mounted.map(key).sort(), ROUTES.map(key).sort());
+    for (const route of mounted) {
+      assert.equal(route.rules.length, 1, `${key(route)} carries exactly one access rule (allow() or publicRoute)`);
+      const expected = ROUTES.find((r) => key(r) === key(route))!;
+      assert.deepEqual(route.rules[0], ruleOf(expected), key(route));
+    }
+  });
+
+  for (const route of ROUTES) {
+    describe(`${route.method} ${route.path}`, () => {
+      if (route.access === 'public') {
+        test(`should answer ${route.ok} when signed out`, async () => {
+          const res = await send(await new Client(h.app).prime(), route, f);
+          assert.equal(res.status, route.ok, res.text);
+        });
+        return;
+      }
+      const allowed = route.access;
+
+      test('should answer 401 problem+json when signed out, changing nothing', async () => {
+        const before = await snapshot(h);
+        assertProblem(await send(await new Client(h.app).prime(), route, f), 401);
+        assert.equal(await snapshot(h), before);
+      });
+
+      for (const role of ROLES) {
+        if (allowed.includes(role)) {
+          test(`should let ${article(role)} ${role} in (${route.ok})`, async () => {
+            const res = await send(clients.get(role)!, route, f);
+            assert.equal(res.status, route.ok, res.text);
+          });
+        } else {
+          test(`should refuse ${article(role)} ${role} with 403 problem+json, changing nothing`, async () => {
+            const before = await snapshot(h);
+            assertProblem(await send(clients.get(role)!, route, f), 403);
+            assert.equal(await snapshot(h), before);
+          });
+        }
+      }
+    });
+  }
+});
