@@ -48,6 +48,18 @@ export async function openBrowser(appUrl: string, opts: { phone?: boolean } = {}
   };
 }
 
+/** The demo accounts' password (DESIGN §3). */
+export const DEMO_PASSWORD = 'demo-pass-2026';
+
+/** Signs in through the sign-in page and waits until the app has left it. */
+export async function signIn(page: Page, appUrl: string, email: string, password = DEMO_PASSWORD): Promise<void> {
+  await page.goto(`${appUrl}/sign-in`);
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password', { exact: true }).fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
+}
+
 /** Saves a full-page screenshot under tests/e2e/screenshots/NAME.png. */
 export async function screenshot(page: Page, name: string): Promise<string> {
   const file = path.join(SCREENSHOTS, `${name}.png`);

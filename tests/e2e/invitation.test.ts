@@ -1,6 +1,6 @@
 import assert from 'node:assert/strict';
 import { after, before, test } from 'node:test';
-import { openBrowser, screenshot, type Browser } from './browser.js';
+import { openBrowser, screenshot, signIn, type Browser } from './browser.js';
 import { startServer, type ServerProcess } from './server-process.js';
 
 let server: ServerProcess;
@@ -17,11 +17,7 @@ after(async () => {
 
 test('should let an admin invite a trainer who follows the mailed link, sets a password and is signed in', async () => {
   const admin = await browser.newPage();
-  await admin.goto(`${server.url}/sign-in`);
-  await admin.getByLabel('E-mail').fill('admin@demo.test');
-  await admin.getByLabel('Password', { exact: true }).fill('demo-pass-2026');
-  await admin.getByRole('button', { name: 'Sign in' }).click();
-  await admin.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
+  await signIn(admin, server.url, 'admin@demo.test');
 
   await admin.goto(`${server.url}/admin/users`);
   await admin.getByRole('button', { name: /Invite/ }).click();

@@ -1,12 +1,8 @@
 import assert from 'node:assert/strict';
 import { after, before, describe, test } from 'node:test';
-import type { Page } from 'playwright-core';
 import type { Role } from '../../shared/api/roles.js';
-import { openBrowser, screenshot, type Browser } from './browser.js';
+import { DEMO_PASSWORD, openBrowser, screenshot, signIn, type Browser } from './browser.js';
 import { startServer, type ServerProcess } from './server-process.js';
-
-/** The demo password (DESIGN §3). */
-const DEMO_PASSWORD = 'demo-pass-2026';
 
 /** What each role must and must not see in the side navigation (this issue's sections). */
 const EXPECTED_NAV: Record<Role, { shows: string[]; hides: string[] }> = {
@@ -15,20 +11,6 @@ const EXPECTED_NAV: Record<Role, { shows: string[]; hides: string[] }> = {
   reviewer: { shows: ['Collection', 'Account'], hides: ['Users', 'Outbox', 'Audit'] },
   recorder: { shows: ['Collection', 'Account'], hides: ['Users', 'Outbox', 'Audit'] },
 };
-
-async function signIn(page: Page, url: string, email: string, password: string): Promise<void> {
-  await page.goto(`${url}/sign-in`);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password', { exact: true }).fill(password);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
-}
-
-async function navLabels(page: Page): Promise<string[]> {
-  const nav = page.getByRole('navigation', { name: 'Sections' }).or(page.locator('mat-sidenav'));
-  await nav.first().locator('a').first().waitFor();
-  return (await nav.first().locator('a').allInnerTexts()).map((t) => t.replace(/^\S+\s*\n?/, '').trim());
-}
 
 describe('signing in as each demo role in Chromium', () => {
   let server: ServerProcess;
