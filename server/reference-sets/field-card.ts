@@ -1,0 +1,122 @@
+import PDFDocument from 'pdfkit';
+import type { HueFamily } from '../../shared/colour/colour-name.js';
+import { displayHex } from '../../shared/colour/display-hex.js';
+import { fieldChipsByFamily } from '../../shared/colour/field-groups.js';
+import type { ChipDto } from '../../shared/api/reference-set-answers.js';
+import type { LoadedSet } from './reference-sets.js';
+
+/** The caution printed on every card (DESIGN §8). */
+export const PRINT_CAUTION =
+  'Caution: printers vary; colours are approximate; re-measure a printed card with an instrument before trusting it. ' +
+  'The codes and their CIELAB values are what count: a printed swatch only stands in for them. Judge in good, even light.';
+
+/** Card geometry in PDF points (1/72 in); A4 is 595.28 × 841.89. Our own layout. */
+const LAYOUT = {
+  margin: 28,
+  /** Width of the hue-family column left of each group. */
+  familyColumn: 64,
+  /** Each chip's cell: swatch plus its code below. */
+  cell: { width: 26, height: 32 },
+  swatch: 22,
+  codeSize: 5.4,
+  /** Space between hue-family groups. */
+  groupGap: 5,
+  /** Height kept free at the foot of the page for the patches and the caution. */
+  footer: 104,
+} as const;
+
+/** Neutral grey patch: L* 50, a* = b* = 0, as sRGB (#777777). */
+const NEUTRAL_GREY = displayHex({ l: 50, a: 0, b: 0 }).hex;
+/** Outline of swatches and patches: a neutral darker than the grey patch. */
+const OUTLINE = '#5e5e5e';
+
+const cards = new WeakMap<LoadedSet, Promise<Buffer>>();
+
+/** The set's printable field card as a PDF, rendered once per set and kept. */
+export function fieldCard(set: LoadedSet): Promise<Buffer> {
+  let card = cards.get(set);
+  if (!card) {
+    card = renderFieldCard(set);
+    cards.set(set, card);
+  }
+  return card;
+}
+
+/**
+ * Renders the card: a header with the set, every field chip as a swatch with its code beneath,
+ * grouped by hue family, then a neutral grey and a white patch and the printing caution. A card
+ * that does not fit one page continues on the next.
+ */
+export function renderFieldCard(set: LoadedSet): Promise<Buffer> {
+  const { summary } = set;
+  const doc = new PDFDocument({
+    size: 'A4',
+    margin: LAYOUT.margin,
+    info: { Title: `Hueledger field card, reference set ${summary.id}`, Author: 'Hueledger', Subject: `${summary.name}: field chips with codes, a neutral grey and a white patch` },
+  });
+  const parts: Buffer[] = [];
+  doc.on('data', (chunk: Buffer) => parts.push(chunk));
+  const done = new Promise<Buffer>((resolve, reject) => {
+    doc.on('end', () => resolve(Buffer.concat(parts)));
+    doc.on('error', reject);
+  });
+  const groups = fieldChipsByFamily(set.chips);
+  let y = drawHeader(doc, set, groups.reduce((n, g) => n + g.chips.length, 0));
+  for (const group of groups) y = drawGroup(doc, group.family, group.chips, y);
+  drawFooter(doc, summary.id, y);
+  doc.end();
+  return done;
+}
+
+function drawHeader(doc: PDFKit.PDFDocument, set: LoadedSet, fieldCount: number): number {
+  const { margin } = LAYOUT;
+  const width = doc.page.width - 2 * margin;
+  const { summary } = set;
+  doc.font('Helvetica-Bold').fontSize(14).fillColor('#000000').text(`Hueledger field card · reference set ${summary.id}`, margin, margin, { width });
+  doc
+    .font('Helvetica')
+    .fontSize(8)
+    .text(
+      `${summary.name}. ${fieldCount} field chips, CIELAB ${summary.white}, ${summary.observer} observer. ` +
+        `Each field chip refines into fine chips (F-087 into F-087.001 …) in the app.`,
+      margin,
+      doc.y + 2,
+      { width },
+    );
+  return doc.y + 8;
+}
+
+function drawGroup(doc: PDFKit.PDFDocument, family: HueFamily, chips: ChipDto[], top: number): number {
+  const { margin, familyColumn, cell, swatch, codeSize, groupGap, footer } = LAYOUT;
+  const gridLeft = margin + familyColumn;
+  const perRow = Math.floor((doc.page.width - margin - gridLeft) / cell.width);
+  const rows = Math.ceil(chips.length / perRow);
+  let y = top;
+  if (y + rows * cell.height > doc.page.height - margin - footer) {
+    doc.addPage();
+    y = margin;
+  }
+  doc.font('Helvetica-Bold').fontSize(8).fillColor('#000000').text(family === 'neutral' ? 'greys' : family, margin, y + swatch / 2 - 4, { width: familyColumn - 6 });
+  chips.forEach((chip, i) => {
+    const x = gridLeft + (i % perRow) * cell.width;
+    const rowTop = y + Math.floor(i / perRow) * cell.height;
+    doc.lineWidth(0.4).rect(x, rowTop, swatch, swatch).fillAndStroke(chip.hex, OUTLINE);
+    doc.font('Helvetica').fontSize(codeSize).fillColor('#000000').text(chip.code, x - 2, rowTop + swatch + 1.5, { width: swatch + 4, align: 'center', lineBreak: false });
+  });
+  return y + rows * cell.height + groupGap;
+}
+
+function drawFooter(doc: PDFKit.PDFDocument, setId: string, gridBottom: number): void {
+  const { margin } = LAYOUT;
+  const width = doc.page.width - 2 * margin;
+  const top = Math.max(gridBottom + 6, doc.page.height - margin - LAYOUT.footer + 8);
+  const patch = 40;
+  doc.lineWidth(0.6).rect(margin, top, patch, patch).fillAndStroke(NEUTRAL_GREY, OUTLINE);
+  doc.font('Helvetica').fontSize(7).fillColor('#000000').text(`neutral grey\nL* 50, a* 0, b* 0 (${NEUTRAL_GREY})`, margin + patch + 6, top + 10, { width: 120 });
+  const whiteLeft = margin + 190;
+  doc.lineWidth(0.6).rect(whiteLeft, top, patch, patch).fillAndStroke('#ffffff', OUTLINE);
+  // fillAndStroke leaves the fill colour set to the patch's: text goes back to black.
+  doc.fillColor('#000000').text('white\nunprinted paper (#ffffff)', whiteLeft + patch + 6, top + 10, { width: 120 });
+  doc.font('Helvetica-Bold').fontSize(8).fillColor('#000000').text(PRINT_CAUTION, margin, top + patch + 10, { width });
+  doc.font('Helvetica').fontSize(6.5).fillColor('#333333').text(`Reference set ${setId}. Codes are never reused: a code always means the same CIELAB value.`, margin, doc.y + 4, { width });
+}

@@ -1,0 +1,16 @@
+import { Routes } from '@angular/router';
+
+/** The reference-set section, open to every role: match a colour, browse the chips. */
+export const REFERENCE_SET_ROUTES: Routes = [
+  { path: '', pathMatch: 'full', redirectTo: 'match' },
+  {
+    path: 'match',
+    title: 'Match a colour · Hueledger',
+    loadComponent: () => import('./pages/match-page').then((m) => m.MatchPage),
+  },
+  {
+    path: 'browse',
+    title: 'Browse chips · Hueledger',
+    loadComponent: () => import('./pages/browse-page').then((m) => m.BrowsePage),
+  },
+];
