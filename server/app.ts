@@ -16,6 +16,9 @@ import { csrfProtection } from './core/csrf.js';
 import { apiNotFound, problemHandler } from './core/problem.js';
 import type { Mailer } from './mail/mailer.js';
 import { outboxRoutes } from './mail/outbox.routes.js';
+import { photoRoutes } from './photos/photos.routes.js';
+import { referenceSetRoutes } from './reference-sets/reference-sets.routes.js';
+import { ReferenceSets } from './reference-sets/reference-sets.js';
 import { userRoutes } from './users/users.routes.js';
 import { APP_VERSION } from './version.js';
 
@@ -34,6 +37,8 @@ export interface AppOptions {
   trustProxy?: boolean | number | string;
   /** Where 5xx errors are logged. */
   logError?: (err: unknown) => void;
+  /** Data folder; uploaded photos are kept under its `photos/`. Without it the photo routes answer 503. */
+  dataDir?: string | null;
 }
 
 /** Session lifetime, renewed on activity: a working day in the field. */
@@ -46,7 +51,8 @@ export function createApp(options: AppOptions): Express {
   if (options.trustProxy !== undefined) app.set('trust proxy', options.trustProxy);
   const secure = options.secureCookies ?? false;
   const sessions = new SqliteSessionStore(options.dataSource);
-  const ctx: AppContext = { ds: options.dataSource, mailer: options.mailer, publicUrl: options.publicUrl, sessions };
+  const referenceSets = new ReferenceSets(options.dataSource);
+  const ctx: AppContext = { ds: options.dataSource, mailer: options.mailer, publicUrl: options.publicUrl, sessions, referenceSets };
   const passport = createPassport(options.dataSource);
 
   app.use(helmet({ contentSecurityPolicy: { directives: cspDirectives() }, hsts: secure }));
@@ -76,6 +82,8 @@ export function createApp(options: AppOptions): Express {
   api.use('/outbox', outboxRoutes(ctx));
   api.use('/audit', auditRoutes(ctx));
   api.use('/', collectionRoutes(ctx));
+  api.use('/', referenceSetRoutes(ctx));
+  api.use('/photos', photoRoutes(ctx, options.dataDir ?? null));
   api.use(apiNotFound);
   app.use('/api', api);
 

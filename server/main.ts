@@ -8,6 +8,7 @@ import { readConfig } from './config.js';
 import { openDatabase } from './data-source.js';
 import { seedDemo } from './demo/seed-demo.js';
 import { startMailer } from './mail/mailer.js';
+import { loadReferenceSets } from './reference-sets/load-reference-sets.js';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 
@@ -23,6 +24,7 @@ async function main(): Promise<void> {
   const config = readConfig();
   mkdirSync(config.dataDir, { recursive: true });
   const ds = await openDatabase(path.join(config.dataDir, 'hueledger.sqlite'));
+  await loadReferenceSets(ds);
   await seedCharacterCatalogue(ds);
   if (config.demo && (await seedDemo(ds))) console.log('Loaded the invented demo scenario (password demo-pass-2026).');
   const mailer = await startMailer(ds, config.smtpUrl, config.mailFrom);
@@ -32,6 +34,7 @@ async function main(): Promise<void> {
     sessionSecret: sessionSecret(config.dataDir, config.sessionSecret),
     publicUrl: config.publicUrl,
     clientDir: path.join(root, 'dist/client/browser'),
+    dataDir: config.dataDir,
   });
   const server = app.listen(config.port, () => {
     console.log(`Hueledger on http://localhost:${config.port} (data in ${config.dataDir}; mail ${mailer.catching ? 'caught in the outbox' : 'sent by SMTP'})`);

@@ -1,6 +1,7 @@
 import type { DataSource } from 'typeorm';
 import type { SqliteSessionStore } from '../auth/session-store.js';
 import type { Mailer } from '../mail/mailer.js';
+import type { ReferenceSets } from '../reference-sets/reference-sets.js';
 
 /** What every router is built with. */
 export interface AppContext {
@@ -9,4 +10,6 @@ export interface AppContext {
   /** Base URL for links in mails, without a trailing slash. */
   publicUrl: string;
   sessions: SqliteSessionStore;
+  /** The stored reference sets, each with its index built once; photos, readings and calibration match through it. */
+  referenceSets: ReferenceSets;
 }

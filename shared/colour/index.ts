@@ -12,4 +12,5 @@ export * from './matcher.js';
 export * from './verdict.js';
 export * from './display-hex.js';
 export * from './colour-name.js';
+export * from './field-groups.js';
 export * from './reference-set.js';

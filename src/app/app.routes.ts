@@ -37,6 +37,15 @@ export const routes: Routes = [
         loadComponent: () => import('./features/collection/pages/collection-page').then((m) => m.CollectionPage),
       },
       {
+        path: 'record',
+        canActivate: [roleGuard('recorder', 'admin', 'trainer')],
+        loadChildren: () => import('./features/record/record.routes').then((m) => m.RECORD_ROUTES),
+      },
+      {
+        path: 'reference-set',
+        loadChildren: () => import('./features/reference-set/reference-set.routes').then((m) => m.REFERENCE_SET_ROUTES),
+      },
+      {
         path: 'account',
         title: 'Account · Hueledger',
         loadComponent: () => import('./features/account/pages/account-page').then((m) => m.AccountPage),

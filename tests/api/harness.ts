@@ -11,6 +11,7 @@ import { hashPassword } from '../../server/auth/passwords.js';
 import { User } from '../../server/auth/user.entity.js';
 import { seedCharacterCatalogue } from '../../server/collection/seed-catalogue.js';
 import { openDatabase } from '../../server/data-source.js';
+import { loadReferenceSets } from '../../server/reference-sets/load-reference-sets.js';
 import { seedDemo } from '../../server/demo/seed-demo.js';
 import { startMailer, type Mailer } from '../../server/mail/mailer.js';
 
@@ -46,9 +47,10 @@ export async function startHarness(opts: HarnessOptions = {}): Promise<Harness> 
   const dbFile = path.join(dir, 'hueledger.sqlite');
   const ds = await openDatabase(dbFile);
   await seedCharacterCatalogue(ds);
+  await loadReferenceSets(ds, { log: () => {} });
   if (opts.demo) await seedDemo(ds);
   const mailer = await startMailer(ds, null, 'Hueledger <no-reply@hueledger.invalid>');
-  const app = createApp({ dataSource: ds, mailer, sessionSecret: TEST_SECRET, publicUrl: PUBLIC_URL, logError: opts.logError ?? (() => {}) });
+  const app = createApp({ dataSource: ds, mailer, sessionSecret: TEST_SECRET, publicUrl: PUBLIC_URL, logError: opts.logError ?? (() => {}), dataDir: dir });
   const shutdown = async () => {
     await mailer.close();
     await ds.destroy();

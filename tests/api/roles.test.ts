@@ -6,6 +6,7 @@ import { Site } from '../../server/collection/site.entity.js';
 import { listApiRoutes } from './api-routes.js';
 import { assertProblem } from './assert-problem.js';
 import { addUser, Client, mailsTo, PASSWORD, rowCounts, signedInAs, startHarness, tokenFromLink, type Harness } from './harness.js';
+import { fromRaw, paintScene, uploadPhoto } from './photo-fixtures.js';
 
 /** What the table's requests need: tokens from real mails, ids of real rows, unique names. */
 interface Fixtures {
@@ -15,6 +16,9 @@ interface Fixtures {
   patchTargetId: number;
   messageId: number;
   siteId: number;
+  /** A stored photo, and new photo bytes for each upload. */
+  photoId: number;
+  nextPhoto(): Buffer;
   /** A fresh number for unique e-mails and accession numbers. */
   next(): number;
 }
@@ -29,6 +33,8 @@ interface RouteCase {
   ok: number;
   url?: (f: Fixtures) => string;
   body?: (f: Fixtures) => object;
+  /** A multipart upload in the field `photo` instead of a JSON body. */
+  upload?: (f: Fixtures) => Buffer;
 }
 
 const EVERYONE = ROLES;
@@ -58,10 +64,20 @@ const ROUTES: readonly RouteCase[] = [
   { method: 'GET', path: '/api/characters', access: EVERYONE, ok: 200 },
   { method: 'GET', path: '/api/accessions', access: EVERYONE, ok: 200 },
   { method: 'POST', path: '/api/accessions', access: ADMIN, ok: 201, body: (f) => ({ accessionNumber: `RT-${f.next()}`, name: 'Matrix Test', siteId: f.siteId }) },
+  { method: 'GET', path: '/api/reference-sets', access: EVERYONE, ok: 200 },
+  { method: 'GET', path: '/api/reference-sets/:id/chips', access: EVERYONE, ok: 200, url: () => '/api/reference-sets/v1/chips' },
+  { method: 'GET', path: '/api/reference-sets/:id/card.pdf', access: EVERYONE, ok: 200, url: () => '/api/reference-sets/v1/card.pdf' },
+  { method: 'POST', path: '/api/match', access: EVERYONE, ok: 200, body: () => ({ hex: '#7b3f6e' }) },
+  { method: 'POST', path: '/api/photos', access: ['recorder', 'trainer', 'admin'], ok: 201, upload: (f) => f.nextPhoto() },
+  { method: 'GET', path: '/api/photos/:id', access: EVERYONE, ok: 200, url: (f) => `/api/photos/${f.photoId}` },
+  { method: 'GET', path: '/api/photos/:id/image', access: EVERYONE, ok: 200, url: (f) => `/api/photos/${f.photoId}/image` },
+  { method: 'GET', path: '/api/photos/:id/thumb', access: EVERYONE, ok: 200, url: (f) => `/api/photos/${f.photoId}/thumb` },
+  { method: 'POST', path: '/api/photos/:id/sample', access: EVERYONE, ok: 200, url: (f) => `/api/photos/${f.photoId}/sample`, body: () => ({ region: { shape: 'rect', x: 2, y: 2, width: 8, height: 8 } }) },
 ];
 
 function send(client: Client, route: RouteCase, f: Fixtures) {
   const url = route.url?.(f) ?? route.path;
+  if (route.upload) return uploadPhoto(client, route.upload(f), 'leaf.png', 'image/png');
   if (route.method === 'GET') return client.get(url);
   if (route.method === 'PATCH') return client.patch(url, route.body?.(f));
   return client.post(url, route.body?.(f));
@@ -103,6 +119,8 @@ describe('who may call each API route', () => {
     await (await new Client(h.app).prime()).post('/api/auth/password-reset', { email: forgetful.email }).expect(202);
     const [resetMail] = await mailsTo(h.ds, forgetful.email);
     assert.ok(viewMail && acceptMail && resetMail, 'the fixture mails arrived');
+    // One photo for the viewing routes, and one each for the roles that may upload.
+    const photos = await Promise.all([1, 2, 3, 4, 5, 6].map((n) => fromRaw(paintScene(16, 16, [40 * n, 90, 150], []), 16, 16).png().toBuffer()));
 
     f = {
       viewToken: tokenFromLink(viewMail.text, 'invitation'),
@@ -111,6 +129,8 @@ describe('who may call each API route', () => {
       patchTargetId: target.id,
       messageId: viewMail.id,
       siteId: (await h.ds.getRepository(Site).find({ take: 1 }))[0]!.id,
+      photoId: (await uploadPhoto(admin, photos.pop()!, 'leaf.png', 'image/png').expect(201)).body.id,
+      nextPhoto: () => photos.pop()!,
       next,
     };
   });

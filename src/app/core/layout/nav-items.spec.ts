@@ -4,11 +4,20 @@ const paths = (items: NavItem[]) => items.map((item) => item.path);
 
 describe('nav items', () => {
   it('should show an admin every built section', () => {
-    expect(paths(navItemsFor('admin'))).toEqual(['/collection', '/admin/users', '/admin/outbox', '/admin/audit', '/account']);
+    expect(paths(navItemsFor('admin'))).toEqual(['/record/photo', '/collection', '/reference-set', '/admin/users', '/admin/outbox', '/admin/audit', '/account']);
   });
 
   it('should hide the admin section from a recorder', () => {
-    expect(paths(navItemsFor('recorder'))).toEqual(['/collection', '/account']);
+    expect(paths(navItemsFor('recorder'))).toEqual(['/record/photo', '/collection', '/reference-set', '/account']);
+  });
+
+  it('should show Record to those who take readings, not to a reviewer', () => {
+    expect(paths(navItemsFor('trainer'))).toContain('/record/photo');
+    expect(paths(navItemsFor('reviewer'))).not.toContain('/record/photo');
+  });
+
+  it('should show the reference set to every role', () => {
+    for (const role of ['admin', 'trainer', 'reviewer', 'recorder'] as const) expect(paths(navItemsFor(role))).toContain('/reference-set');
   });
 
   it('should show nothing when nobody is signed in', () => {

@@ -27,7 +27,9 @@ export interface NavSection {
  * app.routes.ts with the same roles.
  */
 export const NAV_ITEMS: readonly NavItem[] = [
+  { label: 'Record', icon: 'photo_camera', path: '/record/photo', roles: ['recorder', 'admin', 'trainer'] },
   { label: 'Collection', icon: 'potted_plant', path: '/collection', roles: EVERYONE },
+  { label: 'Reference set', icon: 'palette', path: '/reference-set', roles: EVERYONE },
   { label: 'Users', icon: 'group', path: '/admin/users', roles: ['admin'], group: 'Admin' },
   { label: 'Outbox', icon: 'outgoing_mail', path: '/admin/outbox', roles: ['admin'], group: 'Admin' },
   { label: 'Audit', icon: 'history', path: '/admin/audit', roles: ['admin'], group: 'Admin' },

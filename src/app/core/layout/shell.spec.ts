@@ -40,6 +40,6 @@ describe('Shell', () => {
 
   it('should not list the admin pages for a recorder', async () => {
     const element = await renderFor('recorder');
-    expect(navLabels(element)).toEqual(['Collection', 'Account']);
+    expect(navLabels(element)).toEqual(['Record', 'Collection', 'Reference set', 'Account']);
   });
 });

@@ -1,0 +1,226 @@
+import { ChangeDetectionStrategy, Component, DestroyRef, computed, inject, signal, viewChild } from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
+import { MatButtonToggleModule } from '@angular/material/button-toggle';
+import { MatIconModule } from '@angular/material/icon';
+import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { MatProgressSpinnerModule } from '@angular/material/progress-spinner';
+import { MatSliderModule } from '@angular/material/slider';
+import { ActivatedRoute, Router } from '@angular/router';
+import type { Subscription } from 'rxjs';
+
+import type { PhotoDto, PhotoSample } from '../../../../../shared/api/photo-answers.js';
+import type { Region } from '../../../../../shared/photo/region.js';
+import { ApiError } from '../../../core/http/api-error';
+import { PhotoCanvas } from '../components/photo-canvas';
+import { RecordCautions } from '../components/record-cautions';
+import { SampleResult } from '../components/sample-result';
+import { previewRegion, type Pixels } from '../data/photo-preview';
+import { PhotosApi } from '../data/photos-api';
+import { defaultRadius, describeRegion, type Tool } from '../data/region-drawing';
+
+/** What the next stroke marks. */
+type Marking = 'tissue' | 'card';
+
+/** The drawing tools as offered, with words under each icon. */
+const TOOLS: readonly { tool: Tool; icon: string; label: string; hint: string }[] = [
+  { tool: 'rect', icon: 'crop_square', label: 'Box', hint: 'Drag a box over the tissue.' },
+  { tool: 'ellipse', icon: 'circle', label: 'Oval', hint: 'Drag an oval over the tissue.' },
+  { tool: 'polygon', icon: 'polyline', label: 'Outline', hint: 'Tap points around the tissue, then Finish outline.' },
+  { tool: 'point', icon: 'adjust', label: 'Spot', hint: 'Tap the tissue; set the spot size below.' },
+  { tool: 'move', icon: 'pan_tool', label: 'Move', hint: 'Drag to move around the zoomed photo.' },
+];
+
+/**
+ * Record → Photo: take or choose a photo, see it upright, draw the region on the tissue (and
+ * optionally on a grey card), see a live preview at once and then the server's reading.
+ */
+@Component({
+  selector: 'hl-photo-page',
+  imports: [
+    MatButtonModule,
+    MatButtonToggleModule,
+    MatIconModule,
+    MatProgressBarModule,
+    MatProgressSpinnerModule,
+    MatSliderModule,
+    PhotoCanvas,
+    RecordCautions,
+    SampleResult,
+  ],
+  templateUrl: './photo-page.html',
+  styleUrl: './photo-page.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class PhotoPage {
+  private readonly api = inject(PhotosApi);
+  private readonly router = inject(Router);
+  private readonly route = inject(ActivatedRoute);
+  private readonly canvas = viewChild(PhotoCanvas);
+
+  protected readonly tools = TOOLS;
+  protected readonly photo = signal<PhotoDto | null>(null);
+  protected readonly upload = signal<{ name: string; fraction: number | null } | null>(null);
+  protected readonly problem = signal<string | null>(null);
+  protected readonly tool = signal<Tool>('rect');
+  protected readonly marking = signal<Marking>('tissue');
+  protected readonly tissue = signal<Region | null>(null);
+  protected readonly card = signal<Region | null>(null);
+  protected readonly draft = signal<Region | null>(null);
+  protected readonly outlinePoints = signal(0);
+  protected readonly radius = signal(10);
+  protected readonly sample = signal<PhotoSample | null>(null);
+  protected readonly sampling = signal(false);
+
+  private readonly pixels = signal<Pixels | null>(null);
+  private uploadRun: Subscription | null = null;
+  private sampleRun: Subscription | null = null;
+
+  protected readonly size = computed(() => {
+    const p = this.photo();
+    return p ? { width: p.width, height: p.height } : { width: 1, height: 1 };
+  });
+  protected readonly hint = computed(() => {
+    if (this.marking() === 'card') return 'Draw on the grey or white card in the same photo.';
+    const hint = TOOLS.find((t) => t.tool === this.tool())!.hint;
+    return this.tissue() && this.tool() !== 'move' ? `${hint} Drawing again replaces the region.` : hint;
+  });
+  protected readonly radiusRange = computed(() => {
+    const min = Math.min(this.size().width, this.size().height);
+    return { min: 2, max: Math.max(4, Math.round(min / 8)) };
+  });
+  /** The approximate reading of what is drawn now, computed in the browser from the display copy. */
+  protected readonly preview = computed(() => {
+    const pixels = this.pixels();
+    const photo = this.photo();
+    const drawing = this.draft();
+    const tissue = this.marking() === 'tissue' ? (drawing ?? this.tissue()) : this.tissue();
+    const card = this.marking() === 'card' ? (drawing ?? this.card()) : this.card();
+    if (!pixels || !photo || !tissue) return null;
+    return previewRegion(pixels, photo.width, tissue, card);
+  });
+  protected readonly showPreview = computed(() => this.preview() !== null && (this.draft() !== null || this.sampling() || this.sample() === null));
+  protected readonly describe = describeRegion;
+
+  constructor() {
+    inject(DestroyRef).onDestroy(() => {
+      this.uploadRun?.unsubscribe();
+      this.sampleRun?.unsubscribe();
+    });
+    const id = Number(this.route.snapshot.queryParamMap.get('photo'));
+    if (Number.isSafeInteger(id) && id > 0) this.reopen(id);
+  }
+
+  protected photoChosen(event: Event): void {
+    const inputElement = event.target as HTMLInputElement;
+    const file = inputElement.files?.[0];
+    inputElement.value = '';
+    if (file) this.startUpload(file);
+  }
+
+  protected cancelUpload(): void {
+    this.uploadRun?.unsubscribe();
+    this.upload.set(null);
+  }
+
+  protected chooseTool(tool: Tool): void {
+    this.tool.set(tool);
+  }
+
+  protected chooseMarking(marking: Marking): void {
+    this.marking.set(marking);
+    if (this.tool() === 'move') this.tool.set('rect');
+  }
+
+  protected regionDrawn(region: Region): void {
+    if (this.marking() === 'card') {
+      this.card.set(region);
+      this.marking.set('tissue');
+    } else {
+      this.tissue.set(region);
+    }
+    this.measure();
+  }
+
+  protected removeCard(): void {
+    this.card.set(null);
+    this.measure();
+  }
+
+  protected finishOutline(): void {
+    this.canvas()?.finishOutline();
+  }
+
+  protected undoOutlinePoint(): void {
+    this.canvas()?.undoOutlinePoint();
+  }
+
+  /** Reads the display copy into pixels for the preview; without a 2D canvas (tests) there is no preview. */
+  protected imageLoaded(image: HTMLImageElement): void {
+    const canvas = document.createElement('canvas');
+    canvas.width = image.naturalWidth;
+    canvas.height = image.naturalHeight;
+    const context = canvas.getContext('2d', { willReadFrequently: true });
+    if (!context || !canvas.width) return;
+    context.drawImage(image, 0, 0);
+    this.pixels.set(context.getImageData(0, 0, canvas.width, canvas.height));
+  }
+
+  /** Asks the server for the reading of the tissue region (balanced on the card when one is marked). */
+  protected measure(): void {
+    const photo = this.photo();
+    const region = this.tissue();
+    if (!photo || !region) return;
+    const card = this.card();
+    this.sampleRun?.unsubscribe();
+    this.sampling.set(true);
+    this.problem.set(null);
+    this.sampleRun = this.api.sample(photo.id, card ? { region, neutral: { region: card } } : { region }).subscribe({
+      next: (sample) => {
+        this.sample.set(sample);
+        this.sampling.set(false);
+      },
+      error: (error: unknown) => {
+        this.sample.set(null);
+        this.sampling.set(false);
+        this.problem.set(messageOf(error));
+      },
+    });
+  }
+
+  private startUpload(file: File): void {
+    this.uploadRun?.unsubscribe();
+    this.problem.set(null);
+    this.upload.set({ name: file.name, fraction: 0 });
+    this.uploadRun = this.api.upload(file, file.name || 'photo.jpg').subscribe({
+      next: (progress) => {
+        if (progress.kind === 'progress') this.upload.set({ name: file.name, fraction: progress.fraction });
+        else this.show(progress.photo);
+      },
+      error: (error: unknown) => {
+        this.upload.set(null);
+        this.problem.set(messageOf(error));
+      },
+    });
+  }
+
+  private reopen(id: number): void {
+    this.api.get(id).subscribe({ next: (photo) => this.show(photo), error: () => this.problem.set('That photo could not be opened; take or choose it again.') });
+  }
+
+  private show(photo: PhotoDto): void {
+    this.upload.set(null);
+    this.photo.set(photo);
+    this.pixels.set(null);
+    this.tissue.set(null);
+    this.card.set(null);
+    this.sample.set(null);
+    this.marking.set('tissue');
+    this.radius.set(defaultRadius(photo));
+    void this.router.navigate([], { queryParams: { photo: photo.id }, replaceUrl: true });
+  }
+}
+
+function messageOf(error: unknown): string {
+  if (error instanceof ApiError) return error.detail ? `${error.title}: ${error.detail}` : error.title;
+  return 'Something went wrong. Try again.';
+}
