@@ -56,8 +56,11 @@ export function createApp(options: AppOptions): Express {
   const passport = createPassport(options.dataSource);
 
   app.use(helmet({ contentSecurityPolicy: { directives: cspDirectives() }, hsts: secure }));
-  app.use(express.json({ limit: '1mb' }));
+  // Body parsing, sessions and passport only where they are needed: the built client's files are
+  // served without a session lookup or a rolling-session write per asset.
+  app.use('/api', express.json({ limit: '1mb' }));
   app.use(
+    '/api',
     session({
       name: SESSION_COOKIE,
       secret: options.sessionSecret,
@@ -68,8 +71,7 @@ export function createApp(options: AppOptions): Express {
       cookie: { httpOnly: true, sameSite: 'lax', secure, maxAge: SESSION_MAX_AGE_MS },
     }),
   );
-  app.use(passport.initialize());
-  app.use(passport.session());
+  app.use('/api', passport.initialize(), passport.session());
 
   const api = express.Router();
   api.use(csrfProtection(options.sessionSecret, secure));
