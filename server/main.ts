@@ -9,13 +9,14 @@ import { openDatabase } from './data-source.js';
 import { seedDemo } from './demo/seed-demo.js';
 import { startMailer } from './mail/mailer.js';
 import { loadReferenceSets } from './reference-sets/load-reference-sets.js';
+import { DATA_FOLDER, databaseFile } from './operations/data-folder.js';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 
 /** The session secret: SESSION_SECRET, else one generated once into the data folder. */
 function sessionSecret(dataDir: string, fromEnv: string | null): string {
   if (fromEnv) return fromEnv;
-  const file = path.join(dataDir, 'session-secret');
+  const file = path.join(dataDir, DATA_FOLDER.secret);
   if (!existsSync(file)) writeFileSync(file, randomBytes(48).toString('base64url'), { mode: 0o600 });
   return readFileSync(file, 'utf8').trim();
 }
@@ -23,7 +24,7 @@ function sessionSecret(dataDir: string, fromEnv: string | null): string {
 async function main(): Promise<void> {
   const config = readConfig();
   mkdirSync(config.dataDir, { recursive: true });
-  const ds = await openDatabase(path.join(config.dataDir, 'hueledger.sqlite'));
+  const ds = await openDatabase(databaseFile(config.dataDir));
   await loadReferenceSets(ds);
   await seedCharacterCatalogue(ds);
   if (config.demo && (await seedDemo(ds))) console.log('Loaded the invented demo scenario (password demo-pass-2026).');
