@@ -73,6 +73,20 @@ describe('uploading a photo', () => {
     assert.equal((res.body as PhotoDto).mime, 'image/png');
   });
 
+  test('should ignore the name a file arrives with: path tricks write nothing outside the photo store', async () => {
+    const outside = () => filesUnder(h.dir).filter((f) => !f.startsWith(`photos${path.sep}`)).sort();
+    const before = outside();
+    for (const name of ['../../../escaped.jpg', '..\\..\\escaped.jpg', '/etc/escaped.jpg', '%2e%2e%2fescaped.jpg', 'CON.jpg', `${'x'.repeat(300)}.jpg`]) {
+      const res = await uploadPhoto(recorder(), await fresh(), name, 'image/png');
+      assert.equal(res.status, 201, `${JSON.stringify(name)}: ${res.text}`);
+    }
+    // A NUL inside the name breaks the multipart header itself: refused as a broken body.
+    assertProblem(await uploadPhoto(recorder(), await fresh(), 'a\u0000b.jpg', 'image/png'), 400);
+    assert.deepEqual(outside(), before);
+    // Every stored file has one of the store's own names inside a folder named by the content's SHA-256.
+    for (const f of filesUnder(photosDir)) assert.match(f.split(path.sep).join('/'), /^[0-9a-f]{2}\/[0-9a-f]{64}\/(original\.(jpg|png|webp|heif|heic|avif|tif)|upright\.tif|display\.jpg|thumb\.jpg)$/);
+  });
+
   test('should name the embedded profile of a Display P3 photo', async () => {
     const bytes = await fromRaw(paintScene(40, 40, [200, 40, 120], []), 40, 40).withIccProfile('p3').jpeg().toBuffer();
     const photo = (await uploadPhoto(recorder(), bytes)).body as PhotoDto;
