@@ -25,11 +25,11 @@ describe('AppErrorHandler', () => {
     expect(describeError(new TypeError('x is undefined')).message).toBe('Something went wrong. Reload the page and try again.');
   });
 
-  it('should open a snack bar with the description', () => {
+  it('should open a snack bar with the description', async () => {
     TestBed.configureTestingModule({ providers: [AppErrorHandler] });
     const open = vi.spyOn(TestBed.inject(MatSnackBar), 'openFromComponent').mockReturnValue(undefined as never);
     vi.spyOn(console, 'error').mockImplementation(() => undefined);
     TestBed.inject(AppErrorHandler).handleError(new ApiError(429, 'Too many attempts.'));
-    expect(open).toHaveBeenCalledWith(ErrorSnack, expect.objectContaining({ data: { message: 'Too many attempts.', fields: [] } }));
+    await vi.waitFor(() => expect(open).toHaveBeenCalledWith(ErrorSnack, expect.objectContaining({ data: { message: 'Too many attempts.', fields: [] } })));
   });
 });

@@ -1,8 +1,7 @@
 import { ErrorHandler, Injectable, Injector, inject } from '@angular/core';
-import { MatSnackBar } from '@angular/material/snack-bar';
 
 import { ApiError } from './api-error';
-import { ErrorSnack, ErrorSnackData } from './error-snack';
+import type { ErrorSnackData } from './error-snack';
 
 /** How long an error stays on screen; long enough to read with wet hands. */
 const ERROR_SNACK_MS = 8000;
@@ -15,7 +14,15 @@ export class AppErrorHandler implements ErrorHandler {
 
   handleError(error: unknown): void {
     console.error(error);
-    const data = describeError(error);
+    void this.show(describeError(error));
+  }
+
+  /**
+   * The snack bar (with the CDK overlay under it) loads on the first error rather than with the
+   * first screen: it is most of what Material would otherwise add to the initial download.
+   */
+  private async show(data: ErrorSnackData): Promise<void> {
+    const [{ MatSnackBar }, { ErrorSnack }] = await Promise.all([import('@angular/material/snack-bar'), import('./error-snack')]);
     this.injector.get(MatSnackBar).openFromComponent(ErrorSnack, {
       data,
       duration: ERROR_SNACK_MS,
