@@ -9,6 +9,7 @@ import { authRoutes } from './auth/auth.routes.js';
 import { invitationRoutes } from './auth/invitations.routes.js';
 import { createPassport } from './auth/passport.js';
 import { SESSION_COOKIE, SqliteSessionStore } from './auth/session-store.js';
+import { calibrationRoutes } from './calibration/calibration.routes.js';
 import { collectionRoutes } from './collection/collection.routes.js';
 import { publicRoute } from './core/access.js';
 import type { AppContext } from './core/context.js';
@@ -86,6 +87,7 @@ export function createApp(options: AppOptions): Express {
   api.use('/', collectionRoutes(ctx));
   api.use('/', referenceSetRoutes(ctx));
   api.use('/photos', photoRoutes(ctx, options.dataDir ?? null));
+  api.use('/calibration', calibrationRoutes(ctx, options.dataDir ?? null));
   api.use(apiNotFound);
   app.use('/api', api);
 

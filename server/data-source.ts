@@ -5,6 +5,8 @@ import { Invitation } from './auth/invitation.entity.js';
 import { PasswordReset } from './auth/password-reset.entity.js';
 import { SessionRecord } from './auth/session.entity.js';
 import { User } from './auth/user.entity.js';
+import { CalibrationResponse, CalibrationSession, Participant, Specimen } from './calibration/calibration-session.entity.js';
+import { Certification, ColourVisionScreening } from './calibration/certification.entity.js';
 import { Accession, Plant } from './collection/accession.entity.js';
 import { Character } from './collection/character.entity.js';
 import { Season, Site } from './collection/site.entity.js';
@@ -13,13 +15,14 @@ import { Photo } from './photos/photo.entity.js';
 import { Initial1764633600000 } from './migrations/1764633600000-initial.js';
 import { ReferenceSets1764720000000 } from './migrations/1764720000000-reference-sets.js';
 import { Photos1764730000000 } from './migrations/1764730000000-photos.js';
+import { Calibration1764820000000 } from './migrations/1764820000000-calibration.js';
 import { Chip, ReferenceSet } from './reference-sets/reference-set.entity.js';
 
 /** Every entity, listed explicitly (no globs: the same list works under tsx, tsc and the CLI). */
-export const ENTITIES = [User, Invitation, PasswordReset, SessionRecord, AuditEvent, MailMessage, Site, Season, Accession, Plant, Character, ReferenceSet, Chip, Photo];
+export const ENTITIES = [User, Invitation, PasswordReset, SessionRecord, AuditEvent, MailMessage, Site, Season, Accession, Plant, Character, ReferenceSet, Chip, Photo, CalibrationSession, Specimen, Participant, CalibrationResponse, Certification, ColourVisionScreening];
 
 /** Every migration in order; they run at start-up. */
-export const MIGRATIONS = [Initial1764633600000, ReferenceSets1764720000000, Photos1764730000000];
+export const MIGRATIONS = [Initial1764633600000, ReferenceSets1764720000000, Photos1764730000000, Calibration1764820000000];
 
 /**
  * The one data source: better-sqlite3, WAL, foreign keys on (TypeORM's driver sets

@@ -4,6 +4,7 @@ import { hashPassword } from '../auth/passwords.js';
 import { User } from '../auth/user.entity.js';
 import { Accession, Plant } from '../collection/accession.entity.js';
 import { Season, Site } from '../collection/site.entity.js';
+import { seedDemoCalibration } from './demo-calibration.js';
 import { DEMO_ACCESSIONS, DEMO_PASSWORD, DEMO_PEOPLE, DEMO_SITES } from './demo-scenario.js';
 
 /**
@@ -31,6 +32,7 @@ export async function seedDemo(ds: DataSource): Promise<boolean> {
         await m.insert(Plant, { accession, site: sites.get(p.siteCode ?? siteCode)!, label: p.label, plantedOn: p.plantedOn });
       }
     }
+    await seedDemoCalibration(m, passwordHash);
     await recordAudit(m, SYSTEM, 'demo.loaded', null, { sites: DEMO_SITES.length, accessions: DEMO_ACCESSIONS.length, users: DEMO_PEOPLE.length });
   });
   return true;

@@ -19,6 +19,13 @@ interface Fixtures {
   /** A stored photo, and new photo bytes for each upload. */
   photoId: number;
   nextPhoto(): Buffer;
+  /** An open, unrestricted calibration session with one specimen; a closed one; a user to invite. */
+  calibrationSessionId: number;
+  calibrationSpecimenId: number;
+  closedCalibrationSessionId: number;
+  calibrationInviteeId: number;
+  /** A fresh open session for each close request. */
+  nextClosableSession(): number;
   /** A fresh number for unique e-mails and accession numbers. */
   next(): number;
 }
@@ -39,6 +46,7 @@ interface RouteCase {
 
 const EVERYONE = ROLES;
 const ADMIN: readonly Role[] = ['admin'];
+const TRAINERS: readonly Role[] = ['trainer', 'admin'];
 
 /** Every API route (DESIGN §7 and the brief of this foundation); the first test checks the app has no others. */
 const ROUTES: readonly RouteCase[] = [
@@ -73,7 +81,32 @@ const ROUTES: readonly RouteCase[] = [
   { method: 'GET', path: '/api/photos/:id/image', access: EVERYONE, ok: 200, url: (f) => `/api/photos/${f.photoId}/image` },
   { method: 'GET', path: '/api/photos/:id/thumb', access: EVERYONE, ok: 200, url: (f) => `/api/photos/${f.photoId}/thumb` },
   { method: 'POST', path: '/api/photos/:id/sample', access: EVERYONE, ok: 200, url: (f) => `/api/photos/${f.photoId}/sample`, body: () => ({ region: { shape: 'rect', x: 2, y: 2, width: 8, height: 8 } }) },
+  { method: 'GET', path: '/api/calibration/sessions', access: EVERYONE, ok: 200 },
+  { method: 'POST', path: '/api/calibration/sessions', access: TRAINERS, ok: 201, body: (f) => ({ title: `Matrix session ${f.next()}` }) },
+  { method: 'GET', path: '/api/calibration/sessions/:id', access: EVERYONE, ok: 200, url: (f) => `/api/calibration/sessions/${f.calibrationSessionId}` },
+  { method: 'POST', path: '/api/calibration/sessions/:id/specimens', access: TRAINERS, ok: 201, url: (f) => `/api/calibration/sessions/${f.calibrationSessionId}/specimens`, body: (f) => ({ label: `Specimen ${f.next()}`, chipCode: 'F-092' }) },
+  { method: 'POST', path: '/api/calibration/sessions/:id/participants', access: TRAINERS, ok: 200, url: (f) => `/api/calibration/sessions/${f.calibrationSessionId}/participants`, body: (f) => ({ userIds: [f.calibrationInviteeId] }) },
+  { method: 'POST', path: '/api/calibration/sessions/:id/responses', access: EVERYONE, ok: 201, url: (f) => `/api/calibration/sessions/${f.calibrationSessionId}/responses`, body: (f) => ({ specimenId: f.calibrationSpecimenId, chipCode: 'F-092.076' }) },
+  { method: 'POST', path: '/api/calibration/sessions/:id/close', access: TRAINERS, ok: 200, url: (f) => `/api/calibration/sessions/${f.nextClosableSession()}/close` },
+  { method: 'GET', path: '/api/calibration/sessions/:id/results', access: TRAINERS, ok: 200, url: (f) => `/api/calibration/sessions/${f.calibrationSessionId}/results` },
+  { method: 'GET', path: '/api/calibration/sessions/:id/results/me', access: EVERYONE, ok: 200, url: (f) => `/api/calibration/sessions/${f.closedCalibrationSessionId}/results/me` },
+  { method: 'GET', path: '/api/calibration/certifications', access: EVERYONE, ok: 200 },
+  { method: 'GET', path: '/api/calibration/screenings', access: EVERYONE, ok: 200 },
+  { method: 'POST', path: '/api/calibration/screenings', access: EVERYONE, ok: 201, body: () => ({ screenedOn: '2026-01-05', method: 'other', result: 'normal' }) },
 ];
+
+/** Calibration sessions for the table: an open one with a specimen, a closed one, and a pool to close. */
+async function calibrationFixtures(admin: Client, inviteeId: number) {
+  const create = async (title: string) => (await admin.post('/api/calibration/sessions', { title }).expect(201)).body.id as number;
+  const calibrationSessionId = await create('Matrix open session');
+  const specimen = await admin.post(`/api/calibration/sessions/${calibrationSessionId}/specimens`, { label: 'Matrix specimen', lab: [50, -16, 13] }).expect(201);
+  const closedCalibrationSessionId = await create('Matrix closed session');
+  await admin.post(`/api/calibration/sessions/${closedCalibrationSessionId}/close`).expect(200);
+  // One per request of the close row (six roles' requests at most, refused ones included).
+  const closable: number[] = [];
+  for (let i = 0; i < 6; i++) closable.push(await create(`Matrix closable ${i}`));
+  return { calibrationSessionId, calibrationSpecimenId: specimen.body.id as number, closedCalibrationSessionId, calibrationInviteeId: inviteeId, nextClosableSession: () => closable.pop()! };
+}
 
 function send(client: Client, route: RouteCase, f: Fixtures) {
   const url = route.url?.(f) ?? route.path;
@@ -131,6 +164,7 @@ describe('who may call each API route', () => {
       siteId: (await h.ds.getRepository(Site).find({ take: 1 }))[0]!.id,
       photoId: (await uploadPhoto(admin, photos.pop()!, 'leaf.png', 'image/png').expect(201)).body.id,
       nextPhoto: () => photos.pop()!,
+      ...(await calibrationFixtures(admin, target.id)),
       next,
     };
   });
