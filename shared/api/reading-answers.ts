@@ -1,0 +1,222 @@
+// The readings API's types and constants (DESIGN §4, §7), without zod so the client may import
+// them; the request schemas are in readings.ts.
+import type { LabTuple } from '../colour/lab.js';
+import type { Region } from '../photo/region.js';
+import type { LchTuple, MatchBetween, MatchedChip } from './reference-set-answers.js';
+import type { SampleCorrection } from './photo-answers.js';
+
+/** How a reading's colour was taken: a photo region, an instrument's L*a*b*, a chip picked by eye, an on-screen swatch. */
+export const READING_METHODS = ['photo', 'instrument', 'chip', 'swatch'] as const;
+export type ReadingMethod = (typeof READING_METHODS)[number];
+
+/** The light the tissue was read under. */
+export const LIGHTS = ['direct-sun', 'open-shade', 'overcast', 'indoor-lamp', 'viewing-booth'] as const;
+export type Light = (typeof LIGHTS)[number];
+
+/** Plain labels of the lights, our own words. */
+export const LIGHT_LABELS: Readonly<Record<Light, string>> = {
+  'direct-sun': 'Direct sun',
+  'open-shade': 'Open shade',
+  overcast: 'Overcast',
+  'indoor-lamp': 'Indoor lamp',
+  'viewing-booth': 'Viewing booth',
+};
+
+/** Review states: every reading starts submitted; a reviewer approves, flags or asks for a re-read. Superseded is `supersededById !== null`, not a status. */
+export const READING_STATUSES = ['submitted', 'approved', 'flagged', 'reread-requested'] as const;
+export type ReadingStatus = (typeof READING_STATUSES)[number];
+
+/** Seconds after cutting past which corm flesh and sap are warned about browning (our own threshold, REFERENCES §6; not a standard). */
+export const CUT_SECONDS_WARN = 60;
+export const CUT_SECONDS_MAX = 86_400;
+export const READINGS_PAGE_SIZE_MAX = 100;
+export const READINGS_PAGE_SIZE_DEFAULT = 25;
+export const READING_NOTES_MAX = 2000;
+export const LEAF_POSITION_MAX = 80;
+export const SUPERSEDE_REASON_MAX = 500;
+/** An observation time may run ahead of the server's clock by this much (phones drift). */
+export const OBSERVED_AT_FUTURE_SLACK_MS = 5 * 60 * 1000;
+
+/** The photo region a photo reading samples; the server samples it itself (authoritative). */
+export interface ReadingPhotoSource {
+  photoId: number;
+  region: Region;
+  neutral?: { region: Region; lab?: LabTuple };
+}
+
+/** `POST /api/readings` body. Which colour field is needed depends on `method`. */
+export interface CreateReadingRequest {
+  accessionId: number;
+  plantId?: number | null;
+  characterId: number;
+  /** Default: the plant's site, else the accession's. */
+  siteId?: number | null;
+  /** ISO 8601 with offset; default now. */
+  observedAt?: string;
+  method: ReadingMethod;
+  /** instrument: the instrument's CIELAB D65. */
+  lab?: LabTuple;
+  /** swatch: the on-screen colour chosen. */
+  hex?: string;
+  /** chip: the chip picked by eye (its CIELAB is the reading). */
+  chipCode?: string;
+  /** photo and instrument: the chip also picked by eye, to compare later. */
+  eyeChipCode?: string | null;
+  /** photo: the region sampled. */
+  photo?: ReadingPhotoSource;
+  /** instrument: its make or name, for provenance. */
+  instrument?: string | null;
+  light: Light;
+  secondsSinceCut?: number | null;
+  leafPosition?: string | null;
+  notes?: string | null;
+}
+
+/** `POST /api/readings/:id/supersede` body: the corrected reading and why. */
+export interface SupersedeReadingRequest extends CreateReadingRequest {
+  reason: string;
+}
+
+/** A reading as listed. */
+export interface ReadingDto {
+  id: number;
+  accessionId: number;
+  accessionNumber: string;
+  accessionName: string;
+  plantId: number | null;
+  plantLabel: string | null;
+  characterId: number;
+  characterCode: string;
+  characterLabel: string;
+  siteId: number;
+  siteCode: string;
+  observerId: number;
+  observerName: string;
+  /** ISO 8601 (UTC). */
+  observedAt: string;
+  method: ReadingMethod;
+  lab: LabTuple;
+  lch: LchTuple;
+  hex: string;
+  inGamut: boolean;
+  /** The nearest chip of the set current when the reading was taken. */
+  bestChip: string;
+  bestChipName: string;
+  bestChipHex: string;
+  deltaE00: number;
+  verdict: MatchedChip['verdict'];
+  eyeChipCode: string | null;
+  /** ΔE00 from the reading to the eye-picked chip. */
+  eyeDeltaE00: number | null;
+  setId: string;
+  season: string | null;
+  seasonYear: number | null;
+  plantAgeMonths: number | null;
+  light: Light;
+  secondsSinceCut: number | null;
+  leafPosition: string | null;
+  notes: string | null;
+  status: ReadingStatus;
+  supersedesId: number | null;
+  supersededById: number | null;
+  /** ISO 8601. */
+  createdAt: string;
+}
+
+/** Where a reading's colour came from. Fields that do not apply to its method are null. */
+export interface ReadingProvenance {
+  photoId: number | null;
+  photoWidth: number | null;
+  photoHeight: number | null;
+  region: Region | null;
+  neutralRegion: Region | null;
+  pixelCount: number | null;
+  pixelsDropped: number | null;
+  spreadDeltaE00: number | null;
+  uniform: boolean | null;
+  correction: SampleCorrection | null;
+  pipeline: string | null;
+  instrument: string | null;
+  /** chip: the chip picked; swatch: the hex tapped. */
+  source: string | null;
+}
+
+/** One version in a reading's supersede chain. */
+export interface ReadingVersion {
+  id: number;
+  observedAt: string;
+  createdAt: string;
+  /** Why this version replaced the one before it (null for the first). */
+  reason: string | null;
+  /** Whether this is the version in force (not superseded). */
+  current: boolean;
+}
+
+/** One audit event about a reading. */
+export interface ReadingHistoryEvent {
+  id: number;
+  at: string;
+  actorName: string | null;
+  action: string;
+  detail: Record<string, unknown> | null;
+}
+
+/** `GET /api/readings/:id`. */
+export interface ReadingDetail extends ReadingDto {
+  matches: MatchedChip[];
+  between: MatchBetween | null;
+  provenance: ReadingProvenance;
+  /** The whole supersede chain, oldest first (this reading included). */
+  versions: ReadingVersion[];
+  history: ReadingHistoryEvent[];
+}
+
+export const READING_SORTS = ['observedAt', 'accession', 'character', 'site', 'observer', 'deltaE00', 'status', 'method'] as const;
+export type ReadingSort = (typeof READING_SORTS)[number];
+
+/** `GET /api/readings` (and the exports) query. */
+export interface ReadingListQuery {
+  accessionId?: number;
+  characterId?: number;
+  siteId?: number;
+  season?: string;
+  seasonYear?: number;
+  observerId?: number;
+  method?: ReadingMethod;
+  status?: ReadingStatus;
+  /** YYYY-MM-DD, inclusive, UTC. */
+  from?: string;
+  to?: string;
+  includeSuperseded?: boolean;
+  sort?: ReadingSort;
+  dir?: 'asc' | 'desc';
+  page?: number;
+  pageSize?: number;
+}
+
+export interface ReadingList {
+  items: ReadingDto[];
+  total: number;
+}
+
+/** The columns of the instrument-reading CSV import, in this order; accessionNumber … light are required, the rest optional. */
+export const IMPORT_COLUMNS = ['accessionNumber', 'characterCode', 'observedAt', 'L', 'a', 'b', 'light', 'plantLabel', 'siteCode', 'instrument', 'eyeChipCode', 'secondsSinceCut', 'leafPosition', 'notes'] as const;
+export const IMPORT_ROWS_MAX = 5000;
+
+/** One row of an import's report (row 1 is the header, so data start at row 2). */
+export interface ImportRowReport {
+  row: number;
+  ok: boolean;
+  errors: { field: string; message: string }[];
+}
+
+/** `POST /api/readings/import`: 201 with every row imported, or 422 problem+json whose `rows` lists every bad row (nothing imported). */
+export interface ImportReport {
+  imported: number;
+  readingIds: number[];
+  rows: ImportRowReport[];
+}
+
+export function readingUrl(id: number): string {
+  return `/readings/${id}`;
+}
