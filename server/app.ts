@@ -11,6 +11,7 @@ import { createPassport } from './auth/passport.js';
 import { SESSION_COOKIE, SqliteSessionStore } from './auth/session-store.js';
 import { calibrationRoutes } from './calibration/calibration.routes.js';
 import { collectionRoutes } from './collection/collection.routes.js';
+import { descriptorRoutes } from './collection/descriptors.routes.js';
 import { publicRoute } from './core/access.js';
 import type { AppContext } from './core/context.js';
 import { csrfProtection } from './core/csrf.js';
@@ -85,6 +86,7 @@ export function createApp(options: AppOptions): Express {
   api.use('/outbox', outboxRoutes(ctx));
   api.use('/audit', auditRoutes(ctx));
   api.use('/', collectionRoutes(ctx));
+  api.use('/', descriptorRoutes(ctx));
   api.use('/', referenceSetRoutes(ctx));
   api.use('/photos', photoRoutes(ctx, options.dataDir ?? null));
   api.use('/calibration', calibrationRoutes(ctx, options.dataDir ?? null));

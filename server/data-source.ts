@@ -9,20 +9,23 @@ import { CalibrationResponse, CalibrationSession, Participant, Specimen } from '
 import { Certification, ColourVisionScreening } from './calibration/certification.entity.js';
 import { Accession, Plant } from './collection/accession.entity.js';
 import { Character } from './collection/character.entity.js';
+import { Descriptor } from './collection/descriptor.entity.js';
+import { Observation } from './collection/observation.entity.js';
 import { Season, Site } from './collection/site.entity.js';
 import { MailMessage } from './mail/mail-message.entity.js';
 import { Photo } from './photos/photo.entity.js';
 import { Initial1764633600000 } from './migrations/1764633600000-initial.js';
 import { ReferenceSets1764720000000 } from './migrations/1764720000000-reference-sets.js';
 import { Photos1764730000000 } from './migrations/1764730000000-photos.js';
+import { CollectionManagement1764810000000 } from './migrations/1764810000000-collection-management.js';
 import { Calibration1764820000000 } from './migrations/1764820000000-calibration.js';
 import { Chip, ReferenceSet } from './reference-sets/reference-set.entity.js';
 
 /** Every entity, listed explicitly (no globs: the same list works under tsx, tsc and the CLI). */
-export const ENTITIES = [User, Invitation, PasswordReset, SessionRecord, AuditEvent, MailMessage, Site, Season, Accession, Plant, Character, ReferenceSet, Chip, Photo, CalibrationSession, Specimen, Participant, CalibrationResponse, Certification, ColourVisionScreening];
+export const ENTITIES = [User, Invitation, PasswordReset, SessionRecord, AuditEvent, MailMessage, Site, Season, Accession, Plant, Character, ReferenceSet, Chip, Photo, Descriptor, Observation, CalibrationSession, Specimen, Participant, CalibrationResponse, Certification, ColourVisionScreening];
 
 /** Every migration in order; they run at start-up. */
-export const MIGRATIONS = [Initial1764633600000, ReferenceSets1764720000000, Photos1764730000000, Calibration1764820000000];
+export const MIGRATIONS = [Initial1764633600000, ReferenceSets1764720000000, Photos1764730000000, CollectionManagement1764810000000, Calibration1764820000000];
 
 /**
  * The one data source: better-sqlite3, WAL, foreign keys on (TypeORM's driver sets

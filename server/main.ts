@@ -3,7 +3,7 @@ import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { createApp } from './app.js';
-import { seedCharacterCatalogue } from './collection/seed-catalogue.js';
+import { seedCharacterCatalogue, seedDescriptorCatalogue } from './collection/seed-catalogue.js';
 import { readConfig } from './config.js';
 import { openDatabase } from './data-source.js';
 import { seedDemo } from './demo/seed-demo.js';
@@ -27,6 +27,7 @@ async function main(): Promise<void> {
   const ds = await openDatabase(databaseFile(config.dataDir));
   await loadReferenceSets(ds);
   await seedCharacterCatalogue(ds);
+  await seedDescriptorCatalogue(ds);
   if (config.demo && (await seedDemo(ds))) console.log('Loaded the invented demo scenario (password demo-pass-2026).');
   const mailer = await startMailer(ds, config.smtpUrl, config.mailFrom);
   const app = createApp({

@@ -12,8 +12,8 @@
  * is our own threshold. Raw tissue and sap carry calcium oxalate raphides (Paull & Chen 2015,
  * University of Hawaii CTAHR VC-5), hence the caution on every corm, cormel and sap character.
  *
- * Codes are our own, lowercase and dotted; once seeded they never change, because readings and
- * observations refer to them.
+ * Codes are our own, lowercase and dotted; once seeded they never change, because readings refer
+ * to them. Non-colour descriptors (lengths, masses, counts, shapes) are in descriptor-catalogue.ts.
  */
 import type { Organ } from '../../shared/api/collection.js';
 
@@ -45,10 +45,6 @@ const SAP_WITHIN_A_MINUTE = 'within about a minute of the cut';
 
 function colour(code: string, organ: Organ, label: string, howToRead: string, caution: string | null = null): CharacterSeed {
   return { code, organ, label, howToRead, caution, colour: true };
-}
-
-function descriptor(code: string, organ: Organ, label: string, howToRead: string, caution: string | null = null): CharacterSeed {
-  return { code, organ, label, howToRead, caution, colour: false };
 }
 
 const LEAF_CHARACTERS: readonly CharacterSeed[] = [
@@ -135,25 +131,6 @@ const ROOT_AND_FLOWER_CHARACTERS: readonly CharacterSeed[] = [
     `Where the plant flowers, use a spathe that has just opened. Read the spadix inside it at mid-length, without breaking the spathe. ${SHADE}`),
 ];
 
-/*
- * ORGANS has no whole-plant entry, so plant height is filed under the leaf, the part it is
- * measured to, and the sucker count under the corm, the part the suckers grow from.
- */
-const DESCRIPTORS: readonly CharacterSeed[] = [
-  descriptor('plant.height', 'leaf', 'Plant height (cm)',
-    'At full vegetative development (about 4–6 months after planting), measure from the soil surface to the highest point of the leaves, without straightening them.'),
-  descriptor('petiole.length', 'petiole', 'Petiole length (cm)',
-    `Use the petiole of ${LEAF}. Measure from its base at the corm to where it joins the blade.`),
-  descriptor('leaf.blade.ratio', 'leaf', 'Leaf blade length/width ratio (no unit)',
-    `Use ${LEAF}. Measure the blade length from the tip to the end of the lobes and the width at the widest point, both in the same unit, and enter length divided by width.`),
-  descriptor('corm.suckers', 'corm', 'Number of suckers (count)',
-    'At full vegetative development (about 4–6 months after planting), count the side shoots growing from the base of the plant.',
-    RAW_TISSUE_CAUTION),
-  descriptor('corm.weight', 'corm', 'Corm weight (g)',
-    'At harvest, wash the main corm, cut off the roots, leaf bases and cormels, and weigh it fresh.',
-    RAW_TISSUE_CAUTION),
-];
-
 /** The catalogue seeded into a new database; the admin may add more characters later. */
 export const CHARACTER_CATALOGUE: readonly CharacterSeed[] = [
   ...LEAF_CHARACTERS,
@@ -163,5 +140,4 @@ export const CHARACTER_CATALOGUE: readonly CharacterSeed[] = [
   ...CORM_CHARACTERS,
   ...CORMEL_CHARACTERS,
   ...ROOT_AND_FLOWER_CHARACTERS,
-  ...DESCRIPTORS,
 ];

@@ -1,5 +1,5 @@
 import { Column, Entity, PrimaryGeneratedColumn } from 'typeorm';
-import type { Character as CharacterDto, Organ } from '../../shared/api/collection.js';
+import { DEFAULT_DRIFT_THRESHOLD, type Character as CharacterDto, type Organ } from '../../shared/api/collection-answers.js';
 
 /** What is read: an organ and its exact part, with how to read it and any caution. */
 @Entity('character')
@@ -14,8 +14,11 @@ export class Character {
   @Column('boolean', { default: true }) active: boolean;
   /** Catalogue order (organ by organ, from the top of the plant down). */
   @Column('integer', { default: 0 }) sortOrder: number;
+  /** ΔE00 above which a season-to-season difference counts as drift (Paravina et al. 2015 acceptability threshold by default). */
+  @Column('real', { default: DEFAULT_DRIFT_THRESHOLD }) driftThreshold: number;
 }
 
+/** The API shape of a character. */
 export function toCharacterDto(c: Character): CharacterDto {
-  return { id: c.id, code: c.code, organ: c.organ, label: c.label, howToRead: c.howToRead, caution: c.caution, colour: c.colour, active: c.active };
+  return { id: c.id, code: c.code, organ: c.organ, label: c.label, howToRead: c.howToRead, caution: c.caution, colour: c.colour, active: c.active, driftThreshold: c.driftThreshold };
 }

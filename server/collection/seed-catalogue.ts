@@ -2,10 +2,13 @@ import type { DataSource } from 'typeorm';
 import { recordAudit, SYSTEM } from '../audit/audit.js';
 import { CHARACTER_CATALOGUE } from './character-catalogue.js';
 import { Character } from './character.entity.js';
+import { DESCRIPTOR_CATALOGUE } from './descriptor-catalogue.js';
+import { Descriptor } from './descriptor.entity.js';
 
 /**
- * Adds every catalogue character whose code is not in the database yet (admins' own characters
- * and edits are left alone). Runs at every start; returns how many were added.
+ * Adds every catalogue character whose code is not in the database yet. Rows already stored are
+ * never touched, so an admin's edits to a seeded character (label, how to read it, caution,
+ * active, drift threshold) survive every restart. Runs at every start; returns how many were added.
  */
 export async function seedCharacterCatalogue(ds: DataSource): Promise<number> {
   return ds.transaction(async (m) => {
@@ -14,6 +17,22 @@ export async function seedCharacterCatalogue(ds: DataSource): Promise<number> {
     if (missing.length) {
       await m.insert(Character, missing);
       await recordAudit(m, SYSTEM, 'catalogue.seeded', null, { added: missing.map((c) => c.code) });
+    }
+    return missing.length;
+  });
+}
+
+/**
+ * Adds every catalogue descriptor whose code is not in the database yet, leaving stored rows
+ * (and so admins' edits) alone, like `seedCharacterCatalogue`. Runs at every start.
+ */
+export async function seedDescriptorCatalogue(ds: DataSource): Promise<number> {
+  return ds.transaction(async (m) => {
+    const existing = new Set((await m.find(Descriptor, { select: { code: true } })).map((d) => d.code));
+    const missing = DESCRIPTOR_CATALOGUE.map((d, i) => ({ ...d, sortOrder: (i + 1) * 10, active: true })).filter((d) => !existing.has(d.code));
+    if (missing.length) {
+      await m.insert(Descriptor, missing);
+      await recordAudit(m, SYSTEM, 'descriptors.seeded', null, { added: missing.map((d) => d.code) });
     }
     return missing.length;
   });

@@ -5,6 +5,7 @@ import { User } from '../auth/user.entity.js';
 import { Accession, Plant } from '../collection/accession.entity.js';
 import { Season, Site } from '../collection/site.entity.js';
 import { seedDemoCalibration } from './demo-calibration.js';
+import { seedDemoObservations } from './demo-observations.js';
 import { DEMO_ACCESSIONS, DEMO_PASSWORD, DEMO_PEOPLE, DEMO_SITES } from './demo-scenario.js';
 
 /**
@@ -33,6 +34,7 @@ export async function seedDemo(ds: DataSource): Promise<boolean> {
       }
     }
     await seedDemoCalibration(m, passwordHash);
+    await seedDemoObservations(m);
     await recordAudit(m, SYSTEM, 'demo.loaded', null, { sites: DEMO_SITES.length, accessions: DEMO_ACCESSIONS.length, users: DEMO_PEOPLE.length });
   });
   return true;

@@ -9,7 +9,7 @@ import { MailMessage } from '../../server/mail/mail-message.entity.js';
 import { createApp } from '../../server/app.js';
 import { hashPassword } from '../../server/auth/passwords.js';
 import { User } from '../../server/auth/user.entity.js';
-import { seedCharacterCatalogue } from '../../server/collection/seed-catalogue.js';
+import { seedCharacterCatalogue, seedDescriptorCatalogue } from '../../server/collection/seed-catalogue.js';
 import { openDatabase } from '../../server/data-source.js';
 import { loadReferenceSets } from '../../server/reference-sets/load-reference-sets.js';
 import { seedDemo } from '../../server/demo/seed-demo.js';
@@ -47,6 +47,7 @@ export async function startHarness(opts: HarnessOptions = {}): Promise<Harness> 
   const dbFile = path.join(dir, 'hueledger.sqlite');
   const ds = await openDatabase(dbFile);
   await seedCharacterCatalogue(ds);
+  await seedDescriptorCatalogue(ds);
   await loadReferenceSets(ds, { log: () => {} });
   if (opts.demo) await seedDemo(ds);
   const mailer = await startMailer(ds, null, 'Hueledger <no-reply@hueledger.invalid>');
@@ -120,6 +121,9 @@ export class Client {
   }
   patch(url: string, body?: object) {
     return this.agent.patch(url).set('X-XSRF-TOKEN', this.csrf).send(body ?? {});
+  }
+  put(url: string, body?: object) {
+    return this.agent.put(url).set('X-XSRF-TOKEN', this.csrf).send(body ?? {});
   }
   delete(url: string) {
     return this.agent.delete(url).set('X-XSRF-TOKEN', this.csrf);

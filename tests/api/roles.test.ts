@@ -28,17 +28,25 @@ interface Fixtures {
   nextClosableSession(): number;
   /** A fresh number for unique e-mails and accession numbers. */
   next(): number;
+  /** Collection management: a demo accession and plant, a character, a length descriptor. */
+  accessionId: number;
+  plantId: number;
+  characterId: number;
+  descriptorId: number;
+  /** A current observation entered by the role (recorders and trainers correct only their own). */
+  observationBy(role?: Role): number;
 }
 
 /** One API route: who may call it and a request that succeeds for them. */
 interface RouteCase {
-  method: 'GET' | 'POST' | 'PATCH';
+  method: 'GET' | 'POST' | 'PATCH' | 'PUT';
   /** The path pattern as the app mounts it. */
   path: string;
   access: 'public' | readonly Role[];
   /** The status an admitted caller gets for the request below. */
   ok: number;
-  url?: (f: Fixtures) => string;
+  /** The URL; `role` is the caller's, for fixtures that must belong to them. */
+  url?: (f: Fixtures, role?: Role) => string;
   body?: (f: Fixtures) => object;
   /** A multipart upload in the field `photo` instead of a JSON body. */
   upload?: (f: Fixtures) => Buffer;
@@ -46,6 +54,7 @@ interface RouteCase {
 
 const EVERYONE = ROLES;
 const ADMIN: readonly Role[] = ['admin'];
+const OBSERVERS: readonly Role[] = ['recorder', 'trainer', 'admin'];
 const TRAINERS: readonly Role[] = ['trainer', 'admin'];
 
 /** Every API route (DESIGN §7 and the brief of this foundation); the first test checks the app has no others. */
@@ -72,6 +81,23 @@ const ROUTES: readonly RouteCase[] = [
   { method: 'GET', path: '/api/characters', access: EVERYONE, ok: 200 },
   { method: 'GET', path: '/api/accessions', access: EVERYONE, ok: 200 },
   { method: 'POST', path: '/api/accessions', access: ADMIN, ok: 201, body: (f) => ({ accessionNumber: `RT-${f.next()}`, name: 'Matrix Test', siteId: f.siteId }) },
+  { method: 'POST', path: '/api/sites', access: ADMIN, ok: 201, body: (f) => ({ code: `RT${f.next()}`, name: 'Matrix Plot', timezone: 'Pacific/Fiji', seasons: [{ name: 'All year', start: '01-01', end: '12-31' }] }) },
+  { method: 'PATCH', path: '/api/sites/:id', access: ADMIN, ok: 200, url: (f) => `/api/sites/${f.siteId}`, body: (f) => ({ name: `Renamed plot ${f.next()}` }) },
+  { method: 'PUT', path: '/api/sites/:id/seasons', access: ADMIN, ok: 200, url: (f) => `/api/sites/${f.siteId}/seasons`, body: () => ({ seasons: [{ name: 'Wet', start: '11-01', end: '04-30' }, { name: 'Dry', start: '05-01', end: '10-31' }] }) },
+  { method: 'POST', path: '/api/characters', access: ADMIN, ok: 201, body: (f) => ({ code: `matrix.test${f.next()}`, organ: 'leaf', label: 'Matrix character', howToRead: 'Read it the way the matrix test says.' }) },
+  { method: 'PATCH', path: '/api/characters/:id', access: ADMIN, ok: 200, url: (f) => `/api/characters/${f.characterId}`, body: (f) => ({ driftThreshold: 1 + f.next() / 100 }) },
+  { method: 'GET', path: '/api/accessions/mcpd.csv', access: EVERYONE, ok: 200 },
+  { method: 'GET', path: '/api/accessions/:id', access: EVERYONE, ok: 200, url: (f) => `/api/accessions/${f.accessionId}` },
+  { method: 'PATCH', path: '/api/accessions/:id', access: ADMIN, ok: 200, url: (f) => `/api/accessions/${f.accessionId}`, body: (f) => ({ remarks: `Matrix remark ${f.next()}` }) },
+  { method: 'POST', path: '/api/accessions/:id/plants', access: ADMIN, ok: 201, url: (f) => `/api/accessions/${f.accessionId}/plants`, body: (f) => ({ label: `RT${f.next()}`, plantedOn: '2025-06-01' }) },
+  { method: 'PATCH', path: '/api/plants/:id', access: ADMIN, ok: 200, url: (f) => `/api/plants/${f.plantId}`, body: (f) => ({ plantedOn: `2025-01-${String(10 + (f.next() % 18)).padStart(2, '0')}` }) },
+  { method: 'GET', path: '/api/accessions/:id/descriptors', access: EVERYONE, ok: 200, url: (f) => `/api/accessions/${f.accessionId}/descriptors` },
+  { method: 'GET', path: '/api/descriptors', access: EVERYONE, ok: 200 },
+  { method: 'POST', path: '/api/descriptors', access: ADMIN, ok: 201, body: (f) => ({ code: `matrix.length${f.next()}`, label: 'Matrix length', object: 'matrix part', kind: 'length', howToMeasure: 'Measure it the way the matrix test says.' }) },
+  { method: 'PATCH', path: '/api/descriptors/:id', access: ADMIN, ok: 200, url: (f) => `/api/descriptors/${f.descriptorId}`, body: (f) => ({ object: `matrix part ${f.next()}` }) },
+  { method: 'GET', path: '/api/observations', access: EVERYONE, ok: 200 },
+  { method: 'POST', path: '/api/observations', access: OBSERVERS, ok: 201, body: (f) => ({ accessionId: f.accessionId, plantId: f.plantId, descriptorId: f.descriptorId, value: 40, unit: 'in' }) },
+  { method: 'POST', path: '/api/observations/:id/supersede', access: OBSERVERS, ok: 201, url: (f, role) => `/api/observations/${f.observationBy(role)}/supersede`, body: () => ({ value: 101.6, unit: 'cm' }) },
   { method: 'GET', path: '/api/reference-sets', access: EVERYONE, ok: 200 },
   { method: 'GET', path: '/api/reference-sets/:id/chips', access: EVERYONE, ok: 200, url: () => '/api/reference-sets/v1/chips' },
   { method: 'GET', path: '/api/reference-sets/:id/card.pdf', access: EVERYONE, ok: 200, url: () => '/api/reference-sets/v1/card.pdf' },
@@ -108,11 +134,26 @@ async function calibrationFixtures(admin: Client, inviteeId: number) {
   return { calibrationSessionId, calibrationSpecimenId: specimen.body.id as number, closedCalibrationSessionId, calibrationInviteeId: inviteeId, nextClosableSession: () => closable.pop()! };
 }
 
-function send(client: Client, route: RouteCase, f: Fixtures) {
-  const url = route.url?.(f) ?? route.path;
+/** Ids for the collection-management rows, and one observation of each observing role to correct. */
+async function collectionFixtures(clients: Map<Role, Client>): Promise<Pick<Fixtures, 'accessionId' | 'plantId' | 'characterId' | 'descriptorId' | 'observationBy'>> {
+  const admin = clients.get('admin')!;
+  const accession = (await admin.get('/api/accessions').expect(200)).body[0] as { id: number; plants: { id: number }[] };
+  const characterId = ((await admin.get('/api/characters').expect(200)).body[0] as { id: number }).id;
+  const descriptorId = ((await admin.get('/api/descriptors').expect(200)).body as { id: number; code: string }[]).find((d) => d.code === 'petiole.length')!.id;
+  const own = new Map<Role, number>();
+  for (const role of OBSERVERS) {
+    const res = await clients.get(role)!.post('/api/observations', { accessionId: accession.id, plantId: accession.plants[0]!.id, descriptorId, value: 4, unit: 'in' }).expect(201);
+    own.set(role, res.body.id as number);
+  }
+  return { accessionId: accession.id, plantId: accession.plants[0]!.id, characterId, descriptorId, observationBy: (role) => own.get(role ?? 'admin') ?? own.get('admin')! };
+}
+
+function send(client: Client, route: RouteCase, f: Fixtures, role?: Role) {
+  const url = route.url?.(f, role) ?? route.path;
   if (route.upload) return uploadPhoto(client, route.upload(f), 'leaf.png', 'image/png');
   if (route.method === 'GET') return client.get(url);
   if (route.method === 'PATCH') return client.patch(url, route.body?.(f));
+  if (route.method === 'PUT') return client.put(url, route.body?.(f));
   return client.post(url, route.body?.(f));
 }
 
@@ -166,6 +207,7 @@ describe('who may call each API route', () => {
       nextPhoto: () => photos.pop()!,
       ...(await calibrationFixtures(admin, target.id)),
       next,
+      ...(await collectionFixtures(clients)),
     };
   });
   after(() => h.close());
@@ -201,7 +243,7 @@ describe('who may call each API route', () => {
       for (const role of ROLES) {
         if (allowed.includes(role)) {
           test(`should let ${article(role)} ${role} in (${route.ok})`, async () => {
-            const res = await send(clients.get(role)!, route, f);
+            const res = await send(clients.get(role)!, route, f, role);
             assert.equal(res.status, route.ok, res.text);
           });
         } else {
