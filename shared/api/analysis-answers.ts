@@ -1,0 +1,94 @@
+// Answers of the drift and site-comparison routes (issue 6; DESIGN §7 drift contract), without zod
+// so the client may import them; the query schemas are in analysis.ts.
+import type { LabTuple } from '../colour/lab.js';
+import type { LchTuple } from './reference-set-answers.js';
+
+/** One season group: a season of one season-year (superseded readings left out). */
+export interface DriftGroup {
+  season: string;
+  seasonYear: number;
+  n: number;
+  meanLab: LabTuple;
+  meanLch: LchTuple;
+  meanHex: string;
+  /** Mean ΔE00 of the group's readings from its CIELAB mean. */
+  spreadDeltaE00: number;
+  /** ISO 8601. */
+  firstObservedAt: string;
+  lastObservedAt: string;
+}
+
+export const COMPARISON_KINDS = ['consecutive', 'same-season'] as const;
+export type ComparisonKind = (typeof COMPARISON_KINDS)[number];
+
+export interface GroupKey {
+  season: string;
+  seasonYear: number;
+}
+
+/** Between two groups: consecutive in time, or the same season a year apart. */
+export interface DriftComparison {
+  from: GroupKey;
+  to: GroupKey;
+  kind: ComparisonKind;
+  /** ΔE00 between the two groups' CIELAB means. */
+  deltaE00: number;
+  /** Permutation test of that ΔE00 (seeded; exact for small groups, else random). */
+  pValue: number;
+  test: 'exact' | 'random';
+  permutations: number;
+  /** ΔE00 ≥ threshold, p < alpha, and both groups have at least minGroupSize readings. */
+  drift: boolean;
+  /** Why it is or is not drift, in plain words. */
+  reason: string;
+}
+
+/** One reading as a point on the charts. */
+export interface DriftPoint {
+  readingId: number;
+  season: string | null;
+  seasonYear: number | null;
+  observedAt: string;
+  lab: LabTuple;
+  lch: LchTuple;
+  hex: string;
+}
+
+/** `GET /api/analysis/drift?accessionId=&characterId=[&siteId=]`. */
+export interface DriftAnswer {
+  accessionId: number;
+  characterId: number;
+  siteId: number | null;
+  groups: DriftGroup[];
+  comparisons: DriftComparison[];
+  points: DriftPoint[];
+  /** Readings outside every season of their site's scheme (not grouped). */
+  unseasoned: number;
+  /** The character's threshold (admins set it; default 1.8, Paravina et al. 2015), alpha and minimum group size. */
+  threshold: number;
+  alpha: number;
+  minGroupSize: number;
+}
+
+/** One site's readings of an accession and character. */
+export interface SiteGroup {
+  siteId: number;
+  siteCode: string;
+  siteName: string;
+  n: number;
+  meanLab: LabTuple;
+  meanHex: string;
+  spreadDeltaE00: number;
+}
+
+/** `GET /api/analysis/sites?accessionId=&characterId=`: per-site groups and the ΔE00 between every pair of site means. */
+export interface SiteComparisonAnswer {
+  accessionId: number;
+  characterId: number;
+  sites: SiteGroup[];
+  /** deltaE00[i][j]: ΔE00 between the means of sites[i] and sites[j] (0 on the diagonal). */
+  deltaE00: number[][];
+  /** pValue[i][j]: permutation test of that difference (1 on the diagonal). */
+  pValue: number[][];
+  threshold: number;
+}
