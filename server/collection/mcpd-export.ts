@@ -1,4 +1,5 @@
 import { stringify } from 'csv-stringify/sync';
+import { spreadsheetSafeRow } from '../core/spreadsheet-safe.js';
 import type { DataSource } from 'typeorm';
 import { MCPD_FIELDS, type McpdField } from '../../shared/api/collection-answers.js';
 import { Accession } from './accession.entity.js';
@@ -47,5 +48,5 @@ export function toMcpdRow(a: Accession): Record<McpdField, string> {
 /** Every accession as MCPD passport CSV: a header of field names, CRLF line ends (RFC 4180), quotes where needed. */
 export async function mcpdCsv(ds: DataSource): Promise<string> {
   const accessions = await ds.getRepository(Accession).find({ relations: { site: true }, order: { accessionNumber: 'ASC' } });
-  return stringify(accessions.map(toMcpdRow), { header: true, columns: [...MCPD_FIELDS], record_delimiter: 'windows' });
+  return stringify(accessions.map((a) => spreadsheetSafeRow(toMcpdRow(a))), { header: true, columns: [...MCPD_FIELDS], record_delimiter: 'windows' });
 }

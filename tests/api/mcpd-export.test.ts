@@ -35,6 +35,7 @@ describe('GET /api/accessions/mcpd.csv', () => {
       donorName: 'Ottoline Brake',
       remarks: 'Café-grown; ñame-like corm',
     }).expect(201);
+    await admin.post('/api/accessions', { accessionNumber: 'MC-0002', name: '=HYPERLINK("https://example.invalid","open")', siteId: site.id, remarks: '@SUM(1+1)' }).expect(201);
     const res = await reviewer.get('/api/accessions/mcpd.csv').expect(200);
     text = res.text;
     assert.match(String(res.headers['content-type']), /^text\/csv; charset=utf-8/);
@@ -77,6 +78,13 @@ describe('GET /api/accessions/mcpd.csv', () => {
     assert.equal(row['DECLONGITUDE'], '177.9877');
     assert.equal(row['ELEVATION'], '13');
     assert.equal(row['LATITUDE'], '', 'the DMS forms stay blank');
+  });
+
+  test('should make text that would start a spreadsheet formula inert, but leave negative coordinates as numbers (OWASP CSV injection)', () => {
+    const row = rows.find((r) => r['ACCENUMB'] === 'MC-0002')!;
+    assert.equal(row['ACCENAME'], `'=HYPERLINK("https://example.invalid","open")`);
+    assert.equal(row['REMARKS'], "'@SUM(1+1)");
+    assert.match(row['DECLATITUDE']!, /^-17\.512/);
   });
 
   test('should keep UTF-8 text intact', () => {
