@@ -10,6 +10,8 @@ import { seedDemo } from './demo/seed-demo.js';
 import { startMailer } from './mail/mailer.js';
 import { loadReferenceSets } from './reference-sets/load-reference-sets.js';
 import { DATA_FOLDER, databaseFile } from './operations/data-folder.js';
+import { PhotoFiles } from './photos/photo-files.js';
+import { checkPhotoStore } from './photos/photo-store-check.js';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 
@@ -21,10 +23,19 @@ function sessionSecret(dataDir: string, fromEnv: string | null): string {
   return readFileSync(file, 'utf8').trim();
 }
 
+/** Tidies what a stop mid-upload can leave in the photo store, and says what it found. */
+async function reportPhotoStore(ds: Awaited<ReturnType<typeof openDatabase>>, dataDir: string): Promise<void> {
+  const report = await checkPhotoStore(ds, new PhotoFiles(path.join(dataDir, DATA_FOLDER.photos)));
+  if (report.staged) console.log(`Photo store: removed ${report.staged} half-written upload(s).`);
+  if (report.orphaned.length) console.log(`Photo store: ${report.orphaned.length} folder(s) that no photo names were moved to photos/.orphaned/.`);
+  if (report.missing.length) console.error(`Photo store: the files of ${report.missing.length} photo(s) are missing: ids ${report.missing.map((m) => m.id).join(', ')}.`);
+}
+
 async function main(): Promise<void> {
   const config = readConfig();
   mkdirSync(config.dataDir, { recursive: true });
   const ds = await openDatabase(databaseFile(config.dataDir));
+  await reportPhotoStore(ds, config.dataDir);
   await loadReferenceSets(ds);
   await seedCharacterCatalogue(ds);
   await seedDescriptorCatalogue(ds);
