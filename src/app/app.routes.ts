@@ -33,8 +33,7 @@ export const routes: Routes = [
       { path: '', pathMatch: 'full', redirectTo: 'collection' },
       {
         path: 'collection',
-        title: 'Collection · Hueledger',
-        loadComponent: () => import('./features/collection/pages/collection-page').then((m) => m.CollectionPage),
+        loadChildren: () => import('./features/collection/collection.routes').then((m) => m.COLLECTION_ROUTES),
       },
       {
         path: 'record',

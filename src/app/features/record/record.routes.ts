@@ -8,4 +8,9 @@ export const RECORD_ROUTES: Routes = [
     title: 'Photo reading · Hueledger',
     loadComponent: () => import('./pages/photo-page').then((m) => m.PhotoPage),
   },
+  {
+    path: 'descriptors',
+    title: 'Descriptors · Hueledger',
+    loadComponent: () => import('../descriptors/pages/descriptor-entry-page').then((m) => m.DescriptorEntryPage),
+  },
 ];

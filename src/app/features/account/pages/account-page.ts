@@ -1,6 +1,7 @@
 import { ChangeDetectionStrategy, Component, inject, signal, viewChild } from '@angular/core';
 import { FormGroupDirective, NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
+import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
@@ -13,19 +14,29 @@ import { newPasswordGroup } from '../../../core/auth/password-rules';
 import { ROLE_DESCRIPTIONS } from '../../../core/auth/role-descriptions';
 import { ApiError } from '../../../core/http/api-error';
 import { applyFieldErrors } from '../../../core/http/field-errors';
+import { UnitPreference, type UnitSystem } from '../../../core/units/unit-preference';
 
-/** Who is signed in, and changing one's own password. */
+/** Who is signed in, the units lengths and masses are shown in, and changing one's own password. */
 @Component({
   selector: 'hl-account-page',
-  imports: [MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, NewPasswordFields, ReactiveFormsModule],
+  imports: [MatButtonModule, MatButtonToggleModule, MatFormFieldModule, MatIconModule, MatInputModule, NewPasswordFields, ReactiveFormsModule],
   templateUrl: './account-page.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
+  styles: `
+    .units {
+      margin-bottom: 8px;
+    }
+    .units .mat-button-toggle {
+      min-height: 48px;
+    }
+  `,
 })
 export class AccountPage {
   private readonly authApi = inject(AuthApi);
   private readonly snackBar = inject(MatSnackBar);
   private readonly fb = inject(NonNullableFormBuilder);
   private readonly formDirective = viewChild.required(FormGroupDirective);
+  private readonly unitPreference = inject(UnitPreference);
 
   protected readonly user = inject(AuthStore).currentUser;
   protected readonly roleDescriptions = ROLE_DESCRIPTIONS;
@@ -33,8 +44,13 @@ export class AccountPage {
     currentPassword: ['', Validators.required],
     passwords: newPasswordGroup(this.fb),
   });
+  protected readonly units = this.unitPreference.system;
   protected readonly busy = signal(false);
   protected readonly problem = signal<string | null>(null);
+
+  protected chooseUnits(system: UnitSystem): void {
+    this.unitPreference.choose(system);
+  }
 
   protected changePassword(): void {
     if (this.form.invalid) {

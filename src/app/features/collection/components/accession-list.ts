@@ -4,15 +4,16 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatSortModule, Sort } from '@angular/material/sort';
 import { MatTableModule } from '@angular/material/table';
+import { RouterLink } from '@angular/router';
 
-import type { Accession, Site } from '../../../../../shared/api/collection.js';
+import type { Accession, Site } from '../../../../../shared/api/collection-answers.js';
 import { Viewport } from '../../../core/layout/viewport';
 import { AccessionRow, accessionRows, matchAccessions, sortAccessions } from '../data/collection-format';
 
 /** Accessions with their site, other names and plant count; searchable, sortable on a desk. */
 @Component({
   selector: 'hl-accession-list',
-  imports: [MatFormFieldModule, MatIconModule, MatInputModule, MatSortModule, MatTableModule],
+  imports: [MatFormFieldModule, MatIconModule, MatInputModule, MatSortModule, MatTableModule, RouterLink],
   changeDetection: ChangeDetectionStrategy.OnPush,
   templateUrl: './accession-list.html',
   styleUrl: './collection-lists.scss',

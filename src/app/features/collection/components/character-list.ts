@@ -1,14 +1,15 @@
-import { ChangeDetectionStrategy, Component, inject, input } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, input, output } from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatTableModule } from '@angular/material/table';
 
-import type { Character } from '../../../../../shared/api/collection.js';
+import { ORGANS, type Character } from '../../../../../shared/api/collection-answers.js';
 import { Viewport } from '../../../core/layout/viewport';
 
-/** The character catalogue: what to read and how, with cautions marked by icon and word. */
+/** The character catalogue: what to read and how, with cautions marked by icon and word; admins get an edit button per row. */
 @Component({
   selector: 'hl-character-list',
-  imports: [MatIconModule, MatTableModule],
+  imports: [MatButtonModule, MatIconModule, MatTableModule],
   changeDetection: ChangeDetectionStrategy.OnPush,
   templateUrl: './character-list.html',
   styleUrl: './collection-lists.scss',
@@ -16,7 +17,21 @@ import { Viewport } from '../../../core/layout/viewport';
 export class CharacterList {
   /** The characters to show. */
   readonly characters = input.required<readonly Character[]>();
+  /** Whether the person may edit characters (admins). */
+  readonly canEdit = input(false);
+  /** Asks to edit a character. */
+  readonly edit = output<Character>();
 
   protected readonly handset = inject(Viewport).handset;
-  protected readonly columns = ['organ', 'label', 'howToRead', 'caution'];
+  protected readonly columns = ['organ', 'label', 'howToRead', 'caution', 'drift'];
+  /** The catalogue by organ, in the order of the plant from leaf to flower, then by label. */
+  protected readonly byOrgan = computed(() =>
+    [...this.characters()].sort((a, b) => ORGANS.indexOf(a.organ) - ORGANS.indexOf(b.organ) || a.label.localeCompare(b.label)),
+  );
+  /** Whether a row starts a new organ (its organ is shown; following rows of the same organ leave it blank). */
+  protected firstOfOrgan(index: number): boolean {
+    const rows = this.byOrgan();
+    return index === 0 || rows[index - 1].organ !== rows[index].organ;
+  }
+  protected readonly shownColumns = computed(() => (this.canEdit() ? [...this.columns, 'actions'] : this.columns));
 }

@@ -1,4 +1,4 @@
-import type { Accession, Site } from '../../../../../shared/api/collection.js';
+import type { Accession, Site } from '../../../../../shared/api/collection-answers.js';
 import { accessionRows, matchAccessions, seasonLabel, seasonsLabel, sortAccessions } from './collection-format';
 
 const site: Site = {

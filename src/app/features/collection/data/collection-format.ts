@@ -1,4 +1,4 @@
-import type { Accession, Season, Site } from '../../../../../shared/api/collection.js';
+import type { Accession, Season, Site } from '../../../../../shared/api/collection-answers.js';
 
 /** A season as "wet 11-01 → 04-30" (month-day, inclusive; it may wrap the year end). */
 export function seasonLabel(season: Season): string {

@@ -1,0 +1,21 @@
+import { Routes } from '@angular/router';
+
+/** The Collection section: everyone reads; the pages show edit actions to admins only (the server checks again). */
+export const COLLECTION_ROUTES: Routes = [
+  {
+    path: '',
+    pathMatch: 'full',
+    title: 'Collection · Hueledger',
+    loadComponent: () => import('./pages/collection-page').then((m) => m.CollectionPage),
+  },
+  {
+    path: 'sites/:id',
+    title: 'Site · Hueledger',
+    loadComponent: () => import('./pages/site-page').then((m) => m.SitePage),
+  },
+  {
+    path: 'accessions/:id',
+    title: 'Accession · Hueledger',
+    loadComponent: () => import('./pages/accession-page').then((m) => m.AccessionPage),
+  },
+];

@@ -1,0 +1,37 @@
+import type { AccessionFields } from './collection-api';
+
+/** The passport form as typed: text everywhere except the site and status. */
+export interface PassportForm {
+  accessionNumber: string;
+  name: string;
+  otherNames: string;
+  siteId: number;
+  originCountry: string;
+  acquisitionDate: string;
+  collectingSite: string;
+  sampleStatus: number | null;
+  instituteCode: string;
+  donorName: string;
+  remarks: string;
+}
+
+/** The passport fields the server takes; genus, species and crop stay as the server holds them (taro by default). */
+export type PassportBody = Omit<AccessionFields, 'genus' | 'species' | 'speciesAuthor' | 'cropName'>;
+
+/** The form as the server takes it: text trimmed, empty optional text as null, other names split on ";" (MCPD's separator). */
+export function passportBody(form: PassportForm): PassportBody {
+  const orNull = (text: string) => text.trim() || null;
+  return {
+    accessionNumber: form.accessionNumber.trim(),
+    name: form.name.trim(),
+    otherNames: form.otherNames.split(';').map((name) => name.trim()).filter(Boolean),
+    siteId: form.siteId,
+    originCountry: orNull(form.originCountry)?.toUpperCase() ?? null,
+    acquisitionDate: orNull(form.acquisitionDate),
+    collectingSite: orNull(form.collectingSite),
+    sampleStatus: form.sampleStatus,
+    instituteCode: orNull(form.instituteCode),
+    donorName: orNull(form.donorName),
+    remarks: orNull(form.remarks),
+  };
+}

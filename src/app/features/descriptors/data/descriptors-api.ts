@@ -1,0 +1,74 @@
+import { HttpClient, HttpParams } from '@angular/common/http';
+import { Injectable, inject } from '@angular/core';
+import { Observable } from 'rxjs';
+
+import type {
+  AccessionDescriptors,
+  Descriptor,
+  DescriptorCategory,
+  DescriptorKind,
+  Observation,
+  ObservationPage,
+  Unit,
+} from '../../../../../shared/api/descriptor-answers.js';
+
+/** What an admin sets on a new descriptor; code, kind and ratio parts never change afterwards. */
+export interface NewDescriptor {
+  code: string;
+  label: string;
+  object: string;
+  kind: DescriptorKind;
+  categories?: DescriptorCategory[];
+  numeratorCode?: string;
+  denominatorCode?: string;
+  howToMeasure: string;
+  caution: string | null;
+}
+
+/** What an admin may change on a descriptor (categories may be relabelled or added, never removed). */
+export type DescriptorChanges = Partial<Pick<Descriptor, 'label' | 'object' | 'howToMeasure' | 'caution' | 'active' | 'categories'>>;
+
+/** One value as a recorder enters it: a number in its unit, or a category id. */
+export interface NewObservation {
+  accessionId: number;
+  plantId: number | null;
+  descriptorId: number;
+  value?: number;
+  unit?: Unit;
+  category?: string;
+  notes?: string | null;
+}
+
+/** The descriptor catalogue and observations against it. */
+@Injectable({ providedIn: 'root' })
+export class DescriptorsApi {
+  private readonly http = inject(HttpClient);
+
+  descriptors(): Observable<Descriptor[]> {
+    return this.http.get<Descriptor[]>('/api/descriptors');
+  }
+
+  createDescriptor(body: NewDescriptor): Observable<Descriptor> {
+    return this.http.post<Descriptor>('/api/descriptors', body);
+  }
+
+  updateDescriptor(id: number, changes: DescriptorChanges): Observable<Descriptor> {
+    return this.http.patch<Descriptor>(`/api/descriptors/${id}`, changes);
+  }
+
+  /** Records one value; the server converts it to SI and refuses a unit that does not fit, or a ratio. */
+  record(body: NewObservation): Observable<Observation> {
+    return this.http.post<Observation>('/api/observations', body);
+  }
+
+  /** Current observations of an accession, newest first. */
+  observations(accessionId: number, pageSize = 50): Observable<ObservationPage> {
+    const params = new HttpParams().set('accessionId', accessionId).set('pageSize', pageSize);
+    return this.http.get<ObservationPage>('/api/observations', { params });
+  }
+
+  /** The latest value of each descriptor per plant, with ratios derived within each plant. */
+  accessionValues(accessionId: number): Observable<AccessionDescriptors> {
+    return this.http.get<AccessionDescriptors>(`/api/accessions/${accessionId}/descriptors`);
+  }
+}

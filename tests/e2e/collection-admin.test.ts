@@ -1,0 +1,285 @@
+// Managing the collection in Chromium against the real server with the demo data: an admin at a
+// desk edits a site's season scheme across the year end and adds a plant; a recorder on a phone
+// enters descriptor values in inches, sees the derived ratio, and switches to metric.
+import assert from 'node:assert/strict';
+import { after, before, describe, test } from 'node:test';
+import type { Page } from 'playwright-core';
+import { openBrowser, screenshot, signIn, type Browser } from './browser.js';
+import { startServer, type ServerProcess } from './server-process.js';
+
+/** GET an API route with the page's session. */
+async function api<T>(page: Page, path: string): Promise<T> {
+  return page.evaluate(async (p) => (await fetch(p)).json(), path) as Promise<T>;
+}
+
+interface SiteAnswer {
+  id: number;
+  code: string;
+  seasons: { name: string; start: string; end: string }[];
+}
+interface DescriptorAnswer {
+  code: string;
+  label: string;
+  kind: string;
+  numeratorCode: string | null;
+  denominatorCode: string | null;
+}
+interface AccessionAnswer {
+  id: number;
+  accessionNumber: string;
+  name: string;
+  plants: { id: number; label: string; plantedOn: string }[];
+}
+
+/**
+ * A screenshot of the whole page: the shell scrolls inside its content pane, so the window is made
+ * as tall as the content for the picture, then put back.
+ */
+async function wholePage(page: Page, name: string): Promise<void> {
+  const size = page.viewportSize()!;
+  const height = await page.evaluate(() => {
+    const pane = document.querySelector('mat-sidenav-content');
+    return (pane?.scrollHeight ?? 0) + (pane?.getBoundingClientRect().top ?? 0);
+  });
+  await page.setViewportSize({ width: size.width, height: Math.max(size.height, Math.ceil(height)) });
+  await screenshot(page, name);
+  await page.setViewportSize(size);
+}
+
+/** The position of the season row with this name. */
+async function rowNamed(page: Page, name: string): Promise<number> {
+  const names = await page.locator('hl-season-editor fieldset').evaluateAll((rows) =>
+    rows.map((row) => (row.querySelector('input[formcontrolname=name]') as HTMLInputElement | null)?.value),
+  );
+  const index = names.indexOf(name);
+  assert.ok(index >= 0, `a season called ${name} among ${names.join(', ')}`);
+  return index;
+}
+
+/** The season editor's row fields, by their position (0-based) and field label. */
+function seasonField(page: Page, row: number, label: 'Name' | 'Starts (MM-DD)' | 'Ends (MM-DD)') {
+  return page.locator('hl-season-editor fieldset').nth(row).getByLabel(label);
+}
+
+describe('an admin at a desk manages sites and accessions', () => {
+  let server: ServerProcess;
+  let browser: Browser;
+  let page: Page;
+
+  before(async () => {
+    server = await startServer();
+    browser = await openBrowser(server.url);
+    page = await browser.newPage();
+    await signIn(page, server.url, 'admin@demo.test');
+  });
+  after(async () => {
+    await browser?.close();
+    await server?.stop();
+  });
+
+  test('should edit a site’s seasons to wrap the year end, see an overlap in words, and save', async () => {
+    await page.goto(`${server.url}/collection?tab=sites`);
+    // The demo's coastal garden has Dry 01-01 → 05-31 and Wet 06-01 → 12-31: nothing wraps yet.
+    await page.getByRole('link', { name: 'Coastal Collection Garden' }).click();
+    await page.waitForURL(/\/collection\/sites\/\d+$/);
+    await page.getByRole('heading', { name: 'Seasons' }).waitFor();
+    const dry = await rowNamed(page, 'Dry');
+    const wet = await rowNamed(page, 'Wet');
+    assert.equal(await seasonField(page, dry, 'Starts (MM-DD)').inputValue(), '01-01');
+
+    // Dry now starts on 1 December: it overlaps Wet until Wet is shortened.
+    await seasonField(page, dry, 'Starts (MM-DD)').fill('1201');
+    await seasonField(page, dry, 'Name').click(); // leaving the field writes 1201 as 12-01
+    assert.equal(await seasonField(page, dry, 'Starts (MM-DD)').inputValue(), '12-01');
+    const overlap = page.locator('.problem', { hasText: 'Overlap:' });
+    await overlap.waitFor();
+    assert.match(await overlap.innerText(), /“Dry” and “Wet” both cover 1 Dec–31 Dec/);
+    assert.equal(await overlap.locator('mat-icon').innerText(), 'layers');
+    await page.getByRole('button', { name: 'Save site' }).click();
+    await page.getByText('Seasons overlap or share a name').waitFor();
+
+    await seasonField(page, wet, 'Ends (MM-DD)').fill('11-30');
+    await page.getByText('Every day of the year falls in exactly one season.').waitFor();
+    assert.match(await page.locator('hl-season-editor .legend').innerText(), /Dry\s+1 Dec → 31 May · 182 days \(183 in leap years\), across the year end/);
+    // The ring draws the wrapping season as one arc: a single "A" command.
+    const arc = await page.locator('hl-year-ring path.arc').first().getAttribute('d');
+    assert.equal(arc?.match(/A /g)?.length, 1);
+    await wholePage(page, 'collection-season-editor-desk');
+
+    await page.getByRole('button', { name: 'Save site' }).click();
+    await page.locator('.save-bar [role=status]', { hasText: 'Saved' }).waitFor();
+    const sites = await api<SiteAnswer[]>(page, '/api/sites');
+    const saved = sites.find((s) => s.code === 'CCG');
+    const stored = saved?.seasons.map(({ name, start, end }) => ({ name, start, end })).sort((a, b) => a.name.localeCompare(b.name));
+    assert.deepEqual(stored, [
+      { name: 'Dry', start: '12-01', end: '05-31' },
+      { name: 'Wet', start: '06-01', end: '11-30' },
+    ]);
+    await page.reload();
+    await page.getByRole('heading', { name: 'Seasons' }).waitFor();
+    assert.equal(await seasonField(page, await rowNamed(page, 'Dry'), 'Starts (MM-DD)').inputValue(), '12-01');
+  });
+
+  test('should add a plant to an accession and see it listed with its age', async () => {
+    await page.goto(`${server.url}/collection`);
+    await page.getByRole('link', { name: 'HL-0001' }).click();
+    await page.waitForURL(/\/collection\/accessions\/\d+$/);
+    await page.getByRole('heading', { name: /HL-0001/ }).waitFor();
+    assert.match(await page.locator('.passport').innerText(), /Accession number\s+ACCENUMB\s+HL-0001/);
+    assert.match(await page.locator('.passport').innerText(), /Country of origin\s+ORIGCTY\s+FJI/);
+
+    await page.getByRole('button', { name: 'Add plant' }).click();
+    const dialog = page.getByRole('dialog');
+    await dialog.getByLabel('Plant label').fill('E2E-07');
+    await dialog.getByLabel('Planted on').fill('2025-01-15');
+    await dialog.getByRole('button', { name: 'Add plant' }).click();
+    await page.locator('.plant', { hasText: 'E2E-07' }).waitFor();
+    assert.match(await page.locator('.plant', { hasText: 'E2E-07' }).innerText(), /Planted 2025-01-15 · \d+ months/);
+    const id = Number(new URL(page.url()).pathname.split('/').pop());
+    const accession = await api<AccessionAnswer>(page, `/api/accessions/${id}`);
+    assert.ok(accession.plants.some((p) => p.label === 'E2E-07' && p.plantedOn === '2025-01-15'));
+    await wholePage(page, 'collection-accession-desk');
+  });
+
+  test('should offer the MCPD passport CSV from the accessions list', async () => {
+    await page.goto(`${server.url}/collection`);
+    const link = page.getByRole('link', { name: 'MCPD passport CSV' });
+    assert.equal(await link.getAttribute('href'), '/api/accessions/mcpd.csv');
+    const [download] = await Promise.all([page.waitForEvent('download'), link.click()]);
+    assert.match(download.suggestedFilename(), /\.csv$/);
+  });
+
+  test('should change a character’s drift threshold and see the descriptor catalogue', async () => {
+    await page.goto(`${server.url}/collection?tab=characters`);
+    const row = page.locator('tr', { hasText: 'upper third' }).first();
+    const label = (await row.locator('td').nth(1).innerText()).split('\n')[0]!.trim();
+    await row.getByRole('button', { name: `Edit ${label}` }).click();
+    const dialog = page.getByRole('dialog');
+    await dialog.getByLabel('Drift threshold (ΔE00)').fill('2.5');
+    await dialog.getByRole('button', { name: 'Save' }).click();
+    await dialog.waitFor({ state: 'detached' });
+    await page.locator('tr', { hasText: label }).locator('td.number', { hasText: '2.5' }).waitFor();
+    const characters = await api<{ label: string; driftThreshold: number }[]>(page, '/api/characters');
+    assert.equal(characters.find((c) => c.label === label)?.driftThreshold, 2.5);
+    await wholePage(page, 'collection-characters-desk');
+
+    await page.getByRole('tab', { name: 'Descriptors' }).click();
+    await page.waitForURL((u) => u.searchParams.get('tab') === 'descriptors');
+    const ratioRow = page.locator('tr', { hasText: /ratio/i }).first();
+    assert.match(await ratioRow.innerText(), /Ratio[\s\S]*computed, never typed[\s\S]*÷/);
+    await wholePage(page, 'collection-descriptors-desk');
+  });
+
+  test('should load nothing from another origin', () => {
+    assert.deepEqual(browser.foreignRequests, []);
+  });
+});
+
+describe('a recorder on a phone enters descriptors', () => {
+  let server: ServerProcess;
+  let browser: Browser;
+  let page: Page;
+
+  before(async () => {
+    server = await startServer();
+    browser = await openBrowser(server.url, { phone: true });
+    page = await browser.newPage();
+    await signIn(page, server.url, 'recorder@demo.test');
+  });
+  after(async () => {
+    await browser?.close();
+    await server?.stop();
+  });
+
+  test('should reach the descriptor entry from an accession page', async () => {
+    const accessions = await api<AccessionAnswer[]>(page, '/api/accessions');
+    const first = accessions.find((a) => a.accessionNumber === 'HL-0001')!;
+    await page.goto(`${server.url}/collection/accessions/${first.id}`);
+    await page.getByRole('heading', { name: /HL-0001/ }).waitFor();
+    await wholePage(page, 'collection-accession-phone');
+    await page.getByRole('link', { name: `Record descriptors of plant ${first.plants[0]!.label}` }).click();
+    await page.waitForURL((u) => u.pathname === '/record/descriptors' && u.searchParams.get('plant') === String(first.plants[0]!.id));
+    await page.getByRole('heading', { name: 'Descriptors' }).waitFor();
+  });
+
+  test('should type petiole 40 in and sheath 28 in, see the ratio 0.70 computed live, then 101.6 cm in metric', async () => {
+    await page.getByRole('group', { name: 'Units' }).getByText('Imperial', { exact: true }).click();
+    await page.getByLabel('Petiole length', { exact: true }).fill('40');
+    await page.getByLabel('Sheath length', { exact: true }).fill('28');
+    const ratio = (await api<DescriptorAnswer[]>(page, '/api/descriptors')).find(
+      (d) => d.kind === 'ratio' && [d.numeratorCode, d.denominatorCode].sort().join() === 'petiole.length,sheath.length',
+    );
+    assert.ok(ratio, 'the catalogue has a ratio of petiole and sheath length');
+    // The issue's figures: petiole about 40 in, sheath about 28 in, ratio 0.70 (common practice, no source).
+    const expected = '0.70';
+    const ratioRow = page.locator('hl-descriptor-row', { hasText: ratio.label });
+    await ratioRow.locator('.ratio-value', { hasText: expected }).waitFor();
+    assert.match(await ratioRow.innerText(), /computed from (petiole length and sheath length|sheath length and petiole length)/);
+    assert.equal(await ratioRow.locator('input').count(), 0, 'a ratio has no field to type in');
+    await wholePage(page, 'descriptor-entry-phone');
+
+    await page.getByRole('group', { name: 'Units' }).getByText('Metric', { exact: true }).click();
+    assert.equal(await page.getByLabel('Petiole length', { exact: true }).inputValue(), '101.6');
+    assert.equal(await page.getByLabel('Sheath length', { exact: true }).inputValue(), '71.12');
+    assert.match(await page.locator('hl-descriptor-row', { hasText: 'Petiole length' }).first().innerText(), /stored as 1\.016 m · typed 40 in/);
+    await ratioRow.locator('.ratio-value', { hasText: expected }).waitFor();
+  });
+
+  test('should save both values and list the latest in the chosen units', async () => {
+    await page.getByRole('button', { name: 'Save 2 values' }).click();
+    await page.getByText('2 values saved.').waitFor();
+    const accessionId = Number(new URL(page.url()).searchParams.get('accession'));
+    const plantId = Number(new URL(page.url()).searchParams.get('plant'));
+    const answer = await api<{ plants: { plantId: number | null; values: { code: string; formatted: { metric: string; imperial: string } }[] }[] }>(
+      page,
+      `/api/accessions/${accessionId}/descriptors`,
+    );
+    const petiole = answer.plants.find((p) => p.plantId === plantId)?.values.find((v) => v.code === 'petiole.length');
+    assert.ok(petiole, 'the saved petiole length is the latest of the plant');
+    const latest = page.locator('hl-plant-values');
+    await latest.getByText(petiole.formatted.metric, { exact: true }).waitFor();
+    await wholePage(page, 'descriptor-entry-saved-phone');
+    // Imperial on the page shows the same stored value in inches: 40.0 in.
+    await page.getByRole('group', { name: 'Units' }).getByText('Imperial', { exact: true }).click();
+    await latest.getByText('40.0 in', { exact: true }).waitFor();
+    assert.equal(petiole.formatted.imperial, '40.0 in');
+  });
+
+  test('should show the recorder the season ring without edit fields', async () => {
+    await page.goto(`${server.url}/collection?tab=sites`);
+    await page.getByRole('link', { name: /Riverside Demonstration Plot/ }).first().click();
+    await page.locator('hl-year-ring').waitFor();
+    assert.equal(await page.locator('hl-season-editor').count(), 0);
+    assert.match(await page.locator('.season-list').innerText(), /Wet 1 Nov → 30 Apr · 181 days \(182 in leap years\), across the year end/);
+    await wholePage(page, 'collection-site-phone');
+  });
+});
+
+describe('an admin on a phone edits seasons', () => {
+  let server: ServerProcess;
+  let browser: Browser;
+
+  before(async () => {
+    server = await startServer();
+    browser = await openBrowser(server.url, { phone: true });
+  });
+  after(async () => {
+    await browser?.close();
+    await server?.stop();
+  });
+
+  test('should show the season editor in one column with the ring on top', async () => {
+    const page = await browser.newPage();
+    await signIn(page, server.url, 'admin@demo.test');
+    await page.goto(`${server.url}/collection?tab=sites`);
+    await page.getByRole('link', { name: /Hilltop Trial Garden/ }).first().click();
+    await page.locator('hl-season-editor').waitFor();
+    await seasonField(page, await rowNamed(page, 'Rainy'), 'Ends (MM-DD)').fill('09-30');
+    await page.locator('.problem', { hasText: 'Gap:' }).waitFor();
+    assert.match(await page.locator('.problem', { hasText: 'Gap:' }).innerText(), /No season covers 1 Oct–15 Oct/);
+    const ring = await page.locator('hl-year-ring').boundingBox();
+    const firstRow = await page.locator('hl-season-editor fieldset').first().boundingBox();
+    assert.ok(ring && firstRow && ring.y < firstRow.y, 'the ring comes before the rows on a phone');
+    await wholePage(page, 'collection-season-editor-phone');
+  });
+});
