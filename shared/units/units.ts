@@ -66,13 +66,16 @@ export function fromSi(valueSi: number, unit: Unit): number {
   return tidy(valueSi / UNIT_FACTORS[unit].toSi);
 }
 
-/** The unit an SI value is shown in for a system: sensible for taro, from millimetres to a couple of metres. */
+/**
+ * The unit an SI value is shown in for a system: sensible for taro, where petioles, blades and
+ * whole plants are measured with a tape in centimetres up to a few metres (our own choice).
+ */
 export function displayUnit(valueSi: number, quantity: Quantity, system: UnitSystem): Unit {
   const size = Math.abs(valueSi);
   if (quantity === 'count') return 'count';
   if (quantity === 'length') {
     if (system === 'imperial') return 'in';
-    return size > 0 && size < 0.01 ? 'mm' : size < 1 ? 'cm' : 'm';
+    return size > 0 && size < 0.01 ? 'mm' : size < 3 ? 'cm' : 'm';
   }
   if (system === 'imperial') return 'lb';
   return size < 1 ? 'g' : 'kg';

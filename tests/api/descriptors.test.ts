@@ -178,7 +178,7 @@ describe('descriptors and observations', () => {
       assert.deepEqual(ratio.formatted, { metric: '0.70', imperial: '0.70' });
       assert.equal(ratio.observationId, null);
       const petiole = p1.values.find((v) => v.code === 'petiole.length')!;
-      assert.deepEqual(petiole.formatted, { metric: '1.02 m', imperial: '40.0 in' });
+      assert.deepEqual(petiole.formatted, { metric: '101.6 cm', imperial: '40.0 in' });
       assert.equal(p1.values.find((v) => v.code === 'corm.shape')!.categoryLabel, 'Cone, narrowing to the top');
     });
 

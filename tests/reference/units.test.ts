@@ -67,7 +67,8 @@ describe('round trips and quantities', () => {
 
 describe('formatting in the chosen system (precision: our own choice)', () => {
   test('should show 1.016 m as 1.02 m in metric and 40.0 in in imperial', () => {
-    assert.equal(formatSi(1.016, 'length', 'metric'), '1.02 m');
+    assert.equal(formatSi(1.016, 'length', 'metric'), '101.6 cm');
+    assert.equal(formatSi(3.2, 'length', 'metric'), '3.20 m');
     assert.equal(formatSi(1.016, 'length', 'imperial'), '40.0 in');
   });
 
