@@ -7,14 +7,29 @@ import { fileURLToPath } from 'node:url';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 
-/** The real server (server/main.ts) in a child process, on a free port, with a fresh data folder. */
+/** The real server (server/main.ts) in a child process, on a free port, with the demo scenario. */
 export interface ServerProcess {
   url: string;
   dataDir: string;
+  /** Everything the server printed so far. */
+  output(): string;
+  /** Stops the server (SIGTERM, then SIGKILL after 5 s) and removes the data folder unless it was given. */
   stop(): Promise<void>;
+  /** Kills the server at once (SIGKILL), as a crash would; the data folder stays. */
+  kill(): Promise<void>;
 }
 
-function freePort(): Promise<number> {
+/** What a server process is started with. */
+export interface ServerOptions {
+  /** An existing data folder (kept on stop); a new temporary one by default (removed on stop). */
+  dataDir?: string;
+  env?: Record<string, string>;
+  /** Whether the built client must exist (browser tests need it; API-only process tests do not). */
+  needsClient?: boolean;
+}
+
+/** A TCP port nobody listens on right now, on loopback. */
+export function freePort(): Promise<number> {
   return new Promise((resolve, reject) => {
     const s = createServer();
     s.once('error', reject);
@@ -26,14 +41,15 @@ function freePort(): Promise<number> {
   });
 }
 
-/** Starts the built app with the demo scenario; needs `npm run build` first. */
-export async function startServer(env: Record<string, string> = {}): Promise<ServerProcess> {
-  if (!existsSync(path.join(root, 'dist/client/browser/index.html'))) throw new Error('Build the client first: npm run build');
+/** Starts server/main.ts as a child process and waits until /api/health answers. */
+export async function startServerProcess(opts: ServerOptions = {}): Promise<ServerProcess> {
+  if (opts.needsClient && !existsSync(path.join(root, 'dist/client/browser/index.html'))) throw new Error('Build the client first: npm run build');
   const port = await freePort();
-  const dataDir = mkdtempSync(path.join(tmpdir(), 'hueledger-e2e-'));
+  const ownDir = opts.dataDir === undefined;
+  const dataDir = opts.dataDir ?? mkdtempSync(path.join(tmpdir(), 'hueledger-e2e-'));
   const child: ChildProcess = spawn(process.execPath, ['--import', 'tsx', 'server/main.ts'], {
     cwd: root,
-    env: { ...process.env, TSX_TSCONFIG_PATH: 'server/tsconfig.json', PORT: String(port), HUELEDGER_DATA_DIR: dataDir, HUELEDGER_DEMO: '1', ...env },
+    env: { ...process.env, TSX_TSCONFIG_PATH: 'server/tsconfig.json', PORT: String(port), HUELEDGER_DATA_DIR: dataDir, HUELEDGER_DEMO: '1', ...opts.env },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   let output = '';
@@ -55,17 +71,30 @@ export async function startServer(env: Record<string, string> = {}): Promise<Ser
     }
     await new Promise((r) => setTimeout(r, 200));
   }
+  const exited = () => (child.exitCode !== null || child.signalCode !== null ? Promise.resolve() : new Promise<void>((r) => child.once('exit', () => r())));
   return {
     url,
     dataDir,
+    output: () => output,
     async stop() {
-      if (child.exitCode === null) {
-        const exited = new Promise((r) => child.once('exit', r));
+      if (child.exitCode === null && child.signalCode === null) {
+        const done = exited();
         child.kill('SIGTERM');
-        await Promise.race([exited, new Promise((r) => setTimeout(r, 5000))]);
-        if (child.exitCode === null) child.kill('SIGKILL');
+        await Promise.race([done, new Promise((r) => setTimeout(r, 5000))]);
+        if (child.exitCode === null && child.signalCode === null) child.kill('SIGKILL');
+        await done;
       }
-      rmSync(dataDir, { recursive: true, force: true });
+      if (ownDir) rmSync(dataDir, { recursive: true, force: true });
+    },
+    async kill() {
+      const done = exited();
+      child.kill('SIGKILL');
+      await done;
     },
   };
+}
+
+/** Starts the built app with the demo scenario; needs `npm run build` first. */
+export function startServer(env: Record<string, string> = {}): Promise<ServerProcess> {
+  return startServerProcess({ env, needsClient: true });
 }
