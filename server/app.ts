@@ -9,6 +9,7 @@ import { authRoutes } from './auth/auth.routes.js';
 import { invitationRoutes } from './auth/invitations.routes.js';
 import { createPassport } from './auth/passport.js';
 import { SESSION_COOKIE, SqliteSessionStore } from './auth/session-store.js';
+import { analysisRoutes } from './analysis/analysis.routes.js';
 import { calibrationRoutes } from './calibration/calibration.routes.js';
 import { collectionRoutes } from './collection/collection.routes.js';
 import { descriptorRoutes } from './collection/descriptors.routes.js';
@@ -19,6 +20,8 @@ import { apiNotFound, problemHandler } from './core/problem.js';
 import type { Mailer } from './mail/mailer.js';
 import { outboxRoutes } from './mail/outbox.routes.js';
 import { photoRoutes } from './photos/photos.routes.js';
+import { readingsRoutes } from './readings/readings.routes.js';
+import { notificationRoutes, reviewQueueRoutes, reviewRoutes } from './reviews/reviews.routes.js';
 import { referenceSetRoutes } from './reference-sets/reference-sets.routes.js';
 import { ReferenceSets } from './reference-sets/reference-sets.js';
 import { userRoutes } from './users/users.routes.js';
@@ -90,6 +93,11 @@ export function createApp(options: AppOptions): Express {
   api.use('/', referenceSetRoutes(ctx));
   api.use('/photos', photoRoutes(ctx, options.dataDir ?? null));
   api.use('/calibration', calibrationRoutes(ctx, options.dataDir ?? null));
+  api.use('/readings', reviewRoutes(ctx, options.logError));
+  api.use('/readings', readingsRoutes(ctx, options.dataDir ?? null));
+  api.use('/reviews', reviewQueueRoutes(ctx));
+  api.use('/notifications', notificationRoutes(ctx));
+  api.use('/analysis', analysisRoutes(ctx));
   api.use(apiNotFound);
   app.use('/api', api);
 

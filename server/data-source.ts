@@ -14,18 +14,24 @@ import { Observation } from './collection/observation.entity.js';
 import { Season, Site } from './collection/site.entity.js';
 import { MailMessage } from './mail/mail-message.entity.js';
 import { Photo } from './photos/photo.entity.js';
+import { IdempotencyKey } from './idempotency/idempotency-key.entity.js';
 import { Initial1764633600000 } from './migrations/1764633600000-initial.js';
 import { ReferenceSets1764720000000 } from './migrations/1764720000000-reference-sets.js';
 import { Photos1764730000000 } from './migrations/1764730000000-photos.js';
+import { Readings1764800000000 } from './migrations/1764800000000-readings.js';
 import { CollectionManagement1764810000000 } from './migrations/1764810000000-collection-management.js';
 import { Calibration1764820000000 } from './migrations/1764820000000-calibration.js';
+import { Idempotency1764830000000 } from './migrations/1764830000000-idempotency.js';
+import { Reviews1764840000000 } from './migrations/1764840000000-reviews.js';
+import { Reading } from './readings/reading.entity.js';
+import { Notification, Review } from './reviews/review.entity.js';
 import { Chip, ReferenceSet } from './reference-sets/reference-set.entity.js';
 
 /** Every entity, listed explicitly (no globs: the same list works under tsx, tsc and the CLI). */
-export const ENTITIES = [User, Invitation, PasswordReset, SessionRecord, AuditEvent, MailMessage, Site, Season, Accession, Plant, Character, ReferenceSet, Chip, Photo, Descriptor, Observation, CalibrationSession, Specimen, Participant, CalibrationResponse, Certification, ColourVisionScreening];
+export const ENTITIES = [User, Invitation, PasswordReset, SessionRecord, AuditEvent, MailMessage, Site, Season, Accession, Plant, Character, ReferenceSet, Chip, Photo, Descriptor, Observation, CalibrationSession, Specimen, Participant, CalibrationResponse, Certification, ColourVisionScreening, IdempotencyKey, Reading, Review, Notification];
 
 /** Every migration in order; they run at start-up. */
-export const MIGRATIONS = [Initial1764633600000, ReferenceSets1764720000000, Photos1764730000000, CollectionManagement1764810000000, Calibration1764820000000];
+export const MIGRATIONS = [Initial1764633600000, ReferenceSets1764720000000, Photos1764730000000, Readings1764800000000, CollectionManagement1764810000000, Calibration1764820000000, Idempotency1764830000000, Reviews1764840000000];
 
 /**
  * The one data source: better-sqlite3, WAL, foreign keys on (TypeORM's driver sets

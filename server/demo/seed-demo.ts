@@ -6,6 +6,8 @@ import { Accession, Plant } from '../collection/accession.entity.js';
 import { Season, Site } from '../collection/site.entity.js';
 import { seedDemoCalibration } from './demo-calibration.js';
 import { seedDemoObservations } from './demo-observations.js';
+import { seedDemoReadings } from './demo-readings.js';
+import { seedDemoReviews } from './demo-reviews.js';
 import { DEMO_ACCESSIONS, DEMO_PASSWORD, DEMO_PEOPLE, DEMO_SITES } from './demo-scenario.js';
 
 /**
@@ -35,6 +37,8 @@ export async function seedDemo(ds: DataSource): Promise<boolean> {
     }
     await seedDemoCalibration(m, passwordHash);
     await seedDemoObservations(m);
+    await seedDemoReadings(m);
+    await seedDemoReviews(m);
     await recordAudit(m, SYSTEM, 'demo.loaded', null, { sites: DEMO_SITES.length, accessions: DEMO_ACCESSIONS.length, users: DEMO_PEOPLE.length });
   });
   return true;

@@ -6,6 +6,7 @@ import { actorOf, allow, signedIn } from '../core/access.js';
 import { AppError } from '../core/app-error.js';
 import type { AppContext } from '../core/context.js';
 import { idParam, parse } from '../core/validate.js';
+import { idempotent } from '../idempotency/idempotent.js';
 import { PhotoFiles } from './photo-files.js';
 import { findPhotoRow, photoFile, samplePhoto, storePhoto, type MatchColour } from './photos.js';
 import { toPhotoDto } from './photo.entity.js';
@@ -24,7 +25,7 @@ export function photoRoutes(ctx: AppContext, dataDir: string | null): Router {
   const files = new PhotoFiles(path.join(dataDir, 'photos'));
   const match: MatchColour = (lab, k) => ctx.referenceSets.match(lab, k);
 
-  router.post('/', allow('recorder', 'trainer', 'admin'), receivePhoto, async (req, res) => {
+  router.post('/', allow('recorder', 'trainer', 'admin'), receivePhoto, idempotent(ctx), async (req, res) => {
     if (!req.file) throw AppError.badRequest(`Send the photo as multipart/form-data in the field "${PHOTO_FIELD}".`, [{ field: PHOTO_FIELD, message: 'no file' }]);
     const { photo, created } = await storePhoto(ctx.ds, files, actorOf(req), req.file.buffer);
     res.status(created ? 201 : 200).location(`/api/photos/${photo.id}`).json(photo);

@@ -3,6 +3,7 @@ import assert from 'node:assert/strict';
 import { ROLES, type Role } from '../../shared/api/auth.js';
 import type { AccessRule } from '../../server/core/access.js';
 import { Site } from '../../server/collection/site.entity.js';
+import { Notification } from '../../server/reviews/review.entity.js';
 import { listApiRoutes } from './api-routes.js';
 import { assertProblem } from './assert-problem.js';
 import { addUser, Client, mailsTo, PASSWORD, rowCounts, signedInAs, startHarness, tokenFromLink, type Harness } from './harness.js';
@@ -35,6 +36,14 @@ interface Fixtures {
   descriptorId: number;
   /** A current observation entered by the role (recorders and trainers correct only their own). */
   observationBy(role?: Role): number;
+  /** Readings: a body that creates one, a reading to open, a fresh reading of the role for each correction, an import file. */
+  readingBody(): object;
+  readingId: number;
+  readingBy(role?: Role): number;
+  readingsCsv(): Buffer;
+  /** Reviews: a demo recorder's reading in force (nobody in the table took it), and a notice of each role's own user. */
+  reviewTargetId: number;
+  noticeOf(role?: Role): number;
 }
 
 /** One API route: who may call it and a request that succeeds for them. */
@@ -50,12 +59,15 @@ interface RouteCase {
   body?: (f: Fixtures) => object;
   /** A multipart upload in the field `photo` instead of a JSON body. */
   upload?: (f: Fixtures) => Buffer;
+  /** A multipart upload in the field `file` (a CSV) instead of a JSON body. */
+  csv?: (f: Fixtures) => Buffer;
 }
 
 const EVERYONE = ROLES;
 const ADMIN: readonly Role[] = ['admin'];
 const OBSERVERS: readonly Role[] = ['recorder', 'trainer', 'admin'];
 const TRAINERS: readonly Role[] = ['trainer', 'admin'];
+const REVIEWERS: readonly Role[] = ['reviewer', 'admin'];
 
 /** Every API route (DESIGN §7 and the brief of this foundation); the first test checks the app has no others. */
 const ROUTES: readonly RouteCase[] = [
@@ -119,6 +131,20 @@ const ROUTES: readonly RouteCase[] = [
   { method: 'GET', path: '/api/calibration/certifications', access: EVERYONE, ok: 200 },
   { method: 'GET', path: '/api/calibration/screenings', access: EVERYONE, ok: 200 },
   { method: 'POST', path: '/api/calibration/screenings', access: EVERYONE, ok: 201, body: () => ({ screenedOn: '2026-01-05', method: 'other', result: 'normal' }) },
+  { method: 'GET', path: '/api/readings', access: EVERYONE, ok: 200 },
+  { method: 'POST', path: '/api/readings', access: OBSERVERS, ok: 201, body: (f) => f.readingBody() },
+  { method: 'GET', path: '/api/readings/export.csv', access: EVERYONE, ok: 200 },
+  { method: 'GET', path: '/api/readings/export.xlsx', access: EVERYONE, ok: 200 },
+  { method: 'POST', path: '/api/readings/import', access: OBSERVERS, ok: 201, csv: (f) => f.readingsCsv() },
+  { method: 'GET', path: '/api/readings/:id', access: EVERYONE, ok: 200, url: (f) => `/api/readings/${f.readingId}` },
+  { method: 'POST', path: '/api/readings/:id/supersede', access: OBSERVERS, ok: 201, url: (f, role) => `/api/readings/${f.readingBy(role)}/supersede`, body: (f) => ({ ...f.readingBody(), reason: 'matrix correction' }) },
+  { method: 'POST', path: '/api/readings/:id/review', access: REVIEWERS, ok: 201, url: (f) => `/api/readings/${f.reviewTargetId}/review`, body: () => ({ decision: 'approve' }) },
+  { method: 'GET', path: '/api/readings/:id/reviews', access: EVERYONE, ok: 200, url: (f) => `/api/readings/${f.reviewTargetId}/reviews` },
+  { method: 'GET', path: '/api/reviews/queue', access: REVIEWERS, ok: 200 },
+  { method: 'GET', path: '/api/notifications', access: EVERYONE, ok: 200 },
+  { method: 'POST', path: '/api/notifications/:id/read', access: EVERYONE, ok: 204, url: (f, role) => `/api/notifications/${f.noticeOf(role)}/read` },
+  { method: 'GET', path: '/api/analysis/drift', access: EVERYONE, ok: 200, url: (f) => `/api/analysis/drift?accessionId=${f.accessionId}&characterId=${f.characterId}` },
+  { method: 'GET', path: '/api/analysis/sites', access: EVERYONE, ok: 200, url: (f) => `/api/analysis/sites?accessionId=${f.accessionId}&characterId=${f.characterId}` },
 ];
 
 /** Calibration sessions for the table: an open one with a specimen, a closed one, and a pool to close. */
@@ -148,9 +174,40 @@ async function collectionFixtures(clients: Map<Role, Client>): Promise<Pick<Fixt
   return { accessionId: accession.id, plantId: accession.plants[0]!.id, characterId, descriptorId, observationBy: (role) => own.get(role ?? 'admin') ?? own.get('admin')! };
 }
 
+/** Readings for the table: one of each observing role per correction request (a corrected reading cannot be corrected again). */
+async function readingFixtures(clients: Map<Role, Client>): Promise<Pick<Fixtures, 'readingBody' | 'readingId' | 'readingBy' | 'readingsCsv'>> {
+  const admin = clients.get('admin')!;
+  const accession = (await admin.get('/api/accessions').expect(200)).body[0] as { id: number; accessionNumber: string };
+  const character = ((await admin.get('/api/characters').expect(200)).body as { id: number; code: string }[]).find((c) => c.code === 'petiole.third.upper')!;
+  const readingBody = () => ({ accessionId: accession.id, characterId: character.id, method: 'instrument', lab: [40, 22, -9], light: 'overcast' });
+  const own = new Map<Role, number[]>();
+  for (const role of OBSERVERS) {
+    const ids: number[] = [];
+    // The admin's pool also serves the refused callers' requests, which correct nothing but still take one.
+    for (let i = 0; i < (role === 'admin' ? 4 : 1); i++) ids.push((await clients.get(role)!.post('/api/readings', readingBody()).expect(201)).body.id as number);
+    own.set(role, ids);
+  }
+  const csv = `accessionNumber,characterCode,observedAt,L,a,b,light\r\n${accession.accessionNumber},${character.code},2026-02-10T09:30:00+12:00,41,21,-8,overcast\r\n`;
+  return { readingBody, readingId: own.get('admin')![0]!, readingBy: (role) => (own.get(role ?? 'admin') ?? own.get('admin')!).pop()!, readingsCsv: () => Buffer.from(csv, 'utf8') };
+}
+
+/** Reviews for the table: a demo recorder's reading to decide on, and one notice of each role's user, put straight in the table (a reviewer takes no readings, so could get none through the API). */
+async function reviewFixtures(h: Harness, clients: Map<Role, Client>): Promise<Pick<Fixtures, 'reviewTargetId' | 'noticeOf'>> {
+  const [target] = (await h.ds.query(`SELECT r."id" FROM "reading" r JOIN "user" u ON u."id" = r."observerId" WHERE u."email" = 'recorder@demo.test' AND r."supersededById" IS NULL ORDER BY r."id" LIMIT 1`)) as { id: number }[];
+  assert.ok(target, 'the demo has a reading by the demo recorder');
+  const notices = new Map<Role, number>();
+  for (const role of ROLES) {
+    const me = (await clients.get(role)!.get('/api/auth/me').expect(200)).body as { user: { id: number } };
+    const saved = await h.ds.getRepository(Notification).save({ userId: me.user.id, kind: 'reading-flagged', readingId: target.id, message: 'Matrix notice.', readAt: null });
+    notices.set(role, saved.id);
+  }
+  return { reviewTargetId: target.id, noticeOf: (role) => notices.get(role ?? 'admin')! };
+}
+
 function send(client: Client, route: RouteCase, f: Fixtures, role?: Role) {
   const url = route.url?.(f, role) ?? route.path;
   if (route.upload) return uploadPhoto(client, route.upload(f), 'leaf.png', 'image/png');
+  if (route.csv) return client.raw('post', url).attach('file', route.csv(f), { filename: 'readings.csv', contentType: 'text/csv' });
   if (route.method === 'GET') return client.get(url);
   if (route.method === 'PATCH') return client.patch(url, route.body?.(f));
   if (route.method === 'PUT') return client.put(url, route.body?.(f));
@@ -208,6 +265,8 @@ describe('who may call each API route', () => {
       ...(await calibrationFixtures(admin, target.id)),
       next,
       ...(await collectionFixtures(clients)),
+      ...(await readingFixtures(clients)),
+      ...(await reviewFixtures(h, clients)),
     };
   });
   after(() => h.close());

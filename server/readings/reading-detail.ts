@@ -1,0 +1,73 @@
+// A stored reading as the API shows it: the list row, and the detail with matches, provenance,
+// the supersede chain and the audit history. Reads only.
+import { In, type DataSource, type EntityManager } from 'typeorm';
+import type { ReadingDetail, ReadingHistoryEvent, ReadingProvenance, ReadingVersion } from '../../shared/api/reading-answers.js';
+import { AuditEvent } from '../audit/audit-event.entity.js';
+import { User } from '../auth/user.entity.js';
+import { AppError } from '../core/app-error.js';
+import type { ReferenceSets } from '../reference-sets/reference-sets.js';
+import { toReadingDto } from './reading-list.js';
+import { Reading } from './reading.entity.js';
+
+/** How many chips the detail lists (the same strip of five a photo sample shows). */
+const DETAIL_MATCHES = 5;
+
+/** The audit subject of a reading. */
+export function readingSubject(id: number): string {
+  return `reading:${id}`;
+}
+
+function provenanceOf(r: Reading): ReadingProvenance {
+  return {
+    photoId: r.photoId,
+    photoWidth: r.photo?.width ?? null,
+    photoHeight: r.photo?.height ?? null,
+    region: r.region,
+    neutralRegion: r.neutralRegion,
+    pixelCount: r.pixelCount,
+    pixelsDropped: r.pixelsDropped,
+    spreadDeltaE00: r.spreadDeltaE00,
+    uniform: r.uniform,
+    correction: r.correction,
+    pipeline: r.pipeline,
+    instrument: r.instrument,
+    source: r.source,
+  };
+}
+
+/** The whole supersede chain of a reading, oldest first. Chains are short (a few corrections), so link by link. */
+async function chainOf(m: EntityManager, r: Reading): Promise<ReadingVersion[]> {
+  const select = { id: true, observedAt: true, createdAt: true, supersedeReason: true, supersedesId: true, supersededById: true } as const;
+  const older: Reading[] = [];
+  let back = r.supersedesId;
+  while (back !== null) {
+    const row = await m.findOneOrFail(Reading, { where: { id: back }, select });
+    older.unshift(row);
+    back = row.supersedesId;
+  }
+  const newer: Reading[] = [];
+  let ahead = r.supersededById;
+  while (ahead !== null) {
+    const row = await m.findOneOrFail(Reading, { where: { id: ahead }, select });
+    newer.push(row);
+    ahead = row.supersededById;
+  }
+  return [...older, r, ...newer].map((v) => ({ id: v.id, observedAt: v.observedAt.toISOString(), createdAt: v.createdAt.toISOString(), reason: v.supersedeReason, current: v.supersededById === null }));
+}
+
+async function historyOf(m: EntityManager, id: number): Promise<ReadingHistoryEvent[]> {
+  const events = await m.find(AuditEvent, { where: { subject: readingSubject(id) }, order: { at: 'ASC', id: 'ASC' } });
+  const actorIds = [...new Set(events.map((e) => e.actorId).filter((x): x is number => x !== null))];
+  const names = new Map((actorIds.length ? await m.find(User, { where: { id: In(actorIds) }, select: { id: true, name: true } }) : []).map((u) => [u.id, u.name]));
+  return events.map((e) => ({ id: e.id, at: e.at.toISOString(), actorName: e.actorId === null ? null : (names.get(e.actorId) ?? e.actorEmail), action: e.action, detail: e.detail }));
+}
+
+/** One reading with its provenance, its chips (matched again against the set it was stored with), versions and history; 404 when there is none. */
+export async function getReadingDetail(deps: { ds: DataSource; referenceSets: ReferenceSets }, id: number): Promise<ReadingDetail> {
+  const m = deps.ds.manager;
+  const referenceSets = deps.referenceSets;
+  const r = await m.findOne(Reading, { where: { id }, relations: { accession: true, plant: true, character: true, site: true, observer: true, photo: true } });
+  if (!r) throw AppError.notFound(`There is no reading ${id}.`);
+  const match = await referenceSets.match({ l: r.l, a: r.a, b: r.b }, DETAIL_MATCHES, r.setId);
+  return { ...toReadingDto(r), matches: match.matches, between: match.between, provenance: provenanceOf(r), versions: await chainOf(m, r), history: await historyOf(m, id) };
+}
