@@ -1,4 +1,4 @@
-// Nothing lost on a crash: the real server (server/main.ts, a child process) is killed with
+// Nothing lost on a crash (needs the built client, as main.ts serves it): the real server is killed with
 // SIGKILL in the middle of 100 concurrent photo uploads and reading saves, then started again on
 // the same data folder. Every write the server acknowledged must still be there, the database
 // must pass PRAGMA integrity_check, no row may point at missing photo files, and no photo folder
@@ -9,10 +9,10 @@ import Database from 'better-sqlite3';
 import { existsSync, mkdtempSync, readdirSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
-import { fromRaw } from './photo-fixtures.js';
+import { fromRaw } from '../api/photo-fixtures.js';
 import { mulberry32 } from '../../reference-colors/prng.js';
-import { signInOverHttp } from '../e2e/http-session.js';
-import { startServerProcess } from '../e2e/server-process.js';
+import { signInOverHttp } from './http-session.js';
+import { startServerProcess } from './server-process.js';
 
 const DEMO_PASSWORD = 'demo-pass-2026';
 const CONCURRENT = 100;
