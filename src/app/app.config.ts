@@ -1,7 +1,8 @@
 import { provideHttpClient, withInterceptors, withXsrfConfiguration } from '@angular/common/http';
-import { ApplicationConfig, ErrorHandler, inject, provideAppInitializer, provideBrowserGlobalErrorListeners } from '@angular/core';
+import { ApplicationConfig, ErrorHandler, inject, isDevMode, provideAppInitializer, provideBrowserGlobalErrorListeners } from '@angular/core';
 import { MatIconRegistry } from '@angular/material/icon';
 import { provideRouter, withComponentInputBinding } from '@angular/router';
+import { provideServiceWorker } from '@angular/service-worker';
 import { catchError, forkJoin, of } from 'rxjs';
 
 import { routes } from './app.routes';
@@ -10,6 +11,8 @@ import { AppErrorHandler } from './core/http/app-error-handler';
 import { errorInterceptor } from './core/http/error-interceptor';
 import { progressInterceptor } from './core/http/progress-interceptor';
 import { ServerStatus } from './core/http/server-status';
+import { OfflineQueue } from './core/offline/offline-queue';
+import { offlineSessionInterceptor } from './core/offline/offline-session';
 
 /** Icons come from the self-hosted Material Symbols font, set up before the first icon renders. */
 function useSymbolIcons(): void {
@@ -26,11 +29,15 @@ export const appConfig: ApplicationConfig = {
     provideBrowserGlobalErrorListeners(),
     provideRouter(routes, withComponentInputBinding()),
     provideHttpClient(
-      withInterceptors([progressInterceptor, errorInterceptor]),
+      // offlineSessionInterceptor last, nearest the network: it sees raw failures before they become ApiErrors.
+      withInterceptors([progressInterceptor, errorInterceptor, offlineSessionInterceptor]),
       withXsrfConfiguration({ cookieName: 'XSRF-TOKEN', headerName: 'X-XSRF-TOKEN' }),
     ),
     { provide: ErrorHandler, useClass: AppErrorHandler },
     provideAppInitializer(useSymbolIcons),
     provideAppInitializer(loadSession),
+    provideAppInitializer(() => inject(OfflineQueue).start()),
+    // The app shell, fonts, icons and every screen are cached for use out of range (ngsw-config.json).
+    provideServiceWorker('ngsw-worker.js', { enabled: !isDevMode(), registrationStrategy: 'registerWhenStable:30000' }),
   ],
 };

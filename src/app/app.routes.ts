@@ -41,6 +41,35 @@ export const routes: Routes = [
         loadChildren: () => import('./features/record/record.routes').then((m) => m.RECORD_ROUTES),
       },
       {
+        path: 'queue',
+        title: 'Waiting to send · Hueledger',
+        canActivate: [roleGuard('recorder', 'admin', 'trainer')],
+        loadComponent: () => import('./features/queue/pages/queue-page').then((m) => m.QueuePage),
+      },
+      {
+        path: 'readings',
+        loadChildren: () => import('./features/readings/readings.routes').then((m) => m.READINGS_ROUTES),
+      },
+      {
+        path: 'drift',
+        loadChildren: () => import('./features/drift/drift.routes').then((m) => m.DRIFT_ROUTES),
+      },
+      {
+        path: 'review',
+        title: 'Review · Hueledger',
+        canActivate: [roleGuard('reviewer', 'admin')],
+        loadComponent: () => import('./features/review/pages/review-page').then((m) => m.ReviewPage),
+      },
+      {
+        path: 'notifications',
+        title: 'Notifications · Hueledger',
+        loadComponent: () => import('./features/notifications/pages/notifications-page').then((m) => m.NotificationsPage),
+      },
+      {
+        path: 'calibration',
+        loadChildren: () => import('./features/calibration/calibration.routes').then((m) => m.CALIBRATION_ROUTES),
+      },
+      {
         path: 'reference-set',
         loadChildren: () => import('./features/reference-set/reference-set.routes').then((m) => m.REFERENCE_SET_ROUTES),
       },

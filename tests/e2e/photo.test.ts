@@ -57,6 +57,8 @@ async function takeReading(browser: Browser, url: string, phone: boolean, shot: 
     await page.getByRole('button', { name: 'Open navigation' }).click();
   }
   await page.locator('mat-sidenav').getByText('Record').click();
+  // Record opens the reading form; its photo method leads to the photo page.
+  await page.getByRole('radio', { name: /Photo region/ }).click();
   await page.getByRole('heading', { name: 'Photo reading' }).waitFor();
   assert.match(await page.locator('hl-record-cautions').innerText(), /gloves/);
   assert.match(await page.locator('hl-record-cautions').innerText(), /approximate/);

@@ -4,20 +4,43 @@ const paths = (items: NavItem[]) => items.map((item) => item.path);
 
 describe('nav items', () => {
   it('should show an admin every built section', () => {
-    expect(paths(navItemsFor('admin'))).toEqual(['/record/photo', '/collection', '/reference-set', '/admin/users', '/admin/outbox', '/admin/audit', '/account']);
+    expect(paths(navItemsFor('admin'))).toEqual(['/record', '/queue', '/readings', '/drift', '/review', '/collection', '/calibration', '/reference-set', '/admin/users', '/admin/outbox', '/admin/audit', '/account']);
   });
 
   it('should hide the admin section from a recorder', () => {
-    expect(paths(navItemsFor('recorder'))).toEqual(['/record/photo', '/collection', '/reference-set', '/account']);
+    expect(paths(navItemsFor('recorder'))).toEqual(['/record', '/queue', '/readings', '/drift', '/collection', '/calibration', '/reference-set', '/account']);
   });
 
   it('should show Record to those who take readings, not to a reviewer', () => {
-    expect(paths(navItemsFor('trainer'))).toContain('/record/photo');
-    expect(paths(navItemsFor('reviewer'))).not.toContain('/record/photo');
+    expect(paths(navItemsFor('trainer'))).toContain('/record');
+    expect(paths(navItemsFor('reviewer'))).not.toContain('/record');
+    expect(paths(navItemsFor('reviewer'))).not.toContain('/queue');
+  });
+
+  it('should show Readings to every role', () => {
+    for (const role of ['admin', 'trainer', 'reviewer', 'recorder'] as const) expect(paths(navItemsFor(role))).toContain('/readings');
+  });
+
+  it('should show Drift to every role, right after Readings', () => {
+    for (const role of ['admin', 'trainer', 'reviewer', 'recorder'] as const) {
+      const list = paths(navItemsFor(role));
+      expect(list[list.indexOf('/readings') + 1]).toBe('/drift');
+    }
+  });
+
+  it('should show Review to reviewers and admins only', () => {
+    expect(paths(navItemsFor('reviewer'))).toContain('/review');
+    expect(paths(navItemsFor('admin'))).toContain('/review');
+    expect(paths(navItemsFor('recorder'))).not.toContain('/review');
+    expect(paths(navItemsFor('trainer'))).not.toContain('/review');
   });
 
   it('should show the reference set to every role', () => {
     for (const role of ['admin', 'trainer', 'reviewer', 'recorder'] as const) expect(paths(navItemsFor(role))).toContain('/reference-set');
+  });
+
+  it('should show Calibration to every role: trainers run sessions, anyone may take part', () => {
+    for (const role of ['admin', 'trainer', 'reviewer', 'recorder'] as const) expect(paths(navItemsFor(role))).toContain('/calibration');
   });
 
   it('should show nothing when nobody is signed in', () => {

@@ -27,8 +27,13 @@ export interface NavSection {
  * app.routes.ts with the same roles.
  */
 export const NAV_ITEMS: readonly NavItem[] = [
-  { label: 'Record', icon: 'photo_camera', path: '/record/photo', roles: ['recorder', 'admin', 'trainer'] },
+  { label: 'Record', icon: 'photo_camera', path: '/record', roles: ['recorder', 'admin', 'trainer'] },
+  { label: 'Waiting to send', icon: 'cloud_upload', path: '/queue', roles: ['recorder', 'admin', 'trainer'] },
+  { label: 'Readings', icon: 'table_rows', path: '/readings', roles: EVERYONE },
+  { label: 'Drift', icon: 'insights', path: '/drift', roles: EVERYONE },
+  { label: 'Review', icon: 'fact_check', path: '/review', roles: ['reviewer', 'admin'] },
   { label: 'Collection', icon: 'potted_plant', path: '/collection', roles: EVERYONE },
+  { label: 'Calibration', icon: 'groups', path: '/calibration', roles: EVERYONE },
   { label: 'Reference set', icon: 'palette', path: '/reference-set', roles: EVERYONE },
   { label: 'Users', icon: 'group', path: '/admin/users', roles: ['admin'], group: 'Admin' },
   { label: 'Outbox', icon: 'outgoing_mail', path: '/admin/outbox', roles: ['admin'], group: 'Admin' },

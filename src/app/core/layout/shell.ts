@@ -11,6 +11,8 @@ import { Router, RouterLink, RouterLinkActive, RouterOutlet } from '@angular/rou
 import { AuthStore } from '../auth/auth-store';
 import { RequestProgress } from '../http/request-progress';
 import { ServerStatus } from '../http/server-status';
+import { QueueIndicator } from '../offline/queue-indicator';
+import { NotificationBell } from '../../features/notifications/components/notification-bell';
 import { navSectionsFor } from './nav-items';
 import { Viewport } from './viewport';
 
@@ -25,6 +27,8 @@ import { Viewport } from './viewport';
     MatProgressBarModule,
     MatSidenavModule,
     MatToolbarModule,
+    NotificationBell,
+    QueueIndicator,
     RouterLink,
     RouterLinkActive,
     RouterOutlet,

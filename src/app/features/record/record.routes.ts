@@ -1,8 +1,13 @@
 import { Routes } from '@angular/router';
 
-/** The Record section: each way of taking a reading has its own page; the parent route limits the roles. */
+/** The Record section: the reading form, and the photo page it sends photo readings through; the parent route limits the roles. */
 export const RECORD_ROUTES: Routes = [
-  { path: '', pathMatch: 'full', redirectTo: 'photo' },
+  {
+    path: '',
+    pathMatch: 'full',
+    title: 'New reading · Hueledger',
+    loadComponent: () => import('./pages/reading-form').then((m) => m.ReadingForm),
+  },
   {
     path: 'photo',
     title: 'Photo reading · Hueledger',

@@ -11,11 +11,13 @@ import type { Subscription } from 'rxjs';
 import type { PhotoDto, PhotoSample } from '../../../../../shared/api/photo-answers.js';
 import type { Region } from '../../../../../shared/photo/region.js';
 import { ApiError } from '../../../core/http/api-error';
+import { OfflineQueue } from '../../../core/offline/offline-queue';
 import { PhotoCanvas } from '../components/photo-canvas';
 import { RecordCautions } from '../components/record-cautions';
 import { SampleResult } from '../components/sample-result';
 import { previewRegion, type Pixels } from '../data/photo-preview';
 import { PhotosApi } from '../data/photos-api';
+import { photoSourceFromParams, photoSourceParams } from '../data/photo-source';
 import { defaultRadius, describeRegion, type Tool } from '../data/region-drawing';
 
 /** What the next stroke marks. */
@@ -56,6 +58,7 @@ export class PhotoPage {
   private readonly router = inject(Router);
   private readonly route = inject(ActivatedRoute);
   private readonly canvas = viewChild(PhotoCanvas);
+  private readonly queue = inject(OfflineQueue);
 
   protected readonly tools = TOOLS;
   protected readonly photo = signal<PhotoDto | null>(null);
@@ -70,6 +73,9 @@ export class PhotoPage {
   protected readonly radius = signal(10);
   protected readonly sample = signal<PhotoSample | null>(null);
   protected readonly sampling = signal(false);
+  /** Set when the photo is kept on the phone (no connection): only the phone's preview measures it, marked provisional. */
+  protected readonly localPhotoId = signal<string | null>(null);
+  private localUrl: string | null = null;
 
   private readonly pixels = signal<Pixels | null>(null);
   private uploadRun: Subscription | null = null;
@@ -105,9 +111,29 @@ export class PhotoPage {
     inject(DestroyRef).onDestroy(() => {
       this.uploadRun?.unsubscribe();
       this.sampleRun?.unsubscribe();
+      if (this.localUrl) URL.revokeObjectURL(this.localUrl);
     });
     const id = Number(this.route.snapshot.queryParamMap.get('photo'));
     if (Number.isSafeInteger(id) && id > 0) this.reopen(id);
+    const local = this.route.snapshot.queryParamMap.get('localPhoto');
+    if (local) void this.reopenLocal(local);
+  }
+
+  /** Into the reading form with this photo, region and card (carried in the form's address). */
+  protected saveAsReading(): void {
+    const photo = this.photo();
+    const region = this.tissue();
+    if (!photo || !region) return;
+    const correct = this.route.snapshot.queryParamMap.get('correct');
+    const local = this.localPhotoId();
+    if (local) {
+      const pv = this.preview();
+      void this.queue.notePhoto(local, { region, neutral: this.card(), preview: pv ? { lab: pv.lab, hex: pv.hex } : null }).then(() =>
+        this.router.navigate(['/record'], { queryParams: { ...photoSourceParams({ photoId: 0, localPhotoId: local, region, neutral: this.card() }), correct } }),
+      );
+      return;
+    }
+    void this.router.navigate(['/record'], { queryParams: { ...photoSourceParams({ photoId: photo.id, region, neutral: this.card() }), correct } });
   }
 
   protected photoChosen(event: Event): void {
@@ -170,6 +196,7 @@ export class PhotoPage {
     const photo = this.photo();
     const region = this.tissue();
     if (!photo || !region) return;
+    if (this.localPhotoId()) return; // no server to ask: the preview stands, marked provisional
     const card = this.card();
     this.sampleRun?.unsubscribe();
     this.sampling.set(true);
@@ -190,6 +217,10 @@ export class PhotoPage {
   private startUpload(file: File): void {
     this.uploadRun?.unsubscribe();
     this.problem.set(null);
+    if (navigator.onLine === false) {
+      void this.keepOnPhone(file);
+      return;
+    }
     this.upload.set({ name: file.name, fraction: 0 });
     this.uploadRun = this.api.upload(file, file.name || 'photo.jpg').subscribe({
       next: (progress) => {
@@ -198,13 +229,51 @@ export class PhotoPage {
       },
       error: (error: unknown) => {
         this.upload.set(null);
-        this.problem.set(messageOf(error));
+        if (error instanceof ApiError && (error.status === 0 || (error.status === 504 && error.type === 'about:blank'))) void this.keepOnPhone(file);
+        else this.problem.set(messageOf(error));
       },
     });
   }
 
+  /** Out of range: the photo waits in the offline queue and is shown from the phone. */
+  private async keepOnPhone(file: Blob, name = (file as File).name || 'photo.jpg', existingId: string | null = null): Promise<void> {
+    if (this.localUrl) URL.revokeObjectURL(this.localUrl);
+    this.localUrl = URL.createObjectURL(file);
+    // The browser applies the EXIF orientation, as the server does, so regions mean the same pixels.
+    const image = new Image();
+    image.src = this.localUrl;
+    await image.decode();
+    const size = { width: image.naturalWidth, height: image.naturalHeight };
+    const id = existingId ?? (await this.queue.queuePhoto({ blob: file, name, ...size }));
+    this.localPhotoId.set(id);
+    this.show({ id: 0, ...size, sha256: '', sourceProfile: 'none', mime: file.type, capturedAt: null, orientation: 1, byteSize: file.size, uploadedById: 0, createdAt: new Date().toISOString(), imageUrl: this.localUrl, thumbUrl: this.localUrl });
+  }
+
+  /** Opens a photo kept on the phone again, with the region sent back from the reading form. */
+  private async reopenLocal(id: string): Promise<void> {
+    const kept = await this.queue.photo(id);
+    if (!kept) return this.problem.set('That photo is no longer on this phone; take or choose it again.');
+    await this.keepOnPhone(kept.blob, kept.name, id);
+    const source = photoSourceFromParams(this.route.snapshot.queryParams);
+    if (source?.localPhotoId === id) {
+      this.tissue.set(source.region);
+      this.card.set(source.neutral);
+    }
+  }
+
+  /** Opens a stored photo again; a region sent back from the reading form is drawn and measured again. */
   private reopen(id: number): void {
-    this.api.get(id).subscribe({ next: (photo) => this.show(photo), error: () => this.problem.set('That photo could not be opened; take or choose it again.') });
+    const source = photoSourceFromParams(this.route.snapshot.queryParams);
+    this.api.get(id).subscribe({
+      next: (photo) => {
+        this.show(photo);
+        if (source?.photoId !== photo.id) return;
+        this.tissue.set(source.region);
+        this.card.set(source.neutral);
+        this.measure();
+      },
+      error: () => this.problem.set('That photo could not be opened; take or choose it again.'),
+    });
   }
 
   private show(photo: PhotoDto): void {
@@ -216,7 +285,10 @@ export class PhotoPage {
     this.sample.set(null);
     this.marking.set('tissue');
     this.radius.set(defaultRadius(photo));
-    void this.router.navigate([], { queryParams: { photo: photo.id }, replaceUrl: true });
+    if (photo.id > 0) this.localPhotoId.set(null);
+    const local = this.localPhotoId();
+    // The reading being corrected, if any, stays in the address for the way back to the form.
+    void this.router.navigate([], { queryParams: { ...(local ? { localPhoto: local } : { photo: photo.id }), correct: this.route.snapshot.queryParamMap.get('correct') }, replaceUrl: true });
   }
 }
 

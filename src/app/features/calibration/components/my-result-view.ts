@@ -1,0 +1,31 @@
+import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
+import { MatIconModule } from '@angular/material/icon';
+
+import type { MyCalibrationResult } from '../../../../../shared/api/calibration-answers.js';
+import { verdictFor } from '../../../../../shared/colour/verdict.js';
+import { VerdictMark } from '../../reference-set/components/verdict-mark';
+import { deltaEText } from '../../reference-set/data/chip-words';
+import { biasNumbers, biasWords } from '../data/bias-words';
+import { kappaWords } from '../data/session-words';
+
+/** An observer's own result of a closed session: mean ΔE00, bias in words, and each pick beside its reference. */
+@Component({
+  selector: 'hl-my-result-view',
+  imports: [MatIconModule, VerdictMark],
+  changeDetection: ChangeDetectionStrategy.OnPush,
+  templateUrl: './my-result-view.html',
+  styleUrl: './my-result-view.scss',
+})
+export class MyResultView {
+  readonly result = input.required<MyCalibrationResult>();
+
+  protected readonly observer = computed(() => this.result().observer);
+  protected readonly bias = computed(() => biasWords(this.observer().bias));
+  protected readonly biasFigures = computed(() => {
+    const bias = this.observer().bias;
+    return bias ? biasNumbers(bias) : null;
+  });
+  protected readonly kappa = computed(() => kappaWords(this.result().fleissKappa, this.result().band));
+  protected readonly deltaEText = deltaEText;
+  protected readonly verdictFor = verdictFor;
+}

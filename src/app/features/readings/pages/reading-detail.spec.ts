@@ -1,0 +1,109 @@
+import { provideHttpClient } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { signal } from '@angular/core';
+import { TestBed } from '@angular/core/testing';
+import { provideRouter } from '@angular/router';
+
+import type { ReadingDetail } from '../../../../../shared/api/reading-answers.js';
+import { AuthStore } from '../../../core/auth/auth-store';
+import { ReadingDetailPage } from './reading-detail';
+
+const DETAIL = {
+  id: 40,
+  accessionNumber: 'HL-0001',
+  accessionName: 'Purple Dawn',
+  plantLabel: 'P1',
+  characterLabel: 'Corm flesh, centre',
+  observerId: 4,
+  observerName: 'Juno Pellbright',
+  observedAt: '2026-03-14T09:30:00.000Z',
+  createdAt: '2026-03-14T09:31:00.000Z',
+  method: 'photo',
+  lab: [80, 2, 14],
+  lch: [80, 14.1, 82],
+  hex: '#d9c9a9',
+  inGamut: true,
+  bestChip: 'F-040.012',
+  bestChipName: 'pale weak yellow',
+  bestChipHex: '#dbcaa8',
+  deltaE00: 0.7,
+  verdict: 'indistinguishable',
+  eyeChipCode: null,
+  eyeDeltaE00: null,
+  setId: 'v1',
+  season: 'Wet',
+  seasonYear: 2026,
+  plantAgeMonths: 13.8,
+  light: 'open-shade',
+  secondsSinceCut: 95,
+  leafPosition: null,
+  notes: null,
+  status: 'submitted',
+  siteCode: 'RDP',
+  supersedesId: 39,
+  supersededById: null,
+  matches: [],
+  between: null,
+  provenance: {
+    photoId: 12,
+    photoWidth: 4000,
+    photoHeight: 3000,
+    region: { shape: 'rect', x: 100, y: 100, width: 400, height: 300 },
+    neutralRegion: null,
+    pixelCount: 120000,
+    pixelsDropped: 40,
+    spreadDeltaE00: 0.9,
+    uniform: true,
+    correction: { kind: 'none' },
+    pipeline: 'photo-sample/1',
+    instrument: null,
+    source: null,
+  },
+  versions: [
+    { id: 39, observedAt: '2026-03-14T09:20:00.000Z', createdAt: '2026-03-14T09:21:00.000Z', reason: null, current: false },
+    { id: 40, observedAt: '2026-03-14T09:30:00.000Z', createdAt: '2026-03-14T09:31:00.000Z', reason: 'wrong plant', current: true },
+  ],
+  history: [{ id: 7, at: '2026-03-14T09:31:00.000Z', actorName: 'Juno Pellbright', action: 'reading.supersede', detail: { from: 39 } }],
+} as unknown as ReadingDetail;
+
+describe('ReadingDetailPage', () => {
+  async function open(me: { id: number; role: string }, reading: ReadingDetail = DETAIL): Promise<HTMLElement> {
+    TestBed.configureTestingModule({
+      providers: [provideRouter([]), provideHttpClient(), provideHttpClientTesting(), { provide: AuthStore, useValue: { currentUser: signal({ ...me, email: 'x@demo.test', name: 'X' }) } }],
+    });
+    const http = TestBed.inject(HttpTestingController);
+    const fixture = TestBed.createComponent(ReadingDetailPage);
+    fixture.componentRef.setInput('id', reading.id);
+    fixture.detectChanges();
+    http.expectOne(`/api/readings/${reading.id}`).flush(reading);
+    await fixture.whenStable();
+    fixture.detectChanges();
+    http.verify();
+    return fixture.nativeElement as HTMLElement;
+  }
+
+  it('should show the provenance: crop, chips, correction, pixels, conditions, season, age, versions and history', async () => {
+    const el = await open({ id: 4, role: 'recorder' });
+    expect(el.querySelector('hl-photo-crop svg image')?.getAttribute('href')).toBe('/api/photos/12/image');
+    const text = el.textContent!;
+    for (const words of ['F-040.012', 'indistinguishable', 'No correction', '120,000 used', 'Open shade', '95 s', 'More than a minute after the cut', 'Wet 2026', '13 months', 'Reason: wrong plant', 'reading.supersede']) {
+      expect(text).toContain(words);
+    }
+    expect(el.querySelector('.versions a')?.getAttribute('href')).toBe('/readings/39');
+  });
+
+  it('should offer a correction to its observer and to an admin, not to another recorder', async () => {
+    expect((await open({ id: 4, role: 'recorder' })).textContent).toContain('Correct this reading');
+    TestBed.resetTestingModule();
+    expect((await open({ id: 1, role: 'admin' })).textContent).toContain('Correct this reading');
+    TestBed.resetTestingModule();
+    expect((await open({ id: 9, role: 'recorder' })).textContent).not.toContain('Correct this reading');
+  });
+
+  it('should point a superseded reading to its correction and offer no correction of it', async () => {
+    const el = await open({ id: 4, role: 'recorder' }, { ...DETAIL, supersededById: 41 });
+    expect(el.textContent).toContain('Superseded by a correction');
+    expect(el.querySelector('.hl-notice a')?.getAttribute('href')).toBe('/readings/41');
+    expect(el.textContent).not.toContain('Correct this reading');
+  });
+});

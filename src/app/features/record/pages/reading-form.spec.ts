@@ -1,0 +1,220 @@
+import { provideHttpClient, withInterceptors } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { signal } from '@angular/core';
+import { TestBed, type ComponentFixture } from '@angular/core/testing';
+import { ActivatedRoute, provideRouter } from '@angular/router';
+
+import { AuthStore } from '../../../core/auth/auth-store';
+import { errorInterceptor } from '../../../core/http/error-interceptor';
+import { CUT_SECONDS_WARN } from '../../../../../shared/api/reading-answers.js';
+import { READING_DRAFT_KEY, READING_MEMORY_KEY } from '../data/reading-memory';
+import { TEST_ACCESSIONS, TEST_CHARACTERS, TEST_SITES } from '../testing/collection-fixtures';
+import { ReadingForm } from './reading-form';
+
+describe('ReadingForm', () => {
+  let http: HttpTestingController;
+
+  beforeEach(() => {
+    localStorage.clear();
+    sessionStorage.clear();
+    TestBed.configureTestingModule({
+      providers: [
+        provideRouter([]),
+        provideHttpClient(withInterceptors([errorInterceptor])),
+        provideHttpClientTesting(),
+        // New readings are saved through the offline queue, which keeps who saved them.
+        { provide: AuthStore, useValue: { currentUser: signal({ id: 7, email: 'rec@demo.test', name: 'Rowan Field', role: 'recorder' }), forget: () => undefined } },
+      ],
+    });
+  });
+
+  /** Lets the offline queue store the reading before it sends it, and take in the answer after. */
+  const settle = () => new Promise((resolve) => setTimeout(resolve, 0));
+
+  afterEach(() => {
+    vi.useRealTimers();
+    http.verify();
+  });
+
+  async function open(queryParams: Record<string, string> = {}): Promise<{ fixture: ComponentFixture<ReadingForm>; el: HTMLElement }> {
+    TestBed.overrideProvider(ActivatedRoute, { useValue: { snapshot: { queryParams } } });
+    http = TestBed.inject(HttpTestingController);
+    const fixture = TestBed.createComponent(ReadingForm);
+    fixture.detectChanges();
+    http.expectOne('/api/accessions').flush(TEST_ACCESSIONS);
+    http.expectOne('/api/sites').flush(TEST_SITES);
+    http.expectOne('/api/characters').flush(TEST_CHARACTERS);
+    if (queryParams['correct']) http.expectOne(`/api/readings/${queryParams['correct']}`).flush(savedReading());
+    await fixture.whenStable();
+    fixture.detectChanges();
+    return { fixture, el: fixture.nativeElement as HTMLElement };
+  }
+
+  function click(el: HTMLElement, text: string): void {
+    const button = [...el.querySelectorAll('button')].find((b) => b.textContent?.includes(text));
+    if (!button) throw new Error(`no button "${text}"`);
+    button.click();
+  }
+
+  function form(fixture: ComponentFixture<ReadingForm>) {
+    return (fixture.componentInstance as unknown as { form: ReturnType<typeof import('../data/reading-draft').buildReadingForm> }).form;
+  }
+
+  it('should start from the remembered accession, character and light, with the site of the accession', async () => {
+    localStorage.setItem(READING_MEMORY_KEY, JSON.stringify({ accessionId: 1, characterId: 5, light: 'overcast' }));
+    const { fixture, el } = await open();
+    expect(form(fixture).getRawValue()).toMatchObject({ accessionId: 1, characterId: 5, light: 'overcast', siteId: 1 });
+    expect((el.querySelector('hl-accession-picker input') as HTMLInputElement).value).toBe('HL-0001 · Purple Dawn');
+    expect(el.querySelector('.lights [aria-checked=true]')?.textContent).toContain('Overcast');
+    expect(el.textContent).toContain('Read the outer face below the blade.');
+  });
+
+  it('should take the site from the plant', async () => {
+    localStorage.setItem(READING_MEMORY_KEY, JSON.stringify({ accessionId: 1, characterId: 5, light: 'overcast' }));
+    const { fixture } = await open();
+    form(fixture).controls.plantId.setValue(12);
+    expect(form(fixture).controls.siteId.value).toBe(2);
+  });
+
+  it('should send nothing while answers are missing, and say what is missing', async () => {
+    const { fixture, el } = await open();
+    click(el, 'Save reading');
+    fixture.detectChanges();
+    expect(el.querySelector('.problems')?.textContent).toContain('missing');
+    expect(el.textContent).toContain('Choose how you read the colour.');
+    expect(el.textContent).toContain('Choose the light you read in.');
+  });
+
+  it('should show the server’s refusal beside the field it names', async () => {
+    localStorage.setItem(READING_MEMORY_KEY, JSON.stringify({ accessionId: 1, characterId: 5, light: 'overcast' }));
+    const { fixture, el } = await open();
+    click(el, 'Instrument L*a*b*');
+    fixture.detectChanges();
+    form(fixture).controls.lab.setValue({ l: 40, a: 10, b: 5 });
+    click(el, 'Save reading');
+    await settle();
+    const request = http.expectOne('/api/readings');
+    expect(request.request.body).toMatchObject({ method: 'instrument', lab: [40, 10, 5], accessionId: 1, characterId: 5, siteId: 1, light: 'overcast' });
+    const key = request.request.headers.get('Idempotency-Key');
+    expect(key).toMatch(/^[A-Za-z0-9_-]{16,100}$/);
+    request.flush(
+      { type: 'about:blank', title: 'Invalid request', status: 400, errors: [{ field: 'lab.1', message: 'a* is not what the instrument can read' }] },
+      { status: 400, statusText: 'Bad Request', headers: { 'Content-Type': 'application/problem+json' } },
+    );
+    await settle();
+    fixture.detectChanges();
+    const errors = [...el.querySelectorAll('hl-lab-fields mat-error')].map((e) => e.textContent?.trim());
+    expect(errors).toEqual(['a* is not what the instrument can read']);
+    // Corrected answers are a new request, with a new key.
+    form(fixture).controls.lab.controls.a.setValue(12);
+    click(el, 'Save reading');
+    await settle();
+    const again = http.expectOne('/api/readings');
+    expect(again.request.headers.get('Idempotency-Key')).not.toBe(key);
+    again.flush(savedReading());
+  });
+
+  it('should remember the choices after saving and keep them for the next plant', async () => {
+    const { fixture, el } = await open();
+    const f = form(fixture);
+    f.patchValue({ accessionId: 1, plantId: 11, characterId: 5 });
+    click(el, 'Overcast');
+    click(el, 'Instrument L*a*b*');
+    f.controls.lab.setValue({ l: 40, a: 10, b: 5 });
+    f.controls.notes.setValue('after rain');
+    expect(sessionStorage.getItem(READING_DRAFT_KEY)).toContain('after rain');
+    click(el, 'Save reading');
+    await settle();
+    http.expectOne('/api/readings').flush(savedReading());
+    await settle();
+    fixture.detectChanges();
+    expect(el.textContent).toContain('Saved as reading 31');
+    expect(el.textContent).toContain('F-150.004');
+    expect(el.textContent).toContain('close');
+    expect(JSON.parse(localStorage.getItem(READING_MEMORY_KEY)!)).toEqual({ accessionId: 1, characterId: 5, light: 'overcast' });
+    expect(sessionStorage.getItem(READING_DRAFT_KEY)).toBeNull();
+    click(el, 'Next plant');
+    fixture.detectChanges();
+    expect(f.getRawValue()).toMatchObject({ accessionId: 1, characterId: 5, light: 'overcast', method: 'instrument', plantId: null, notes: null, lab: { l: null, a: null, b: null } });
+  });
+
+  it('should keep the reading on the phone and say "Saved — waiting to send" when there is no connection', async () => {
+    localStorage.setItem(READING_MEMORY_KEY, JSON.stringify({ accessionId: 1, characterId: 5, light: 'overcast' }));
+    const { fixture, el } = await open();
+    click(el, 'Instrument L*a*b*');
+    fixture.detectChanges();
+    form(fixture).controls.lab.setValue({ l: 40, a: 10, b: 5 });
+    click(el, 'Save reading');
+    await settle();
+    http.expectOne('/api/readings').error(new ProgressEvent('error'));
+    await settle();
+    fixture.detectChanges();
+    expect(el.querySelector('.saved.queued')?.textContent).toContain('Saved — waiting to send.');
+    expect(el.querySelector('a[href="/queue"]')).not.toBeNull();
+    expect(el.textContent).toContain('Next plant');
+  });
+
+  it('should open a correction filled in, ask the reason and post it to the supersede route', async () => {
+    const { fixture, el } = await open({ correct: '31' });
+    expect(el.querySelector('h1')?.textContent).toContain('Correct reading 31');
+    expect(form(fixture).getRawValue()).toMatchObject({ accessionId: 1, plantId: 11, characterId: 5, method: 'instrument', lab: { l: 40, a: 10, b: 5 }, light: 'overcast', instrument: 'Meter 2' });
+    click(el, 'Save correction');
+    fixture.detectChanges();
+    expect(el.textContent).toContain('Say why the reading is corrected.');
+    form(fixture).controls.reason.setValue('wrong plant');
+    form(fixture).controls.plantId.setValue(12);
+    click(el, 'Save correction');
+    const request = http.expectOne('/api/readings/31/supersede');
+    expect(request.request.body).toMatchObject({ reason: 'wrong plant', plantId: 12, siteId: 2, method: 'instrument', lab: [40, 10, 5], instrument: 'Meter 2' });
+    request.flush({ ...savedReading(), id: 32 });
+    fixture.detectChanges();
+    expect(el.textContent).toContain('Saved as reading 32');
+  });
+
+  it('should count seconds from the cut for a corm character and warn past the limit', async () => {
+    const { fixture, el } = await open();
+    vi.useFakeTimers();
+    expect(el.querySelector('hl-cut-timer')).toBeNull();
+    form(fixture).controls.characterId.setValue(7);
+    fixture.detectChanges();
+    expect(el.textContent).toContain('Wear gloves and never taste raw tissue.');
+    click(el, 'Cut now');
+    vi.advanceTimersByTime(CUT_SECONDS_WARN * 1000);
+    fixture.detectChanges();
+    expect(form(fixture).controls.secondsSinceCut.value).toBe(CUT_SECONDS_WARN);
+    expect(el.querySelector('hl-cut-timer [role=alert]')).toBeNull();
+    vi.advanceTimersByTime(2000);
+    fixture.detectChanges();
+    expect(form(fixture).controls.secondsSinceCut.value).toBe(CUT_SECONDS_WARN + 2);
+    expect(el.querySelector('hl-cut-timer [role=alert]')?.textContent).toContain('since the cut');
+  });
+});
+
+function savedReading() {
+  return {
+    id: 31,
+    accessionId: 1,
+    plantId: 11,
+    characterId: 5,
+    siteId: 1,
+    light: 'overcast',
+    secondsSinceCut: null,
+    leafPosition: null,
+    notes: null,
+    provenance: { instrument: 'Meter 2', source: null, photoId: null, region: null, neutralRegion: null },
+    accessionNumber: 'HL-0001',
+    plantLabel: 'P1',
+    characterLabel: 'Petiole, upper third',
+    method: 'instrument',
+    hex: '#7a3f6e',
+    lab: [40, 10, 5],
+    lch: [40, 11.2, 26.6],
+    inGamut: true,
+    bestChip: 'F-150.004',
+    deltaE00: 1.2,
+    verdict: 'close',
+    eyeChipCode: null,
+    matches: [],
+    between: null,
+  };
+}

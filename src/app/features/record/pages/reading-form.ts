@@ -1,0 +1,328 @@
+import { ChangeDetectionStrategy, Component, DestroyRef, ElementRef, ErrorHandler, computed, effect, inject, signal, untracked } from '@angular/core';
+import { rxResource, takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
+import { ReactiveFormsModule } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatIconModule } from '@angular/material/icon';
+import { MatInputModule } from '@angular/material/input';
+import { MatProgressSpinnerModule } from '@angular/material/progress-spinner';
+import { MatSelectModule } from '@angular/material/select';
+import { ActivatedRoute, Router, RouterLink } from '@angular/router';
+import { startWith } from 'rxjs';
+
+import type { Accession, Plant } from '../../../../../shared/api/collection-answers.js';
+import { ApiError } from '../../../core/http/api-error';
+import { OfflineQueue } from '../../../core/offline/offline-queue';
+import type { QueuedReadingBody } from '../../../core/offline/queue-item';
+import { readingSummary } from '../../queue/data/reading-summary';
+import { ChipCatalogue } from '../../reference-set/data/chip-catalogue';
+import { applyFieldErrors } from '../../../core/http/field-errors';
+import { CollectionApi } from '../../collection/data/collection-api';
+import { CUT_SECONDS_WARN, LIGHTS, READING_METHODS, type ReadingDetail, type ReadingMethod } from '../../../../../shared/api/reading-answers.js';
+import { ReadingMatch } from '../../readings/components/reading-match';
+import { ReadingsApi, newIdempotencyKey } from '../../readings/data/readings-api';
+import { LIGHT_WORDS, METHOD_WORDS } from '../../readings/data/reading-words';
+import { AccessionPicker } from '../components/accession-picker';
+import { CharacterPicker } from '../components/character-picker';
+import { ChipPicker } from '../components/chip-picker';
+import { CutTimer } from '../components/cut-timer';
+import { LabFields } from '../components/lab-fields';
+import { PhotoSummary } from '../components/photo-summary';
+import { SwatchPicker } from '../components/swatch-picker';
+import { photoSourceFromParams, photoSourceParams } from '../data/photo-source';
+import { ReadingDraftStore, ReadingMemory } from '../data/reading-memory';
+import {
+  SERVER_FIELD_ALIASES,
+  applyMethodRules,
+  buildReadingForm,
+  isCutCharacter,
+  nextPlantValue,
+  photoProblem,
+  readingRequest,
+  type PhotoSource,
+  type ReadingFormValue,
+} from '../data/reading-draft';
+import { prefillFrom } from '../data/reading-prefill';
+
+/** What the draft store keeps: the form's value and the reading it corrects, if any. */
+type KeptDraft = ReadingFormValue & { correcting: number | null };
+
+/** Quick choices for which leaf (our own words; the character's "how to read it" names the usual one). */
+const LEAF_CHOICES = ['2nd open leaf', '3rd open leaf', '4th open leaf'] as const;
+
+/**
+ * Record → a reading: which accession, plant, character and site; one of four methods; the light,
+ * seconds since cut and notes. Remembers the last accession, character and light; after saving it
+ * shows the match and offers the next plant. With `?correct=ID` it posts a correction instead.
+ */
+@Component({
+  selector: 'hl-reading-form',
+  imports: [
+    AccessionPicker,
+    CharacterPicker,
+    ChipPicker,
+    CutTimer,
+    LabFields,
+    MatButtonModule,
+    MatFormFieldModule,
+    MatIconModule,
+    MatInputModule,
+    MatProgressSpinnerModule,
+    MatSelectModule,
+    PhotoSummary,
+    ReactiveFormsModule,
+    ReadingMatch,
+    RouterLink,
+    SwatchPicker,
+  ],
+  templateUrl: './reading-form.html',
+  styleUrl: './reading-form.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class ReadingForm {
+  private readonly collection = inject(CollectionApi);
+  private readonly readings = inject(ReadingsApi);
+  private readonly memory = inject(ReadingMemory);
+  private readonly drafts = inject(ReadingDraftStore);
+  private readonly router = inject(Router);
+  private readonly route = inject(ActivatedRoute);
+  private readonly errors = inject(ErrorHandler);
+  private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
+  private readonly destroyRef = inject(DestroyRef);
+  private readonly queue = inject(OfflineQueue);
+  private readonly chips = inject(ChipCatalogue);
+
+  protected readonly form = buildReadingForm();
+  protected readonly methods = READING_METHODS;
+  protected readonly lights = LIGHTS;
+  protected readonly methodWords = METHOD_WORDS;
+  protected readonly lightWords = LIGHT_WORDS;
+  protected readonly leafChoices = LEAF_CHOICES;
+  protected readonly cutWarnAfter = CUT_SECONDS_WARN;
+
+  protected readonly accessions = rxResource({ stream: () => this.collection.accessions() });
+  protected readonly sites = rxResource({ stream: () => this.collection.sites() });
+  protected readonly characters = rxResource({ stream: () => this.collection.characters() });
+  /** The reading being corrected (`?correct=ID`), if any. */
+  protected readonly correctingId = signal<number | null>(null);
+
+  protected readonly photo = signal<PhotoSource | null>(null);
+  /** Whether the optional eye-picked chip is open (its chips load only then). */
+  protected readonly eyeChipOpen = signal(false);
+  protected readonly saving = signal(false);
+  protected readonly saved = signal<ReadingDetail | null>(null);
+  /** Whether the last save is waiting on this phone to be sent (no connection). */
+  protected readonly queued = signal(false);
+  /** Refusals that name no field on the form, shown above the save button. */
+  protected readonly problems = signal<string[]>([]);
+
+  /** One key per reading being saved: kept across retries of the same answers, new once they change. */
+  private saveKey: string | null = null;
+  private readonly value = toSignal(this.form.valueChanges.pipe(startWith(null)), { initialValue: null });
+  private readonly formValue = computed(() => (this.value(), this.form.getRawValue()));
+  protected readonly method = computed(() => this.formValue().method);
+  protected readonly formValueLight = computed(() => this.formValue().light);
+  protected readonly accession = computed<Accession | null>(() => this.accessionById(this.formValue().accessionId));
+  protected readonly plants = computed<Plant[]>(() => this.accession()?.plants ?? []);
+  protected readonly character = computed(() => (this.characters.hasValue() ? (this.characters.value().find((c) => c.id === this.formValue().characterId) ?? null) : null));
+  protected readonly cut = computed(() => isCutCharacter(this.character()));
+  protected readonly photoMissing = computed(() => photoProblem(this.method(), this.photo()));
+
+  constructor() {
+    const params = this.route.snapshot.queryParams;
+    const correct = Number(params['correct']);
+    const draft = this.drafts.read<KeptDraft>();
+    if (Number.isSafeInteger(correct) && correct > 0) this.startCorrection(correct, draft?.correcting === correct ? draft : null);
+    else this.restore(draft && !draft.correcting ? draft : null);
+    const source = photoSourceFromParams(params);
+    if (source) {
+      this.photo.set(source);
+      this.form.controls.method.setValue('photo');
+    }
+    this.followChanges();
+    // A remembered or drafted accession is known before the list arrives: its site follows once it does.
+    effect(() => {
+      const accession = this.accession();
+      untracked(() => {
+        const c = this.form.controls;
+        if (accession && c.siteId.value === null) c.siteId.setValue(this.plants().find((p) => p.id === c.plantId.value)?.siteId ?? accession.siteId);
+        if (!accession && this.accessions.hasValue() && c.accessionId.value !== null) c.accessionId.setValue(null);
+      });
+    });
+  }
+
+  protected chooseMethod(method: ReadingMethod): void {
+    this.form.controls.method.setValue(method);
+    if (method === 'photo' && !this.photo()) this.goToPhoto();
+  }
+
+  /** Off to the photo page; the half-filled form waits in this tab's storage. */
+  protected goToPhoto(): void {
+    this.keepDraft();
+    const photo = this.photo();
+    const correct = this.correctingId();
+    void this.router.navigate(['/record/photo'], { queryParams: { ...(photo ? { ...photoSourceParams(photo), method: null } : {}), correct } });
+  }
+
+  protected chooseLight(light: (typeof LIGHTS)[number]): void {
+    this.form.controls.light.setValue(light);
+  }
+
+  protected chooseLeaf(leaf: string): void {
+    this.form.controls.leafPosition.setValue(leaf);
+  }
+
+  protected plantFromLabel(plant: Plant): void {
+    this.form.controls.plantId.setValue(plant.id);
+  }
+
+  protected save(): void {
+    this.problems.set([]);
+    this.form.markAllAsTouched();
+    const missing = this.photoMissing();
+    if (this.form.invalid || missing) {
+      this.problems.set([missing ?? 'Some answers are missing or out of range: see the marked fields.']);
+      queueMicrotask(() => this.scrollToFirstProblem());
+      return;
+    }
+    const body = readingRequest(this.form.getRawValue(), this.photo(), this.cut());
+    const correcting = this.correctingId();
+    if (!correcting) {
+      // New readings go through the offline queue: sent at once when online, kept on the phone when not.
+      this.saving.set(true);
+      // A photo still on the phone goes by its local id; the queue uploads it first and its preview is the provisional colour.
+      const photo = this.photo();
+      const local = body.method === 'photo' ? photo?.localPhotoId : undefined;
+      const queued: QueuedReadingBody = local && photo ? { ...body, photo: { localPhotoId: local, region: photo.region, ...(photo.neutral ? { neutral: { region: photo.neutral } } : {}) } } : body;
+      const names = { accession: this.accession(), character: this.character(), method: METHOD_WORDS[body.method].label };
+      (local ? this.queue.photo(local).then((p) => p?.preview ?? null) : Promise.resolve(null))
+        .then((preview) => this.queue.submitReading(queued, readingSummary(queued, names, this.chips.set(), preview)))
+        .then(
+          (result) => (result.queued ? this.savedOnPhone() : this.savedAs(result.reading)),
+          (error: unknown) => this.refused(error),
+        );
+      return;
+    }
+    this.saveKey ??= newIdempotencyKey();
+    const request = correcting
+      ? this.readings.supersede(correcting, { ...body, reason: this.form.controls.reason.value!.trim() }, this.saveKey)
+      : this.readings.create(body, this.saveKey);
+    this.saving.set(true);
+    request.pipe(takeUntilDestroyed(this.destroyRef)).subscribe({
+      next: (reading) => this.savedAs(reading),
+      error: (error: unknown) => this.refused(error),
+    });
+  }
+
+  /** Keeps accession, character, light and site for the next plant of the row; the rest starts empty. */
+  protected nextPlant(): void {
+    const keep = nextPlantValue(this.form.getRawValue());
+    this.form.reset();
+    this.form.patchValue(keep);
+    this.saved.set(null);
+    this.queued.set(false);
+    this.photo.set(null);
+    this.eyeChipOpen.set(false);
+    this.correctingId.set(null);
+    applyMethodRules(this.form, keep.method ?? null, false);
+    if (keep.method === 'photo') this.form.controls.method.setValue(null);
+    void this.router.navigate([], { queryParams: {}, replaceUrl: true });
+    this.host.nativeElement.scrollIntoView?.({ block: 'start' });
+  }
+
+  private savedAs(reading: ReadingDetail): void {
+    this.saveKey = null;
+    const v = this.form.getRawValue();
+    this.memory.remember({ accessionId: v.accessionId, characterId: v.characterId, light: v.light });
+    this.drafts.drop();
+    this.saving.set(false);
+    this.saved.set(reading);
+    this.host.nativeElement.scrollIntoView?.({ block: 'start' });
+  }
+
+  /** Kept in the queue: the form is done with it, as after a save, and says where it waits. */
+  private savedOnPhone(): void {
+    const v = this.form.getRawValue();
+    this.memory.remember({ accessionId: v.accessionId, characterId: v.characterId, light: v.light });
+    this.drafts.drop();
+    this.saving.set(false);
+    this.queued.set(true);
+    this.host.nativeElement.scrollIntoView?.({ block: 'start' });
+  }
+
+  /** A 4xx refusal is shown beside the fields it names; anything else goes to the app's error handler. */
+  private refused(error: unknown): void {
+    this.saving.set(false);
+    if (error instanceof ApiError && error.status >= 400 && error.status < 500 && error.status !== 401) {
+      const unmatched = applyFieldErrors(this.form, error, SERVER_FIELD_ALIASES);
+      const summary = error.detail ? `${error.title} ${error.detail}` : error.title;
+      this.problems.set(unmatched.length ? unmatched : [summary]);
+      queueMicrotask(() => this.scrollToFirstProblem());
+      return;
+    }
+    this.errors.handleError(error);
+  }
+
+  /** The half-filled form goes into this tab's storage, marked with the reading it corrects (if any). */
+  private keepDraft(): void {
+    this.drafts.keep({ ...this.form.getRawValue(), correcting: this.correctingId() });
+  }
+
+  private restore(draft: Partial<KeptDraft> | null): void {
+    if (draft) {
+      this.form.patchValue(draft);
+      return;
+    }
+    const remembered = this.memory.recall();
+    this.form.patchValue({ accessionId: remembered.accessionId, characterId: remembered.characterId, light: remembered.light as ReadingFormValue['light'] });
+  }
+
+  /** Loads the reading being corrected into the form; edits kept for it in this tab go on top. */
+  private startCorrection(id: number, draft: Partial<KeptDraft> | null): void {
+    this.correctingId.set(id);
+    this.readings
+      .get(id)
+      .pipe(takeUntilDestroyed(this.destroyRef))
+      .subscribe({
+        next: (reading) => {
+          const { value, photo } = prefillFrom(reading);
+          this.form.patchValue(value);
+          if (draft) this.form.patchValue(draft);
+          this.eyeChipOpen.set(!!this.form.controls.eyeChipCode.value);
+          if (photo && !this.photo()) this.photo.set(photo);
+        },
+        error: (error: unknown) => this.errors.handleError(error),
+      });
+  }
+
+  /** The method switches its fields' rules; a plant brings its site; the draft follows every change. */
+  private followChanges(): void {
+    const c = this.form.controls;
+    c.method.valueChanges.pipe(startWith(c.method.value), takeUntilDestroyed(this.destroyRef)).subscribe((method) => applyMethodRules(this.form, method, this.correctingId() !== null));
+    c.accessionId.valueChanges.pipe(takeUntilDestroyed(this.destroyRef)).subscribe((id) => {
+      const accession = this.accessionById(id);
+      if (!accession?.plants.some((p) => p.id === c.plantId.value)) c.plantId.setValue(null, { emitEvent: false });
+      if (accession) c.siteId.setValue(accession.siteId);
+    });
+    c.plantId.valueChanges.pipe(takeUntilDestroyed(this.destroyRef)).subscribe((id) => {
+      const plant = this.plants().find((p) => p.id === id);
+      const accession = this.accession();
+      if (plant) c.siteId.setValue(plant.siteId);
+      else if (accession) c.siteId.setValue(accession.siteId);
+    });
+    this.form.valueChanges.pipe(takeUntilDestroyed(this.destroyRef)).subscribe(() => {
+      this.saveKey = null;
+      if (!this.saved()) this.keepDraft();
+    });
+  }
+
+  private accessionById(id: number | null): Accession | null {
+    if (id === null || !this.accessions.hasValue()) return null;
+    return this.accessions.value().find((a) => a.id === id) ?? null;
+  }
+
+  private scrollToFirstProblem(): void {
+    const el = this.host.nativeElement.querySelector('.ng-invalid.ng-touched:not(form), .photo-missing, .problems');
+    el?.scrollIntoView?.({ block: 'center', behavior: 'smooth' });
+  }
+}
