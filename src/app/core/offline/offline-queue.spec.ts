@@ -85,7 +85,7 @@ describe('OfflineQueue', () => {
     await storage.putReading(refused);
     await queue.refresh();
     expect(queue.needsAttention()).toBe(1);
-    await queue.resend(refused.id, { accessionId: 4 }, { accession: 'KALO-018 Mana' });
+    await queue.resend(refused.id, { accessionId: 4 }, { accession: 'HL-0918 Amber Ring' });
     expect(transport.readingCalls[0]!.body.accessionId).toBe(4);
     expect(transport.readingCalls[0]!.key).not.toBe(refused.key);
     expect(queue.pending()).toBe(0);

@@ -43,7 +43,7 @@ export function photoDto(id: number): PhotoDto {
 
 /** A created reading as the server answers it (the fields the queue passes on). */
 export function readingDetail(id: number): ReadingDetail {
-  return { id, accessionNumber: 'KALO-017' } as unknown as ReadingDetail;
+  return { id, accessionNumber: 'HL-0917' } as unknown as ReadingDetail;
 }
 
 /** An instrument reading waiting in the queue. */
@@ -59,7 +59,7 @@ export function pendingReading(over: Partial<PendingReading> = {}): PendingReadi
     lastError: null,
     nextAttemptAt: 0,
     body: { accessionId: 3, characterId: 11, method: 'instrument', lab: [42, 18, -6], light: 'overcast' },
-    summary: { accession: 'KALO-017 Lehua', character: 'Petiole, middle third', method: 'Instrument L*a*b*', hex: '#7a5a6e', lab: [42, 18, -6], code: null, provisional: false },
+    summary: { accession: 'HL-0917 Dusk Purple', character: 'Petiole, middle third', method: 'Instrument L*a*b*', hex: '#7a5a6e', lab: [42, 18, -6], code: null, provisional: false },
     ...over,
   };
 }

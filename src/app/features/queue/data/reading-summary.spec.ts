@@ -3,13 +3,13 @@ import { labFromTuple } from '../../../../../shared/colour/lab.js';
 import type { QueuedReadingBody } from '../../../core/offline/queue-item';
 import { readingSummary, type SummaryNames } from './reading-summary';
 
-const names: SummaryNames = { accession: { accessionNumber: 'KALO-017', name: 'Lehua' }, character: { label: 'Petiole, middle third' }, method: 'Instrument L*a*b*' };
+const names: SummaryNames = { accession: { accessionNumber: 'HL-0917', name: 'Dusk Purple' }, character: { label: 'Petiole, middle third' }, method: 'Instrument L*a*b*' };
 const base: QueuedReadingBody = { accessionId: 3, characterId: 11, method: 'instrument', lab: [38.5, 24.2, -9.6], light: 'overcast' };
 
 describe('readingSummary', () => {
   it('should show an instrument reading as typed, its display colour from the shared conversion', () => {
     const s = readingSummary(base, names, null);
-    expect(s).toEqual({ accession: 'KALO-017 Lehua', character: 'Petiole, middle third', method: 'Instrument L*a*b*', lab: [38.5, 24.2, -9.6], hex: displayHex(labFromTuple([38.5, 24.2, -9.6])).hex, code: null, provisional: false });
+    expect(s).toEqual({ accession: 'HL-0917 Dusk Purple', character: 'Petiole, middle third', method: 'Instrument L*a*b*', lab: [38.5, 24.2, -9.6], hex: displayHex(labFromTuple([38.5, 24.2, -9.6])).hex, code: null, provisional: false });
   });
 
   it('should mark a photo reading provisional, with the phone preview colour', () => {

@@ -53,7 +53,7 @@ describe('QueuePage', () => {
     expect(element.querySelector('.summary')?.textContent).toContain('2 readings waiting to send');
     const cards = element.querySelectorAll('hl-queued-reading');
     expect(cards.length).toBe(2);
-    expect(cards[0]!.textContent).toContain('KALO-017 Lehua');
+    expect(cards[0]!.textContent).toContain('HL-0917 Dusk Purple');
     expect(cards[0]!.textContent).toContain('F-087.014');
     expect(cards[0]!.textContent).toContain('Waiting to send');
     expect(element.querySelector('button.send')?.textContent).toContain('Send now');
