@@ -9,6 +9,7 @@ import { mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, statSync, sy
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { gzipSync } from 'node:zlib';
+import { reportRatio } from './ratio.js';
 
 const root = path.resolve(import.meta.dirname, '..');
 const ng = path.join(root, 'node_modules/@angular/cli/bin/ng.js');
@@ -98,6 +99,7 @@ try {
   console.log('| --- | ---: | ---: | ---: | ---: | ---: | ---: |');
   console.log(`| empty Material app (floor) | ${base.initial.length} | ${kb(sum(base.initial, 'raw'))} | ${kb(sum(base.initial, 'gzip'))} | 1.00× | ${base.lazy.length} | ${kb(sum(base.lazy, 'gzip'))} |`);
   console.log(`| Hueledger | ${app.initial.length} | ${kb(sum(app.initial, 'raw'))} | ${kb(sum(app.initial, 'gzip'))} | ${(sum(app.initial, 'gzip') / sum(base.initial, 'gzip')).toFixed(2)}× | ${app.lazy.length} | ${kb(sum(app.lazy, 'gzip'))} |`);
+  reportRatio('initial client download, gzip', sum(app.initial, 'gzip') / sum(base.initial, 'gzip'), 'an empty Angular Material app, same toolchain');
   console.log('\nLargest lazy chunks (gzip):');
   for (const c of [...app.lazy].sort((a, b) => b.gzip - a.gzip).slice(0, 8)) console.log(`  ${c.file.padEnd(28)} ${kb(c.gzip)}`);
 } finally {

@@ -8,6 +8,7 @@
 import autocannon from 'autocannon';
 import { signInOverHttp, type HttpSession } from '../tests/e2e/http-session.js';
 import { startServerProcess } from '../tests/e2e/server-process.js';
+import { reportRatio } from './ratio.js';
 
 const RECORDERS = 50;
 const AMOUNT = Math.min(50_000, Number(process.argv[2] ?? 4000));
@@ -98,6 +99,8 @@ try {
   for (const p of [floor, work]) console.log(`| ${p.name} | ${p.requests} | ${p.errors} | ${p.non2xx} | ${p.throughput.toFixed(0)} | ${ms(p.p50)} | ${ms(p.p95)} |`);
   console.log(`\nthroughput, health / readings: ${(floor.throughput / work.throughput).toFixed(2)}×`);
   console.log(`p50, readings / health: ${(work.p50 / floor.p50).toFixed(2)}×   p95: ${(work.p95 / floor.p95).toFixed(2)}×`);
+  reportRatio(`load, ${RECORDERS} recorders: throughput`, floor.throughput / work.throughput, 'GET /api/health, same sessions (health req/s ÷ readings req/s)');
+  reportRatio(`load, ${RECORDERS} recorders: p95 latency`, work.p95 / floor.p95, 'GET /api/health, same sessions');
   if (work.errors || work.non2xx || floor.errors || floor.non2xx) {
     console.log('\nSome requests failed: see the counts above.');
     process.exitCode = 1;

@@ -5,6 +5,7 @@ import type { AddressInfo } from 'node:net';
 import { formatHex } from 'culori';
 import { addUser, PASSWORD, startHarness } from '../tests/api/harness.js';
 import { mulberry32 } from '../reference-colors/prng.js';
+import { reportRatio } from './ratio.js';
 
 const REQUESTS = Math.min(5000, Number(process.argv[2] ?? 1000));
 const WARM_UP = 100;
@@ -75,6 +76,7 @@ console.log(`| GET /api/health | ${ms(quantile(times.health, 0.5))} | ${ms(quant
 console.log(`| POST /api/match (k = 5) | ${ms(quantile(times.match, 0.5))} | ${ms(quantile(times.match, 0.95))} |`);
 console.log(`\nmatch / health, medians: ${(quantile(times.match, 0.5) / quantile(times.health, 0.5)).toFixed(2)}× (aim ≤ 2×)`);
 console.log(`match / health, p95:     ${(quantile(times.match, 0.95) / quantile(times.health, 0.95)).toFixed(2)}×`);
+reportRatio('POST /api/match, median', quantile(times.match, 0.5) / quantile(times.health, 0.5), 'GET /api/health', '≤ 2×');
 
 await new Promise((resolve) => server.close(resolve));
 await h.close();

@@ -9,6 +9,7 @@ import type { ReferenceSetFile } from '../shared/colour/reference-set.js';
 import { sampleRegion } from '../reference-colors/coverage.js';
 import { mulberry32 } from '../reference-colors/prng.js';
 import { TISSUE_REGIONS } from '../reference-colors/tissue-regions.js';
+import { reportRatio } from './ratio.js';
 
 const K = 5;
 const QUERIES = Number(process.argv[2] ?? 2000);
@@ -52,5 +53,6 @@ for (const [chipName, labs] of chipSets) {
       `| ${chipName} | ${queryName} | ${us(scanMs)} | ${us(indexMs)} | ${(scanMs / indexMs).toFixed(1)}× | ` +
         `${(stats.differencesComputed / qs.length).toFixed(0)} | ${(stats.cellsOpened / qs.length).toFixed(0)} |`,
     );
+    reportRatio(`match, index vs scan: ${chipName}, ${queryName}`, indexMs / scanMs, 'a full scan of the same chips');
   }
 }

@@ -13,6 +13,7 @@ import { samplePhoto, storePhoto } from '../server/photos/photos.js';
 import { loadReferenceSets } from '../server/reference-sets/load-reference-sets.js';
 import { ReferenceSets } from '../server/reference-sets/reference-sets.js';
 import { mulberry32 } from '../reference-colors/prng.js';
+import { reportRatio } from './ratio.js';
 
 const RUNS = Number(process.argv[2] ?? 9);
 const WIDTH = 4000;
@@ -78,6 +79,7 @@ try {
   for (const [what, body] of cases) {
     const ms = await median(() => samplePhoto(ds, files, match, photo.id, body));
     console.log(`| sample: ${what} | ${ms.toFixed(1)} ms | ${(ms / decodeMs).toFixed(2)}× |`);
+    reportRatio(`photo sample: ${what}`, ms / decodeMs, 'a bare sharp decode of the photo');
   }
   await ds.destroy();
 } finally {
