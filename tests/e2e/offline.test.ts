@@ -19,6 +19,8 @@ const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..')
 async function navigateTo(page: Page, label: string): Promise<void> {
   await page.getByRole('button', { name: 'Open navigation' }).click();
   await page.locator('mat-sidenav').getByRole('link', { name: label, exact: true }).click();
+  // The landing page (Collection) has an "Accessions" tab: wait for the route itself, not a look-alike.
+  if (label === 'Record') await page.waitForURL(/\/record(\?|$)/);
 }
 
 /** Chooses an option of a Material select by its label and the option's text. */
@@ -96,7 +98,7 @@ describe('offline on a phone: cached app, queued readings, sent once back in ran
     await page.waitForFunction(() => navigator.serviceWorker.controller !== null);
     await navigateTo(page, 'Record');
     await page.getByRole('heading', { name: 'New reading' }).waitFor();
-    await page.getByLabel('Accession').waitFor();
+    await page.getByLabel('Accession', { exact: true }).waitFor();
     // The chips of the reference set (for chip by eye) are fetched once and kept.
     await page.getByRole('radio', { name: /Chip by eye/ }).click();
     await page.locator('hl-chip-picker .families hl-swatch-grid button.chip').first().waitFor();
@@ -113,11 +115,11 @@ describe('offline on a phone: cached app, queued readings, sent once back in ran
     await page.goto(`${server.url}/record`);
     await page.getByRole('heading', { name: 'New reading' }).waitFor();
     assert.equal(await page.evaluate(() => navigator.onLine), false);
-    await page.getByLabel('Accession').waitFor();
+    await page.getByLabel('Accession', { exact: true }).waitFor();
   });
 
   test('should record an instrument reading through the form and keep it on the phone', async () => {
-    await page.getByLabel('Accession').fill('HL-0001');
+    await page.getByLabel('Accession', { exact: true }).fill('HL-0001');
     await page.getByRole('option', { name: /HL-0001/ }).click();
     await choose(page, 'Character', 'Petiole, upper third');
     await page.getByRole('radio', { name: /Instrument L\*a\*b\*/ }).click();
@@ -219,7 +221,7 @@ describe('offline on a phone: a photo reading kept on the phone, measured again 
     await page.waitForFunction(() => navigator.serviceWorker.controller !== null);
     known = new Set((await myReadings(page)).map((r) => r.id));
     await navigateTo(page, 'Record');
-    await page.getByLabel('Accession').waitFor();
+    await page.getByLabel('Accession', { exact: true }).waitFor();
   });
   after(async () => {
     await browser?.close();
@@ -228,7 +230,7 @@ describe('offline on a phone: a photo reading kept on the phone, measured again 
 
   test('should keep the photo, show its colour as provisional, and send photo then reading once online', async () => {
     await browser.context.setOffline(true);
-    await page.getByLabel('Accession').fill('HL-0001');
+    await page.getByLabel('Accession', { exact: true }).fill('HL-0001');
     await page.getByRole('option', { name: /HL-0001/ }).click();
     await choose(page, 'Character', 'Petiole, upper third');
     await page.getByRole('radio', { name: 'Overcast' }).click();
