@@ -240,7 +240,12 @@ describe('a trainer runs a calibration session with three observers', () => {
 
     await trainer.locator('hl-results-view').scrollIntoViewIfNeeded();
     await screenshot(trainer, 'calibration-trainer-results-desktop');
-    await trainer.getByRole('radio', { name: 'Table' }).or(trainer.getByRole('button', { name: 'Table' })).first().click();
+    await trainer.locator('hl-bias-chart svg[role="img"]').scrollIntoViewIfNeeded();
+    await screenshot(trainer, 'calibration-trainer-bias-chart-desktop');
+    await trainer.locator('table.pairs').scrollIntoViewIfNeeded();
+    await screenshot(trainer, 'calibration-trainer-pairs-desktop');
+    await trainer.locator('hl-bias-chart mat-button-toggle', { hasText: 'Table' }).click();
+    await trainer.locator('table.bias-table').waitFor();
     assert.equal(await trainer.locator('table.bias-table tbody tr').count(), 3);
   });
 
@@ -277,11 +282,13 @@ describe('a trainer runs a calibration session with three observers', () => {
 
   test('should preview a specimen and its neighbours under three simulated deficiencies', async () => {
     await trainer.goto(sessionUrl);
-    await trainer.locator('ol.specimens li', { hasText: 'Corm skin' }).getByRole('link', { name: 'Vision preview' }).click();
+    await trainer.locator('ol.specimens li', { hasText: 'Petiole, middle third' }).getByRole('link', { name: 'Vision preview' }).click();
     await trainer.waitForURL(/\/calibration\/vision\?lab=/);
     for (const name of ['Normal colour vision', 'Protanopia', 'Deuteranopia', 'Tritanopia']) await trainer.getByRole('region', { name }).waitFor();
     assert.equal(await trainer.locator('section.row').count(), 4);
-    assert.equal(await trainer.locator('section.row').first().locator('button.neighbour').count(), 6);
+    const codes = await trainer.locator('section.row').first().locator('button.neighbour .code').allInnerTexts();
+    assert.equal(codes.length, 6);
+    assert.ok(!codes.includes('F-010.003'), 'the specimen’s own chip is not listed as its neighbour');
     assert.match(await trainer.locator('section.row').nth(2).locator('.sentence').innerText(), /^With deuteranopia/);
     await screenshot(trainer, 'calibration-vision-preview-desktop');
   });

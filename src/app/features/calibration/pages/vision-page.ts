@@ -17,6 +17,8 @@ import { VISION_LABELS } from '../data/vision-simulation';
 
 /** How many neighbouring chips the preview shows (our own: one row fits a phone at two lines). */
 const NEIGHBOURS = 6;
+/** Below this ΔE00 a chip is the centre colour itself (rounding of stored CIELAB, our own). */
+const SAME_COLOUR_DE00 = 0.01;
 /** The chip shown when none is asked for: the first field chip. */
 const DEFAULT_CODE = 'F-001';
 
@@ -56,8 +58,9 @@ export class VisionPage {
     if (!set || !centre) return [];
     const neighbours = set.matcher
       .nearest(centre.lab, NEIGHBOURS + 1)
+      // The centre itself (a chip, or a specimen whose reference is a chip) is not its own neighbour.
+      .filter((m) => m.chip.code !== centre.label && m.deltaE > SAME_COLOUR_DE00)
       .map((m) => m.chip)
-      .filter((chip) => chip.code !== centre.label)
       .slice(0, NEIGHBOURS);
     return visionRows(centre, neighbours, this.severity());
   });
