@@ -14,8 +14,8 @@ export interface TissueRegion {
 
 /**
  * Where taro tissue colours live, in CIELAB D65 LCh(ab) — the regions the fine chips are densest
- * in and the coverage requirement is tested on (DESIGN §6). Our own definitions, drawn wide
- * enough to hold the tissue colours named in the design (chlorophyll greens and yellow-greens of
+ * in and the coverage requirement is tested on (reference-colors/README.md). Our own definitions, drawn wide
+ * enough to hold the tissue colours named in docs/colour.md (chlorophyll greens and yellow-greens of
  * leaves and petioles; anthocyanin pinks, reds, red-purples and purples of petioles, skins and
  * flesh flecks; creams and yellows of corm flesh; browns of skins and scars).
  */

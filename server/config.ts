@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import path from 'node:path';
 
-/** Runtime settings, read and validated once at start-up (DESIGN §3). */
+/** Runtime settings, read and validated once at start-up (README.md, Configuration). */
 export interface Config {
   port: number;
   dataDir: string;

@@ -60,7 +60,7 @@ async function subjects(ds: DataSource, accessionId: number, characterId: number
 
 /**
  * `GET /api/analysis/drift`: season groups of the readings in force, the comparisons between them
- * with the character's own threshold, and every reading as a chart point (DESIGN §7, issue 6).
+ * with the character's own threshold, and every reading as a chart point (docs/colour.md, statistics beside colour).
  */
 export async function driftAnswer(ds: DataSource, q: DriftQuery): Promise<DriftAnswer> {
   const character = await subjects(ds, q.accessionId, q.characterId, q.siteId);

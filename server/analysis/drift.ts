@@ -18,7 +18,7 @@ export interface SeasonGroup {
   seasonYear: number;
   n: number;
   meanLab: Lab;
-  /** Mean ΔE00 of the group's readings from its mean (DESIGN §7). */
+  /** Mean ΔE00 of the group's readings from its mean (docs/colour.md). */
   spreadDeltaE00: number;
   firstObservedAt: Date;
   lastObservedAt: Date;
@@ -66,7 +66,7 @@ export interface DriftAnalysis {
 }
 
 /**
- * Season groups and the comparisons between them (issue 6, DESIGN §7): each group's CIELAB mean
+ * Season groups and the comparisons between them (docs/colour.md, statistics beside colour): each group's CIELAB mean
  * and spread; for consecutive groups in time and for the same season in consecutive years, ΔE00
  * between the means with a seeded permutation test; drift only when the difference is at least
  * the threshold, p < alpha, and both groups have at least `minGroupSize` readings.

@@ -14,7 +14,7 @@ export interface SiteGroupStats {
   siteId: number;
   n: number;
   meanLab: Lab;
-  /** Mean ΔE00 of the site's readings from their CIELAB mean (DESIGN §7). */
+  /** Mean ΔE00 of the site's readings from their CIELAB mean. */
   spreadDeltaE00: number;
 }
 

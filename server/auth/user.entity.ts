@@ -1,7 +1,7 @@
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
 import type { Role, UserRow, UserSummary } from '../../shared/api/auth.js';
 
-/** A person who signs in; role decides what each route allows (DESIGN §4). */
+/** A person who signs in; role decides what each route allows (docs/architecture.md, roles). */
 @Entity('user')
 export class User {
   @PrimaryGeneratedColumn('increment') id: number;

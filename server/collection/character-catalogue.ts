@@ -28,7 +28,7 @@ export interface CharacterSeed {
   colour: boolean;
 }
 
-/** Shown on every corm, cormel and sap character (DESIGN §8; Paull & Chen 2015, CTAHR VC-5). */
+/** Shown on every corm, cormel and sap character (Paull & Chen 2015, CTAHR VC-5; docs/architecture.md, safety notes). */
 export const RAW_TISSUE_CAUTION: string =
   'Wear gloves and never taste raw tissue: calcium oxalate crystals in raw corm and sap irritate ' +
   'skin, mouth and eyes. Wash hands and tools afterwards, and follow local health guidance.';

@@ -7,7 +7,7 @@ import { accessionDescriptors } from './descriptor-values.js';
 import { createDescriptor, listDescriptors, updateDescriptor } from './descriptors.js';
 import { createObservation, listObservations, supersedeObservation } from './observations.js';
 
-/** Who may enter and correct observations (DESIGN §4: the roles that take readings). */
+/** Who may enter and correct observations (the roles that take readings; docs/architecture.md, roles). */
 const OBSERVERS = allow('recorder', 'trainer', 'admin');
 
 /**

@@ -6,7 +6,7 @@ import { Accession } from './accession.entity.js';
 
 /*
  * The passport export after FAO/Bioversity Multi-Crop Passport Descriptors V.2.1 (Alercia,
- * Diulgheroff & Mackay 2015; REFERENCES §7): every field in the standard's order, several values
+ * Diulgheroff & Mackay 2015): every field in the standard's order, several values
  * in one field separated by ";", dates YYYYMMDD with hyphens for unknown parts (stored so).
  * Coordinates and elevation are those of the site that holds the accession, because Hueledger
  * keeps no collecting-site coordinates; say so to anyone who reads DECLATITUDE as MCPD defines it.

@@ -10,7 +10,7 @@ export interface OutgoingMail {
   html?: string;
 }
 
-/** Sends mail through nodemailer; with no SMTP URL, to the built-in fake server (DESIGN §3). */
+/** Sends mail through nodemailer; with no SMTP URL, to the built-in fake server. */
 export interface Mailer {
   send(mail: OutgoingMail): Promise<void>;
   /** Whether mail is caught by the built-in fake server (and so shown on the outbox page). */

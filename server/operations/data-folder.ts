@@ -1,6 +1,6 @@
 import path from 'node:path';
 
-/** What lives in a Hueledger data folder (DESIGN §3); the server, backup and restore agree on these names. */
+/** What lives in a Hueledger data folder (README.md, Configuration); the server, backup and restore agree on these names. */
 export const DATA_FOLDER = {
   /** The SQLite database (WAL mode: `-wal` and `-shm` files sit beside it while open). */
   database: 'hueledger.sqlite',

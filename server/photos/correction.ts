@@ -1,4 +1,4 @@
-// Colour correction from references in the same photo (REFERENCES §8): von Kries gains from a
+// Colour correction from references in the same photo (docs/colour.md, Correction): von Kries gains from a
 // neutral card, or a 3×3 matrix fitted by least squares to patches of known CIELAB.
 import { Matrix, SingularValueDecomposition, solve } from 'ml-matrix';
 import type { PatchResidual } from '../../shared/api/photo-answers.js';
@@ -28,7 +28,7 @@ export function neutralGains(measured: LinearRgb, targetLab?: Lab): { gains: Lin
 
 /**
  * Least-squares 3×3 matrix M with corrected = M · measured, over patches of known CIELAB:
- * M = ((PᵀP)⁻¹PᵀR)ᵀ with P and R the measured and target linear RGB as rows (REFERENCES §8),
+ * M = ((PᵀP)⁻¹PᵀR)ᵀ with P and R the measured and target linear RGB as rows (least squares by the normal equations),
  * solved by QR (ml-matrix `solve`). Refused when the patches do not span three independent
  * colours or when any residual exceeds `PATCH_RESIDUAL_MAX_DE00`.
  */

@@ -88,7 +88,7 @@ export async function photoFile(ds: DataSource, files: PhotoFiles, id: number, w
 }
 
 /**
- * Samples a region of a photo (DESIGN §5, §7): clipped and near-black pixels dropped, the trimmed
+ * Samples a region of a photo (docs/colour.md, Photo sampling): clipped and near-black pixels dropped, the trimmed
  * mean in linear light, corrected by a neutral card or a patch fit when given, CIELAB D65, spread,
  * and the nearest chips. The same photo and body always give the same numbers.
  */

@@ -9,7 +9,7 @@ import { Site } from '../collection/site.entity.js';
 import { Photo } from '../photos/photo.entity.js';
 
 /**
- * One colour observation (DESIGN §4): CIELAB D65 with its display hex, the best chip of the set
+ * One colour observation: CIELAB D65 with its display hex, the best chip of the set
  * current when it was taken (with that set's id), the eye-picked chip, conditions, provenance,
  * derived season and plant age. Never edited in place: a correction is a new row that supersedes
  * this one (linked both ways), and `status` is the only column a later step (review) may change.

@@ -1,4 +1,4 @@
-// Readings as a business component (DESIGN §4, issue 5): create and correct. Nothing is ever
+// Readings as a business component: create and correct. Nothing is ever
 // deleted or edited in place: a correction is a new reading that supersedes the old one, which
 // keeps its row; every change is an audit event. No req/res here.
 import type { EntityManager } from 'typeorm';

@@ -5,7 +5,7 @@ import { fieldChipsByFamily } from '../../shared/colour/field-groups.js';
 import type { ChipDto } from '../../shared/api/reference-set-answers.js';
 import type { LoadedSet } from './reference-sets.js';
 
-/** The caution printed on every card (DESIGN §8). */
+/** The caution printed on every card (docs/colour.md, judging colour by eye). */
 export const PRINT_CAUTION =
   'Caution: printers vary; colours are approximate; re-measure a printed card with an instrument before trusting it. ' +
   'The codes and their CIELAB values are what count: a printed swatch only stands in for them. Judge in good, even light.';

@@ -4,7 +4,7 @@ import { User } from '../auth/user.entity.js';
 import { Reading } from '../readings/reading.entity.js';
 
 /**
- * One reviewer's decision on a reading (DESIGN §4). Reviews are only ever added: a reading's
+ * One reviewer's decision on a reading Reviews are only ever added: a reading's
  * reviews, oldest first, are its review history; the reading's `status` follows the latest.
  */
 @Entity('review')

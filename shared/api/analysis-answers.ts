@@ -1,4 +1,4 @@
-// Answers of the drift and site-comparison routes (issue 6; DESIGN §7 drift contract), without zod
+// Answers of the drift and site-comparison routes (docs/colour.md, statistics beside colour), without zod
 // so the client may import them; the query schemas are in analysis.ts.
 import type { LabTuple } from '../colour/lab.js';
 import type { LchTuple } from './reference-set-answers.js';

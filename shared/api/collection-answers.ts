@@ -15,7 +15,7 @@ export interface Season {
   end: string;
 }
 
-/** A plot or garden with its season scheme (DESIGN §4). */
+/** A plot or garden with its season scheme. */
 export interface Site {
   id: number;
   code: string;
@@ -90,7 +90,7 @@ export interface Accession {
 export const ORGANS = ['leaf', 'petiole', 'sheath', 'sap', 'corm', 'cormel', 'root', 'flower'] as const;
 export type Organ = (typeof ORGANS)[number];
 
-/** What is being read: an organ and the exact part, with how to read it (DESIGN §4). */
+/** What is being read: an organ and the exact part, with how to read it. */
 export interface Character {
   id: number;
   code: string;
@@ -108,7 +108,7 @@ export interface Character {
   driftThreshold: number;
 }
 
-/** ΔE00 acceptability threshold, Paravina et al. (2015), J. Esthet. Restor. Dent. 27:S1–S9 (REFERENCES §4). */
+/** ΔE00 acceptability threshold, Paravina et al. (2015), J. Esthet. Restor. Dent. 27:S1–S9. */
 export const DEFAULT_DRIFT_THRESHOLD = 1.8;
 
 /** MCPD date: YYYYMMDD, unknown month/day as hyphens ("2019----", "201903--"). */
@@ -125,7 +125,7 @@ export const SEASONS_MAX = 12;
 
 /**
  * The columns of `GET /api/accessions/mcpd.csv`, every MCPD V.2.1 field in the standard's order
- * (Alercia, Diulgheroff & Mackay 2015; REFERENCES §7). Fields Hueledger does not hold are blank.
+ * (Alercia, Diulgheroff & Mackay 2015). Fields Hueledger does not hold are blank.
  */
 export const MCPD_FIELDS = [
   'PUID', 'INSTCODE', 'ACCENUMB', 'COLLNUMB', 'COLLCODE', 'COLLNAME', 'COLLINSTADDRESS', 'COLLMISSID',

@@ -1,4 +1,4 @@
-// The readings API's types and constants (DESIGN §4, §7), without zod so the client may import
+// The readings API's types and constants, without zod so the client may import
 // them; the request schemas are in readings.ts.
 import type { LabTuple } from '../colour/lab.js';
 import type { Region } from '../photo/region.js';
@@ -26,7 +26,7 @@ export const LIGHT_LABELS: Readonly<Record<Light, string>> = {
 export const READING_STATUSES = ['submitted', 'approved', 'flagged', 'reread-requested'] as const;
 export type ReadingStatus = (typeof READING_STATUSES)[number];
 
-/** Seconds after cutting past which corm flesh and sap are warned about browning (our own threshold, REFERENCES §6; not a standard). */
+/** Seconds after cutting past which corm flesh and sap are warned about browning (our own threshold, not a standard; browning of fresh-cut flesh: Xiao et al. 2022, Scientia Horticulturae 291:110613). */
 export const CUT_SECONDS_WARN = 60;
 export const CUT_SECONDS_MAX = 86_400;
 export const READINGS_PAGE_SIZE_MAX = 100;

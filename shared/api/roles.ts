@@ -1,4 +1,4 @@
-/** The four roles; each API route states which of them it allows (DESIGN §4). No zod here, so the client can import it cheaply. */
+/** The four roles; each API route states which of them it allows (docs/architecture.md, roles). No zod here, so the client can import it cheaply. */
 export const ROLES = ['admin', 'trainer', 'reviewer', 'recorder'] as const;
 export type Role = (typeof ROLES)[number];
 

@@ -1,6 +1,5 @@
 /*
- * A plant's age at a reading, in completed months, counted on the local calendar of the site
- * (DESIGN §4). Pure and zod-free, so the client shows what the server stores.
+ * A plant's age at a reading, in completed months, counted on the local calendar of the site. Pure and zod-free, so the client shows what the server stores.
  */
 import type { LocalDate } from './season-of.js';
 

@@ -1,5 +1,5 @@
 /*
- * A reading's season and season-year (DESIGN §4): from the instant it was observed, the site's
+ * A reading's season and season-year: from the instant it was observed, the site's
  * IANA time zone and its season scheme. Pure and zod-free, so the client shows what the server
  * stores. The local date comes from `Intl.DateTimeFormat` (ECMA-402), no time-zone library.
  */

@@ -62,7 +62,7 @@ export const ACCEPTABILITY_THRESHOLD_DE00 = 1.8;
  */
 export const DISPLAY_GAMUT_MAPPING = { destination: 'rgb', space: 'oklch' } as const;
 
-/** Largest k the matcher hands out; the API caps `k` at this (DESIGN §7, our own limit). */
+/** Largest k the matcher hands out; the API caps `k` at this (our own limit). */
 export const MAX_NEIGHBOURS = 50;
 
 /** Chips per leaf of the chip index's k-d tree: a speed setting (our own), not a correctness one. */

@@ -164,7 +164,7 @@ export function applyMatrix(m: Matrix3, v: LinearRgb): LinearRgb {
 
 /**
  * Von Kries gains in linear RGB: per channel, target / measured, so the measured neutral becomes
- * the target (REFERENCES §8). Without a target, the grey of the measured luminance.
+ * the target (von Kries; docs/colour.md, Correction). Without a target, the grey of the measured luminance.
  */
 export function vonKriesGains(measured: LinearRgb, target?: LinearRgb): LinearRgb {
   const y = luminance(measured);

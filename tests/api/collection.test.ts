@@ -4,7 +4,7 @@ import type { Accession, Character, Site } from '../../shared/api/collection.js'
 import { assertInvalidFields, assertProblem } from './assert-problem.js';
 import { Client, rowCounts, startHarness, type Harness } from './harness.js';
 
-/** The demo password DESIGN §3 prints for the demo accounts. */
+/** The demo password README.md prints for the demo accounts. */
 const DEMO_PASSWORD = 'demo-pass-2026';
 const DEMO_ACCOUNTS = ['admin', 'trainer', 'reviewer', 'recorder'] as const;
 
@@ -31,7 +31,7 @@ describe('the collection with the demo scenario (/api/sites, /api/characters, /a
   });
   after(() => h.close());
 
-  test('should let each documented demo account sign in with its own role (DESIGN §3)', async () => {
+  test('should let each documented demo account sign in with its own role (README.md)', async () => {
     for (const role of DEMO_ACCOUNTS) {
       const client = role === 'admin' ? admin : role === 'recorder' ? recorder : await new Client(h.app).signIn(`${role}@demo.test`, DEMO_PASSWORD);
       assert.equal((await client.get('/api/auth/me').expect(200)).body.user.role, role);

@@ -15,7 +15,7 @@ interface Row {
   b: number;
 }
 
-/** Readings of one accession + character, grouped by season and season-year, each with its CIELAB mean and spread (mean ΔE00 from the mean, DESIGN §7). */
+/** Readings of one accession + character, grouped by season and season-year, each with its CIELAB mean and spread (mean ΔE00 from the mean). */
 async function groups(h: Harness, accessionNumber: string, characterCode: string) {
   const rows: Row[] = await h.ds.query(
     `SELECT r.season, r.seasonYear, r.l, r.a, r.b FROM reading r JOIN accession a ON a.id = r.accessionId JOIN "character" c ON c.id = r.characterId

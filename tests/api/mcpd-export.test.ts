@@ -1,5 +1,5 @@
 // The accessions' passport export after FAO/Bioversity Multi-Crop Passport Descriptors V.2.1
-// (Alercia, Diulgheroff & Mackay 2015; REFERENCES §7): the field names in the standard's order,
+// (Alercia, Diulgheroff & Mackay 2015): the field names in the standard's order,
 // several values joined by ";", dates YYYYMMDD with hyphens for unknown parts. The CSV is read
 // back with csv-parse, a general-purpose RFC 4180 parser, not with our own code.
 import { after, before, describe, test } from 'node:test';
@@ -8,7 +8,7 @@ import { parse } from 'csv-parse/sync';
 import { assertProblem } from './assert-problem.js';
 import { Client, signedInAs, startHarness, type Harness } from './harness.js';
 
-/** MCPD V.2.1 field names in the order the standard lists them (REFERENCES §7), typed out again here rather than imported. */
+/** MCPD V.2.1 field names in the order the standard lists them, typed out again here rather than imported. */
 const MCPD_V21 = 'PUID,INSTCODE,ACCENUMB,COLLNUMB,COLLCODE,COLLNAME,COLLINSTADDRESS,COLLMISSID,GENUS,SPECIES,SPAUTHOR,SUBTAXA,SUBTAUTHOR,CROPNAME,ACCENAME,ACQDATE,ORIGCTY,COLLSITE,DECLATITUDE,LATITUDE,DECLONGITUDE,LONGITUDE,COORDUNCERT,COORDDATUM,GEOREFMETH,ELEVATION,COLLDATE,BREDCODE,BREDNAME,SAMPSTAT,ANCEST,COLLSRC,DONORCODE,DONORNAME,DONORNUMB,OTHERNUMB,DUPLSITE,DUPLINSTNAME,STORAGE,MLSSTAT,ACCEURL,REMARKS';
 
 describe('GET /api/accessions/mcpd.csv', () => {

@@ -69,7 +69,7 @@ const OBSERVERS: readonly Role[] = ['recorder', 'trainer', 'admin'];
 const TRAINERS: readonly Role[] = ['trainer', 'admin'];
 const REVIEWERS: readonly Role[] = ['reviewer', 'admin'];
 
-/** Every API route (DESIGN §7 and the brief of this foundation); the first test checks the app has no others. */
+/** Every API route (docs/architecture.md, roles); the first test checks the app has no others. */
 const ROUTES: readonly RouteCase[] = [
   { method: 'GET', path: '/api/health', access: 'public', ok: 200 },
   { method: 'POST', path: '/api/auth/login', access: 'public', ok: 200, body: () => ({ email: 'login@test.example', password: PASSWORD }) },

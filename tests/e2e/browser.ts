@@ -48,7 +48,7 @@ export async function openBrowser(appUrl: string, opts: { phone?: boolean } = {}
   };
 }
 
-/** The demo accounts' password (DESIGN §3). */
+/** The demo accounts' password (README.md). */
 export const DEMO_PASSWORD = 'demo-pass-2026';
 
 /** Signs in through the sign-in page and waits until the app has left it. */

@@ -4,7 +4,7 @@ import type { Page } from 'playwright-core';
 import { openBrowser, screenshot, type Browser } from './browser.js';
 import { startServer, type ServerProcess } from './server-process.js';
 
-/** The demo password (DESIGN §3). */
+/** The demo password (README.md). */
 const DEMO_PASSWORD = 'demo-pass-2026';
 
 async function signIn(page: Page, url: string, email: string): Promise<void> {

@@ -9,7 +9,7 @@ import { createMatcher } from '../../shared/colour/matcher.js';
 import { verdictFor } from '../../shared/colour/verdict.js';
 
 // "Between": t of the reading's projection on the CIELAB segment nearest → second nearest,
-// clamped to [0, 1] (DESIGN §5). Constructed cases, so the expected t is known exactly.
+// clamped to [0, 1] (docs/colour.md). Constructed cases, so the expected t is known exactly.
 
 const A: Lab = { l: 50, a: 10, b: 10 };
 const B: Lab = { l: 54, a: 10, b: 10 };

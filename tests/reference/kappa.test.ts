@@ -33,7 +33,7 @@ describe("Fleiss' kappa", () => {
 
   // Fleiss (1971), Psychological Bulletin 76(5):378–382, Table 1: 30 patients, 6 psychiatrists
   // each, categories depression, personality disorder, schizophrenia, neurosis, other; κ = 0.4302
-  // and category totals 26, 26, 30, 55, 43 (REFERENCES.md §3). The 30 rows are transcribed here
+  // and category totals 26, 26, 30, 55, 43. The 30 rows are transcribed here
   // from the `diagnoses` data set of the R package irr (Gamer, Lemon, Fellows & Singh), which
   // distributes that table as one row of six diagnoses per patient; we turned each row into
   // counts. The transcription is checked below against the totals and κ that Fleiss printed.
@@ -104,7 +104,7 @@ describe("Fleiss' kappa", () => {
 });
 
 describe("Cohen's kappa", () => {
-  // REFERENCES.md §3: the 3 × 3 table [[0,4,1],[0,8,0],[0,1,5]] (n = 19), κ = 0.4842, linear-weighted 0.4701.
+  // A worked 3 × 3 table [[0,4,1],[0,8,0],[0,1,5]] (n = 19), κ = 0.4842, linear-weighted 0.4701.
   // By hand: p_o = 13/19, p_e = (5·0 + 8·13 + 6·6)/361 = 140/361 → κ = (13·19 − 140)/(361 − 140) = 107/221.
   const table = [
     [0, 4, 1],

@@ -15,7 +15,7 @@ import { FIELD_CODE_PATTERN, FINE_CODE_PATTERN, type ReferenceSetFile } from '..
 import { coverageOf, sampleRegion } from '../../reference-colors/coverage.js';
 import { TISSUE_REGIONS } from '../../reference-colors/tissue-regions.js';
 
-// The committed reference set (DESIGN §6): determinism, shape and the coverage requirement —
+// The committed reference set (reference-colors/README.md): determinism, shape and the coverage requirement —
 // within sRGB, each tissue region within ΔE00 1.8 of a chip at the 99th percentile, 1.8 being the
 // 50:50 % acceptability threshold of Paravina et al. (2015), J. Esthet. Restor. Dent. 27:S1–S9.
 

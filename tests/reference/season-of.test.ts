@@ -1,7 +1,7 @@
 // A reading's season and season-year from its instant, the site's IANA time zone and its season
 // scheme; and plant age in completed months. Time-zone offsets are those of the IANA tz database
 // as shipped with Node's ICU (Pacific/Fiji UTC+12 with no daylight saving since 2022;
-// America/Port_of_Spain UTC−4 all year). Season rules are our own (DESIGN §4).
+// America/Port_of_Spain UTC−4 all year). Season rules are our own (docs/architecture.md).
 import { describe, test } from 'node:test';
 import assert from 'node:assert/strict';
 import { plantAgeMonths, parseIsoDate } from '../../shared/collection/plant-age.js';

@@ -67,7 +67,7 @@ test('CSS Color 4 rational sRGB → XYZ matrix rounds to the IEC 61966-2-1 four-
   CSS_RGB_TO_XYZ.forEach((row, i) => row.forEach((v, j) => assert.equal(Math.round(v * 1e4) / 1e4, IEC_RGB_TO_XYZ[i][j], `m${i}${j}`)));
 });
 
-test('sRGB white is D65 of xy (0.3127, 0.3290): XYZ (0.95046, 1, 1.08906) (REFERENCES §2)', () => {
+test('sRGB white is D65 of xy (0.3127, 0.3290): XYZ (0.95046, 1, 1.08906) (IEC 61966-2-1; CSS Color 4)', () => {
   const white = toXyz65('#ffffff')!;
   assertClose(white.x, 0.95046, 5e-6, 'X');
   assertClose(white.y, 1, 1e-12, 'Y');

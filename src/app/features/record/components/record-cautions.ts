@@ -1,7 +1,7 @@
 import { ChangeDetectionStrategy, Component } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
 
-/** The two cautions of the Record flow (DESIGN §8): raw tissue irritates; screens are approximate. */
+/** The two cautions of the Record flow: raw tissue irritates; screens are approximate. */
 @Component({
   selector: 'hl-record-cautions',
   imports: [MatIconModule],

@@ -1,7 +1,7 @@
 import { ChangeDetectionStrategy, Component } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
 
-/** The caution beside every swatch shown for judging by eye (DESIGN §8). */
+/** The caution beside every swatch shown for judging by eye (docs/colour.md, judging colour by eye). */
 @Component({
   selector: 'hl-screen-caution',
   imports: [MatIconModule],

@@ -80,7 +80,7 @@ export class ReviewDialog {
   protected readonly keys = DECISION_KEYS;
   protected readonly labels = REVIEW_DECISION_LABELS;
   protected readonly commentMax = REVIEW_COMMENT_MAX;
-  /** Corm flesh and sap brown after the cut (REFERENCES §6; our own threshold). */
+  /** Corm flesh and sap brown after the cut (our own threshold, not a standard). */
   protected readonly cutWarn = CUT_SECONDS_WARN;
   protected readonly methodWords = METHOD_WORDS;
   protected readonly lightWords = LIGHT_WORDS;
