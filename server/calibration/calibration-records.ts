@@ -1,6 +1,6 @@
 // An observer's own results, certifications and colour-vision screenings. No req/res.
 import type { DataSource, FindOptionsWhere } from 'typeorm';
-import type { Certification as CertificationDto, MyCalibrationResult, Screening } from '../../shared/api/calibration-answers.js';
+import type { Certification as CertificationDto, MyCalibrationResult, ObserverStandingRow, Screening } from '../../shared/api/calibration-answers.js';
 import type { CreateScreeningBody } from '../../shared/api/calibration.js';
 import { displayHex } from '../../shared/colour/display-hex.js';
 import { recordAudit, type Actor } from '../audit/audit.js';
@@ -8,7 +8,8 @@ import { User } from '../auth/user.entity.js';
 import { AppError } from '../core/app-error.js';
 import { assertMaySee, findSession, latestScreenings, loadResults, runsSessions, today } from './calibration-load.js';
 import { score } from './calibration-results.js';
-import { CalibrationResponse, Specimen } from './calibration-session.entity.js';
+import { CalibrationResponse, CalibrationSession, Specimen } from './calibration-session.entity.js';
+import { certificationState, sessionOutcomes } from './certificate-standing.js';
 import { Certification, ColourVisionScreening } from './certification.entity.js';
 
 /** The caller's own row and per-specimen picks against the references; 409 while the session is open. */
@@ -30,6 +31,8 @@ export async function myResult(ds: DataSource, user: User, sessionId: number): P
     qualifies: false,
     certified: false,
     screening,
+    failedRules: [{ rule: 'complete', text: 'did not answer in this session' }],
+    advice: 'You did not answer in this session.',
   };
   const specimens = await m.find(Specimen, { where: { session: { id: sessionId } }, order: { position: 'ASC' } });
   const mine = await m.find(CalibrationResponse, { where: { session: { id: sessionId }, observer: { id: user.id } } });
@@ -47,7 +50,7 @@ export async function myResult(ds: DataSource, user: User, sessionId: number): P
       const lab = { l: s.l, a: s.a, b: s.b };
       const ref = { id: s.id, label: s.label, position: s.position, lab, referenceFieldCode: s.referenceFieldCode };
       const r = mine.find((x) => x.specimenId === s.id);
-      const scored = r ? score({ specimenId: s.id, observerId: user.id, fieldCode: r.fieldCode, lab: { l: r.l, a: r.a, b: r.b } }, ref) : null;
+      const scored = r ? score({ specimenId: s.id, observerId: user.id, chipCode: r.chipCode, fieldCode: r.fieldCode, lab: { l: r.l, a: r.a, b: r.b } }, ref) : null;
       return {
         specimenId: s.id,
         label: s.label,
@@ -74,20 +77,24 @@ export async function listCertifications(ds: DataSource, user: User, userId?: nu
   return toCertificationDtos(ds, rows);
 }
 
-async function toCertificationDtos(ds: DataSource, rows: Certification[]): Promise<CertificationDto[]> {
+/** Certifications as the API shows them, with their standing on `on` (default today, UTC). */
+export async function toCertificationDtos(ds: DataSource, rows: Certification[], on = today()): Promise<CertificationDto[]> {
   if (!rows.length) return [];
   const m = ds.manager;
-  const names = await namesOf(ds, rows.map((r) => r.userId));
-  const screenings = await latestScreenings(m, [...new Set(rows.map((r) => r.userId))]);
-  const titles = new Map<number, string>();
-  for (const id of new Set(rows.map((r) => r.sessionId))) titles.set(id, (await findSession(m, id)).title);
+  const userIds = [...new Set(rows.map((r) => r.userId))];
+  const names = await namesOf(ds, userIds);
+  const screenings = await latestScreenings(m, userIds);
+  const outcomes = await sessionOutcomes(m, userIds);
+  const sessions = new Map<number, CalibrationSession>();
+  for (const id of new Set(rows.map((r) => r.sessionId))) sessions.set(id, await findSession(m, id));
   return rows.map((r) => ({
+    ...certificationState(r, sessions.get(r.sessionId)?.closedAt?.getTime() ?? r.createdAt.getTime(), outcomes, on),
     id: r.id,
     userId: r.userId,
     name: names.get(r.userId) ?? '',
     referenceSetId: r.referenceSetId,
     sessionId: r.sessionId,
-    sessionTitle: titles.get(r.sessionId) ?? '',
+    sessionTitle: sessions.get(r.sessionId)?.title ?? '',
     certifiedOn: r.certifiedOn,
     kappa: r.kappa,
     meanDeltaE00: r.meanDeltaE00,
@@ -95,6 +102,26 @@ async function toCertificationDtos(ds: DataSource, rows: Certification[]): Promi
     thresholds: { kappa: r.kappaThreshold, deltaE00: r.deltaE00Threshold },
     screening: screenings.get(r.userId) ?? null,
   }));
+}
+
+/** Every active user with their latest certification's standing: current, lapsed or never certified. */
+export async function listStandings(ds: DataSource, on = today()): Promise<ObserverStandingRow[]> {
+  const users = await ds.getRepository(User).find({ where: { active: true }, order: { name: 'ASC', id: 'ASC' } });
+  const certs = await ds.getRepository(Certification).find({ order: { certifiedOn: 'DESC', id: 'DESC' } });
+  const latest = new Map<number, Certification>();
+  for (const c of certs) if (!latest.has(c.userId)) latest.set(c.userId, c);
+  const dtos = new Map((await toCertificationDtos(ds, [...latest.values()], on)).map((d) => [d.userId, d]));
+  return users.map((u) => {
+    const cert = dtos.get(u.id) ?? null;
+    return { userId: u.id, name: u.name, role: u.role, standing: cert ? cert.status : 'never', latest: cert };
+  });
+}
+
+/** One certification the user may see (their own; trainers and admins any); 404 otherwise. */
+export async function findCertification(ds: DataSource, user: User, id: number): Promise<CertificationDto> {
+  const row = await ds.getRepository(Certification).findOneBy({ id });
+  if (!row || (row.userId !== user.id && !runsSessions(user))) throw AppError.notFound(`There is no certificate ${id}.`);
+  return (await toCertificationDtos(ds, [row]))[0]!;
 }
 
 async function namesOf(ds: DataSource, ids: number[]): Promise<Map<number, string>> {

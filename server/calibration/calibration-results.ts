@@ -8,13 +8,16 @@ import type {
   PairAgreement,
   ScreeningSummary,
   SpecimenAgreement,
+  SpecimenPick,
 } from '../../shared/api/calibration-answers.js';
 import { deltaE00 } from '../../shared/colour/delta-e.js';
 import { displayHex } from '../../shared/colour/display-hex.js';
 import type { Lab, LabTuple } from '../../shared/colour/lab.js';
 import { cohenKappa, pairTable } from '../../shared/stats/cohen-kappa.js';
 import { countTable, fleissKappa, subjectAgreement } from '../../shared/stats/fleiss-kappa.js';
+import { fleissKappaInterval } from '../../shared/stats/kappa-interval.js';
 import { landisKochBand } from '../../shared/stats/landis-koch.js';
+import { failedRules, observerAdvice, sampleWarnings } from './calibration-advice.js';
 
 /** What the results are computed from. */
 export interface ResultsInput {
@@ -23,7 +26,7 @@ export interface ResultsInput {
   specimens: { id: number; label: string; position: number; lab: Lab; referenceFieldCode: string }[];
   /** Everybody invited or answering, in the order rows are shown. */
   observers: { userId: number; name: string }[];
-  responses: { specimenId: number; observerId: number; fieldCode: string; lab: Lab }[];
+  responses: { specimenId: number; observerId: number; chipCode: string; fieldCode: string; lab: Lab }[];
   /** Observers with a stored certification from this session. */
   certified: ReadonlySet<number>;
   /** Each user's latest screening; missing: not screened. */
@@ -36,6 +39,7 @@ export interface ResultsInput {
 export interface Scored {
   specimenId: number;
   observerId: number;
+  chipCode: string;
   fieldCode: string;
   deltaE00: number;
   delta: LabTuple;
@@ -56,6 +60,7 @@ export function computeResults(input: ResultsInput): CalibrationResults {
   const fleiss = fleissKappa(table.length ? table : [[]]);
   const kappa = fleiss.kappa;
   const band = kappa === null ? null : landisKochBand(kappa);
+  const kappaInterval = kappa === null ? null : fleissKappaInterval(table);
 
   const observerRows = observers.map((o) => observerRow(o, scored, specimens.length, kappa, input));
   return {
@@ -67,11 +72,13 @@ export function computeResults(input: ResultsInput): CalibrationResults {
     fleissKappa: kappa,
     band,
     kappaSpecimens: fleiss.subjects,
+    kappaInterval,
+    sampleWarnings: sampleWarnings(fleiss.subjects, observers.length, kappaInterval, session.kappaThreshold),
     observedAgreement: kappa === null ? null : fleiss.observed,
     chanceAgreement: kappa === null ? null : fleiss.chance,
     progress: { specimens: specimens.length, observers: observers.length, responses: scored.length, expected: specimens.length * observers.length },
     observers: observerRows,
-    specimens: specimens.map((s, i) => specimenRow(s, scored.filter((x) => x.specimenId === s.id), picks[i]!)),
+    specimens: specimens.map((s, i) => specimenRow(s, scored.filter((x) => x.specimenId === s.id), picks[i]!, observers, input.responses)),
     pairs: pairRows(observers, specimens, scored),
     computedAt: input.computedAt.toISOString(),
   };
@@ -82,6 +89,7 @@ export function score(r: ResultsInput['responses'][number], specimen: ResultsInp
   return {
     specimenId: r.specimenId,
     observerId: r.observerId,
+    chipCode: r.chipCode,
     fieldCode: r.fieldCode,
     deltaE00: deltaE00(specimen.lab, r.lab),
     delta: [r.lab.l - specimen.lab.l, r.lab.a - specimen.lab.a, r.lab.b - specimen.lab.b],
@@ -103,6 +111,9 @@ function observerRow(o: { userId: number; name: string }, scored: readonly Score
   const complete = specimenCount > 0 && n === specimenCount;
   const { kappaThreshold, deltaE00Threshold } = input.session;
   const qualifies = complete && kappa !== null && kappa >= kappaThreshold && meanDeltaE00 !== null && meanDeltaE00 <= deltaE00Threshold;
+  const fieldHitRate = n ? own.filter((x) => x.fieldHit).length / n : null;
+  const missedLabels = own.filter((x) => !x.fieldHit).map((x) => input.specimens.find((s) => s.id === x.specimenId)?.label ?? '');
+  const advice = { n, specimens: specimenCount, meanDeltaE00, fieldHitRate, bias, kappa, thresholds: { kappa: kappaThreshold, deltaE00: deltaE00Threshold }, missedLabels };
   return {
     userId: o.userId,
     name: o.name,
@@ -110,14 +121,22 @@ function observerRow(o: { userId: number; name: string }, scored: readonly Score
     complete,
     meanDeltaE00,
     bias,
-    fieldHitRate: n ? own.filter((x) => x.fieldHit).length / n : null,
+    fieldHitRate,
     qualifies,
     certified: input.certified.has(o.userId),
     screening: input.screenings.get(o.userId) ?? null,
+    failedRules: qualifies ? [] : failedRules(advice),
+    advice: observerAdvice(advice),
   };
 }
 
-function specimenRow(s: ResultsInput['specimens'][number], answers: readonly Scored[], fieldPicks: readonly string[]): SpecimenAgreement {
+function specimenRow(s: ResultsInput['specimens'][number], answers: readonly Scored[], fieldPicks: readonly string[], observers: ResultsInput['observers'], responses: ResultsInput['responses']): SpecimenAgreement {
+  const picks: SpecimenPick[] = observers.flatMap((o) => {
+    const a = answers.find((x) => x.observerId === o.userId);
+    const r = responses.find((x) => x.observerId === o.userId && x.specimenId === s.id);
+    if (!a || !r) return [];
+    return [{ userId: o.userId, name: o.name, chipCode: a.chipCode, fieldCode: a.fieldCode, chipHex: displayHex(r.lab).hex, deltaE00: a.deltaE00, fieldHit: a.fieldHit }];
+  });
   const counts = new Map<string, number>();
   for (const code of fieldPicks) counts.set(code, (counts.get(code) ?? 0) + 1);
   const countList: ChipCount[] = [...counts].map(([fieldCode, count]) => ({ fieldCode, count })).sort((a, b) => b.count - a.count || a.fieldCode.localeCompare(b.fieldCode));
@@ -132,6 +151,7 @@ function specimenRow(s: ResultsInput['specimens'][number], answers: readonly Sco
     counts: countList,
     agreement: subjectAgreement(countList.map((c) => c.count)),
     meanDeltaE00: mean(answers.map((x) => x.deltaE00)),
+    picks,
   };
 }
 

@@ -9,7 +9,8 @@ import { PhotoFiles } from '../photos/photo-files.js';
 import { samplePhoto } from '../photos/photos.js';
 import { closeSession, respond } from './calibration-close.js';
 import { findSession, loadResults } from './calibration-load.js';
-import { listCertifications, listScreenings, myResult, recordScreening } from './calibration-records.js';
+import { certificatePdf } from './certificate-pdf.js';
+import { findCertification, listCertifications, listScreenings, listStandings, myResult, recordScreening } from './calibration-records.js';
 import { addSpecimen, createSession, inviteParticipants, listSessions, sessionDetail, type PhotoSampler } from './calibration-sessions.js';
 
 /**
@@ -73,6 +74,17 @@ export function calibrationRoutes(ctx: AppContext, dataDir: string | null, logEr
   router.get('/certifications', signedIn, async (req, res) => {
     const { userId } = parse(userFilterQuery, req.query, 'query');
     res.json(await listCertifications(ctx.ds, currentUser(req), userId));
+  });
+
+  router.get('/certifications/:id/certificate.pdf', signedIn, async (req, res) => {
+    const cert = await findCertification(ctx.ds, currentUser(req), idParam(req.params['id']));
+    const pdf = await certificatePdf(cert);
+    res.setHeader('Content-Disposition', `attachment; filename="hueledger-certificate-${cert.id}.pdf"`);
+    res.type('application/pdf').send(pdf);
+  });
+
+  router.get('/standings', runs, async (_req, res) => {
+    res.json(await listStandings(ctx.ds));
   });
 
   router.get('/screenings', signedIn, async (req, res) => {

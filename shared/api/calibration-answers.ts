@@ -2,7 +2,10 @@
 // client can import them cheaply; the request schemas are in calibration.ts.
 import type { LabTuple } from '../colour/lab.js';
 import type { Region } from '../photo/region.js';
+import type { KappaInterval } from '../stats/kappa-interval.js';
 import type { KappaBand } from '../stats/landis-koch.js';
+
+export type { KappaInterval } from '../stats/kappa-interval.js';
 
 export { KAPPA_BANDS, KAPPA_BAND_LABELS, type KappaBand } from '../stats/landis-koch.js';
 
@@ -211,6 +214,34 @@ export interface ObserverResult {
   certified: boolean;
   /** Their latest colour-vision screening; null: not screened. */
   screening: ScreeningSummary | null;
+  /** Each certification rule they do not meet now, in plain words; empty when they qualify. */
+  failedRules: FailedRule[];
+  /** What to tell them: one or two sentences on what their figures mean and what to practise. */
+  advice: string;
+}
+
+/** The certification rules an observer can fail. */
+export const CERTIFICATION_RULES = ['complete', 'kappa', 'deltaE00'] as const;
+export type CertificationRule = (typeof CERTIFICATION_RULES)[number];
+
+/** One rule not met, e.g. `{rule: 'deltaE00', text: 'mean ΔE00 3.33 is above the limit 1.8'}`. */
+export interface FailedRule {
+  rule: CertificationRule;
+  text: string;
+}
+
+/** One observer's pick for a specimen, beside the reference. */
+export interface SpecimenPick {
+  userId: number;
+  name: string;
+  chipCode: string;
+  fieldCode: string;
+  /** Display hex of the picked chip (approximate on screen). */
+  chipHex: string;
+  /** ΔE00 (CIEDE2000) of the picked chip from the reference. */
+  deltaE00: number;
+  /** Whether its field chip is the reference's field chip. */
+  fieldHit: boolean;
 }
 
 /** How many observers picked one field chip for a specimen. */
@@ -236,6 +267,8 @@ export interface SpecimenAgreement {
   agreement: number | null;
   /** Mean ΔE00 of the answers from the reference; null when n = 0. */
   meanDeltaE00: number | null;
+  /** Every observer's pick, in the order observers are listed. */
+  picks: SpecimenPick[];
 }
 
 /** Cohen's κ (unweighted) for two observers over the specimens both answered. */
@@ -280,6 +313,13 @@ export interface CalibrationResults {
   band: KappaBand | null;
   /** Specimens that entered κ (answered by at least two observers). */
   kappaSpecimens: number;
+  /** The 95 % interval of κ (percentile bootstrap over specimens, shared/stats/kappa-interval.ts); null with κ or when too few specimens. */
+  kappaInterval: KappaInterval | null;
+  /**
+   * Why these answers are too few to judge the group by, in plain words (fewer specimens or
+   * observers than our rule of thumb, or an interval that spans the threshold); empty when none.
+   */
+  sampleWarnings: string[];
   /** Mean P_i and P_e behind κ, for the trainer who checks by hand; null with κ. */
   observedAgreement: number | null;
   chanceAgreement: number | null;
@@ -341,6 +381,36 @@ export interface Certification {
   thresholds: CalibrationThresholds;
   /** Their latest colour-vision screening now; null: not screened. */
   screening: ScreeningSummary | null;
+  /** "YYYY-MM-DD": the last day it holds unless it lapses sooner (`certifiedOn` + CERTIFICATION_VALID_MONTHS). */
+  validUntil: string;
+  /** `current`, or `lapsed` by time or by a failed later session. */
+  status: CertificationStatus;
+  /** "YYYY-MM-DD" it lapsed; null while current. */
+  lapsedOn: string | null;
+  /** Why it lapsed, in words; null while current. */
+  lapseReason: string | null;
+}
+
+/**
+ * How long a certification holds: 12 months. Our own choice (common practice for refresher
+ * calibration of visual colour assessors, no source): colour judgement drifts and sets change.
+ */
+export const CERTIFICATION_VALID_MONTHS = 12;
+
+export const CERTIFICATION_STATUSES = ['current', 'lapsed'] as const;
+export type CertificationStatus = (typeof CERTIFICATION_STATUSES)[number];
+
+/** An observer's standing on the Certificates tab: current, lapsed, or never certified. */
+export type ObserverStanding = 'current' | 'lapsed' | 'never';
+
+/** `GET /api/calibration/standings` (trainer, admin): every active user, by name. */
+export interface ObserverStandingRow {
+  userId: number;
+  name: string;
+  role: string;
+  standing: ObserverStanding;
+  /** Their latest certification, if any. */
+  latest: Certification | null;
 }
 
 /** A colour-vision screening record (`GET /api/calibration/screenings`, newest first). */

@@ -4,6 +4,7 @@ import { ROLES, type Role } from '../../shared/api/auth.js';
 import type { AccessRule } from '../../server/core/access.js';
 import { Site } from '../../server/collection/site.entity.js';
 import { Notification } from '../../server/reviews/review.entity.js';
+import { Certification } from '../../server/calibration/certification.entity.js';
 import { listApiRoutes } from './api-routes.js';
 import { assertProblem } from './assert-problem.js';
 import { addUser, Client, mailsTo, PASSWORD, rowCounts, signedInAs, startHarness, tokenFromLink, type Harness } from './harness.js';
@@ -44,6 +45,8 @@ interface Fixtures {
   /** Reviews: a demo recorder's reading in force (nobody in the table took it), and a notice of each role's own user. */
   reviewTargetId: number;
   noticeOf(role?: Role): number;
+  /** A certification of each role's own user (its PDF is theirs to fetch). */
+  certificateOf(role?: Role): number;
 }
 
 /** One API route: who may call it and a request that succeeds for them. */
@@ -129,6 +132,8 @@ const ROUTES: readonly RouteCase[] = [
   { method: 'GET', path: '/api/calibration/sessions/:id/results', access: TRAINERS, ok: 200, url: (f) => `/api/calibration/sessions/${f.calibrationSessionId}/results` },
   { method: 'GET', path: '/api/calibration/sessions/:id/results/me', access: EVERYONE, ok: 200, url: (f) => `/api/calibration/sessions/${f.closedCalibrationSessionId}/results/me` },
   { method: 'GET', path: '/api/calibration/certifications', access: EVERYONE, ok: 200 },
+  { method: 'GET', path: '/api/calibration/certifications/:id/certificate.pdf', access: EVERYONE, ok: 200, url: (f, role) => `/api/calibration/certifications/${f.certificateOf(role)}/certificate.pdf` },
+  { method: 'GET', path: '/api/calibration/standings', access: TRAINERS, ok: 200 },
   { method: 'GET', path: '/api/calibration/screenings', access: EVERYONE, ok: 200 },
   { method: 'POST', path: '/api/calibration/screenings', access: EVERYONE, ok: 201, body: () => ({ screenedOn: '2026-01-05', method: 'other', result: 'normal' }) },
   { method: 'GET', path: '/api/readings', access: EVERYONE, ok: 200 },
@@ -189,6 +194,17 @@ async function readingFixtures(clients: Map<Role, Client>): Promise<Pick<Fixture
   }
   const csv = `accessionNumber,characterCode,observedAt,L,a,b,light\r\n${accession.accessionNumber},${character.code},2026-02-10T09:30:00+12:00,41,21,-8,overcast\r\n`;
   return { readingBody, readingId: own.get('admin')![0]!, readingBy: (role) => (own.get(role ?? 'admin') ?? own.get('admin')!).pop()!, readingsCsv: () => Buffer.from(csv, 'utf8') };
+}
+
+/** One certification of each role's own user, put straight in the table on the closed fixture session. */
+async function certificateFixtures(h: Harness, clients: Map<Role, Client>, sessionId: number): Promise<Pick<Fixtures, 'certificateOf'>> {
+  const certs = new Map<Role, number>();
+  for (const role of ROLES) {
+    const me = (await clients.get(role)!.get('/api/auth/me').expect(200)).body as { user: { id: number } };
+    const saved = await h.ds.getRepository(Certification).save({ user: { id: me.user.id }, session: { id: sessionId }, referenceSetId: 'v1', certifiedOn: '2026-01-05', kappa: 0.8, meanDeltaE00: 1.1, n: 3, kappaThreshold: 0.61, deltaE00Threshold: 1.8 });
+    certs.set(role, saved.id);
+  }
+  return { certificateOf: (role) => certs.get(role ?? 'admin')! };
 }
 
 /** Reviews for the table: a demo recorder's reading to decide on, and one notice of each role's user, put straight in the table (a reviewer takes no readings, so could get none through the API). */
@@ -267,7 +283,9 @@ describe('who may call each API route', () => {
       ...(await collectionFixtures(clients)),
       ...(await readingFixtures(clients)),
       ...(await reviewFixtures(h, clients)),
+      certificateOf: () => 0,
     };
+    Object.assign(f, await certificateFixtures(h, clients, f.closedCalibrationSessionId));
   });
   after(() => h.close());
 

@@ -5,7 +5,7 @@ const screening = (id: number, userId: number, name: string, screenedOn: string)
   id, userId, name, screenedOn, method: 'anomaloscope', result: 'normal', notes: null, recordedById: userId, recordedByName: name, createdAt: `${screenedOn}T09:00:00Z`,
 });
 const cert = (id: number, userId: number, name: string): Certification => ({
-  id, userId, name, referenceSetId: 'v1', sessionId: 1, sessionTitle: 'Spring', certifiedOn: '2026-03-02', kappa: 0.7, meanDeltaE00: 1.2, n: 5, thresholds: { kappa: 0.61, deltaE00: 1.8 }, screening: null,
+  id, userId, name, referenceSetId: 'v1', sessionId: 1, sessionTitle: 'Spring', certifiedOn: '2026-03-02', kappa: 0.7, meanDeltaE00: 1.2, n: 5, thresholds: { kappa: 0.61, deltaE00: 1.8 }, screening: null, validUntil: '2027-03-02', status: 'current', lapsedOn: null, lapseReason: null,
 });
 
 describe('observer records', () => {
