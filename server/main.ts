@@ -48,6 +48,8 @@ async function main(): Promise<void> {
     publicUrl: config.publicUrl,
     clientDir: path.join(root, 'dist/client/browser'),
     dataDir: config.dataDir,
+    trustProxy: config.trustProxy,
+    secureCookies: config.secureCookies,
   });
   const server = app.listen(config.port, () => {
     console.log(`Hueledger on http://localhost:${config.port} (data in ${config.dataDir}; mail ${mailer.catching ? 'caught in the outbox' : 'sent by SMTP'})`);
