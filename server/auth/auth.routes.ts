@@ -6,6 +6,7 @@ import { recordAudit } from '../audit/audit.js';
 import { actorOf, currentUser, publicRoute, signedIn } from '../core/access.js';
 import { AppError } from '../core/app-error.js';
 import type { AppContext } from '../core/context.js';
+import { renewCsrfToken } from '../core/csrf.js';
 import { parse } from '../core/validate.js';
 import { changePassword, noteFailedSignIn, noteSignIn } from './accounts.js';
 import { confirmPasswordReset, requestPasswordReset } from './password-resets.js';
@@ -52,6 +53,7 @@ export function authRoutes(ctx: AppContext, passport: ReturnType<typeof createPa
     // req.login regenerates the session (passport 0.6+), so a pre-sign-in session id is never reused.
     await new Promise<void>((resolve, reject) => req.login(user, (err) => (err ? reject(err) : resolve())));
     await noteSignIn(ctx.ds, user, req.ip ?? null);
+    renewCsrfToken(res);
     res.json({ user: toSummary(user) });
   });
 
@@ -60,6 +62,7 @@ export function authRoutes(ctx: AppContext, passport: ReturnType<typeof createPa
     await new Promise<void>((resolve, reject) => req.logout((err) => (err ? reject(err) : resolve())));
     await new Promise<void>((resolve) => req.session.destroy(() => resolve()));
     if (user) await recordAudit(ctx.ds.manager, { id: user.id, email: user.email, ip: req.ip ?? null }, 'auth.sign-out', `user:${user.id}`);
+    renewCsrfToken(res);
     res.clearCookie(SESSION_COOKIE, { path: '/' }).status(204).end();
   });
 

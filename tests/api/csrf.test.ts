@@ -103,3 +103,60 @@ describe('CSRF protection of state-changing requests', () => {
     assert.equal(res.status, 200);
   });
 });
+
+describe('CSRF tokens are bound to the session', () => {
+  let h: Harness;
+
+  before(async () => {
+    h = await startHarness();
+    await addUser(h.ds, 'recorder', 'bound@test.example');
+  });
+  after(() => h.close());
+
+  /** The XSRF-TOKEN a response sets, if any. */
+  function tokenSetBy(res: request.Response): string | undefined {
+    const cookie = ([] as string[]).concat(res.headers['set-cookie'] ?? []).find((c) => c.startsWith(`${CSRF_COOKIE}=`));
+    return cookie ? decodeURIComponent(cookie.split(';')[0]!.slice(CSRF_COOKIE.length + 1)) : undefined;
+  }
+
+  /** Sends a sign-out with this client's session cookie but the given token as both the XSRF cookie and the header. */
+  function signOutWith(client: Client, token: string) {
+    const sessionCookie = client.cookieHeader().split('; ').filter((c) => !c.startsWith(`${CSRF_COOKIE}=`));
+    return request(h.app)
+      .post('/api/auth/logout')
+      .set('Cookie', [...sessionCookie, `${CSRF_COOKIE}=${encodeURIComponent(token)}`].join('; '))
+      .set('X-XSRF-TOKEN', token);
+  }
+
+  test('should hand out a new token at sign-in, different from the one fetched before', async () => {
+    const client = await new Client(h.app).prime();
+    const anonymous = client.csrfToken;
+    const login = await client.post('/api/auth/login', { email: 'bound@test.example', password: PASSWORD });
+    assert.equal(login.status, 200, login.text);
+    const issued = tokenSetBy(login);
+    assert.ok(issued, 'sign-in sets a new XSRF-TOKEN');
+    assert.notEqual(issued, anonymous);
+  });
+
+  test('should refuse a token fetched anonymously with a signed-in session, and keep the session', async () => {
+    const stranger = await new Client(h.app).prime();
+    const client = await new Client(h.app).signIn('bound@test.example', PASSWORD);
+    const res = await signOutWith(client, stranger.csrfToken);
+    assert.match(assertProblem(res, 403).type, /\/csrf$/);
+    await client.get('/api/auth/me').expect(200);
+  });
+
+  test('should refuse the token of one signed-in session with another session', async () => {
+    const first = await new Client(h.app).signIn('bound@test.example', PASSWORD);
+    const second = await new Client(h.app).signIn('bound@test.example', PASSWORD);
+    const res = await signOutWith(second, first.csrfToken);
+    assert.match(assertProblem(res, 403).type, /\/csrf$/);
+    await second.get('/api/auth/me').expect(200);
+  });
+
+  test('should accept the token issued at sign-in with its own session', async () => {
+    const client = await new Client(h.app).signIn('bound@test.example', PASSWORD);
+    await signOutWith(client, client.csrfToken).expect(204);
+    assertProblem(await client.get('/api/auth/me'), 401);
+  });
+});

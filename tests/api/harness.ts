@@ -100,9 +100,9 @@ export class Client {
     return this.agent.jar.getCookie(name, LOCAL_COOKIES)?.value;
   }
 
-  /** The CSRF token this client echoes. */
+  /** The CSRF token this client echoes: the cookie as it holds it now, as Angular reads it before each request. */
   get csrfToken(): string {
-    return this.csrf;
+    return this.cookie('XSRF-TOKEN') ?? this.csrf;
   }
 
   /** Fetches the CSRF cookie (GET /api/health). */
@@ -117,20 +117,20 @@ export class Client {
     return this.agent.get(url);
   }
   post(url: string, body?: object) {
-    return this.agent.post(url).set('X-XSRF-TOKEN', this.csrf).send(body ?? {});
+    return this.agent.post(url).set('X-XSRF-TOKEN', this.csrfToken).send(body ?? {});
   }
   patch(url: string, body?: object) {
-    return this.agent.patch(url).set('X-XSRF-TOKEN', this.csrf).send(body ?? {});
+    return this.agent.patch(url).set('X-XSRF-TOKEN', this.csrfToken).send(body ?? {});
   }
   put(url: string, body?: object) {
-    return this.agent.put(url).set('X-XSRF-TOKEN', this.csrf).send(body ?? {});
+    return this.agent.put(url).set('X-XSRF-TOKEN', this.csrfToken).send(body ?? {});
   }
   delete(url: string) {
-    return this.agent.delete(url).set('X-XSRF-TOKEN', this.csrf);
+    return this.agent.delete(url).set('X-XSRF-TOKEN', this.csrfToken);
   }
   /** A request carrying the CSRF header and no body yet, for raw or malformed bodies. */
   raw(method: 'post' | 'patch', url: string) {
-    return this.agent[method](url).set('X-XSRF-TOKEN', this.csrf);
+    return this.agent[method](url).set('X-XSRF-TOKEN', this.csrfToken);
   }
 
   /** Signs in; fails the test if refused. */
@@ -138,7 +138,7 @@ export class Client {
     await this.prime();
     const res = await this.post('/api/auth/login', { email, password });
     if (res.status !== 200) throw new Error(`sign-in as ${email} answered ${res.status}: ${res.text}`);
-    // Sign-in regenerates the session; the CSRF cookie stays valid.
+    // Sign-in regenerates the session and hands out a CSRF cookie bound to it, which csrfToken reads.
     return this;
   }
 }
