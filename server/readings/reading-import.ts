@@ -23,6 +23,7 @@ import { Accession, Plant } from '../collection/accession.entity.js';
 import { Character } from '../collection/character.entity.js';
 import { Site } from '../collection/site.entity.js';
 import { AppError, type FieldError } from '../core/app-error.js';
+import { controlCharacterErrors } from '../core/validate.js';
 import { prepareReading, type ReadingValues } from './reading-input.js';
 import { insertReading, type ReadingsDeps } from './readings.js';
 
@@ -149,6 +150,7 @@ async function checkRow(deps: ReadingsDeps, observer: User, row: Record<string, 
     addErrors(errors, parsed.error.issues.map((i) => ({ field: i.path.length ? i.path.join('.') : 'row', message: i.message })));
     return { errors };
   }
+  addErrors(errors, controlCharacterErrors(parsed.data, 'row'));
   if (errors.length) return { errors };
   try {
     return { errors, values: await prepareReading(deps.ds.manager, deps, parsed.data, observer.id) };
