@@ -20,6 +20,7 @@ import { apiNotFound, problemHandler } from './core/problem.js';
 import type { Mailer } from './mail/mailer.js';
 import { outboxRoutes } from './mail/outbox.routes.js';
 import { photoRoutes } from './photos/photos.routes.js';
+import { profileRoutes } from './profile/profile.routes.js';
 import { readingsRoutes } from './readings/readings.routes.js';
 import { notificationRoutes, reviewQueueRoutes, reviewRoutes } from './reviews/reviews.routes.js';
 import { referenceSetRoutes } from './reference-sets/reference-sets.routes.js';
@@ -88,6 +89,7 @@ export function createApp(options: AppOptions): Express {
   api.use('/users', userRoutes(ctx));
   api.use('/outbox', outboxRoutes(ctx));
   api.use('/audit', auditRoutes(ctx));
+  api.use('/', profileRoutes(ctx));
   api.use('/', collectionRoutes(ctx));
   api.use('/', descriptorRoutes(ctx));
   api.use('/', referenceSetRoutes(ctx));

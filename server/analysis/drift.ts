@@ -114,15 +114,16 @@ function compare(g: { key: GroupKey; labs: Lab[] }, h: { key: GroupKey; labs: La
   const reason = !big
     ? `too few readings to tell (${g.labs.length} and ${h.labs.length}; at least ${r.minGroupSize} each)`
     : drift
-      ? `ΔE00 ${test.statistic.toFixed(2)} is at least ${r.threshold} and unlikely by chance (p = ${formatP(test.pValue)})`
+      ? `ΔE00 ${test.statistic.toFixed(2)} is at least ${r.threshold} and unlikely by chance (${formatP(test.pValue)})`
       : !large
         ? `ΔE00 ${test.statistic.toFixed(2)} is below ${r.threshold}`
-        : `ΔE00 ${test.statistic.toFixed(2)} could be chance (p = ${formatP(test.pValue)}, not below ${r.alpha})`;
+        : `ΔE00 ${test.statistic.toFixed(2)} could be chance (${formatP(test.pValue)}, not below ${r.alpha})`;
   return { from: g.key, to: h.key, kind, deltaE00: deltaE00(meanLab(g.labs), meanLab(h.labs)), pValue: test.pValue, test: test.method, permutations: test.permutations, drift, reason };
 }
 
-function formatP(p: number): string {
-  return p < 0.001 ? '< 0.001' : p.toFixed(3);
+/** A p-value as a reason prints it: "p < 0.001" below a thousandth, else "p = 0.012". */
+export function formatP(p: number): string {
+  return p < 0.001 ? 'p < 0.001' : `p = ${p.toFixed(3)}`;
 }
 
 /** A seed per pair of groups, so adding a third group never changes the p-value of the first two (FNV-1a, 32 bits). */

@@ -20,7 +20,7 @@ import { DRIFT_STATE_WORDS, driftState, groupLabel, kindWords, pValueText } from
           </div>
           <div class="body">
             <p class="title"><strong>{{ c.from }}</strong> → <strong>{{ c.to }}</strong><span class="hl-muted">&nbsp;· {{ c.kind }}</span></p>
-            <p class="numbers hl-number">ΔE00 <strong>{{ c.deltaE }}</strong> · <span class="nowrap">p {{ c.p }}</span><span class="hl-muted">&nbsp;({{ c.test }})</span></p>
+            <p class="numbers hl-number">ΔE00 <strong>{{ c.deltaE }}</strong> · <span class="nowrap">{{ c.p }}</span><span class="hl-muted">&nbsp;({{ c.test }})</span></p>
             <p class="reason">{{ c.reason }}</p>
           </div>
         </li>

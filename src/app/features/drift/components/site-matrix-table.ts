@@ -2,6 +2,7 @@ import { ChangeDetectionStrategy, Component, computed, input } from '@angular/co
 import { MatIconModule } from '@angular/material/icon';
 
 import type { SiteComparisonAnswer } from '../../../../../shared/api/analysis-answers.js';
+import { pValueText } from '../data/drift-words';
 import { siteMatrix } from '../data/site-matrix';
 
 /** The site-by-site ΔE00 matrix: numbers, and each cell at or above the threshold marked by an icon and a word as well as shading. */
@@ -30,7 +31,7 @@ import { siteMatrix } from '../data/site-matrix';
                   <span class="value">{{ cell.text }}</span>
                   @if (!cell.self) {
                     <span class="mark"><mat-icon aria-hidden="true">{{ cell.icon }}</mat-icon>{{ cell.word }}</span>
-                    <span class="p hl-muted">p {{ p(cell.pValue) }}</span>
+                    <span class="p hl-muted">{{ p(cell.pValue) }}</span>
                   }
                 </td>
               }
@@ -94,6 +95,6 @@ export class SiteMatrixTable {
 
   protected readonly rows = computed(() => siteMatrix(this.answer()));
   protected p(value: number): string {
-    return value < 0.001 ? '< 0.001' : value.toFixed(3);
+    return pValueText(value);
   }
 }

@@ -43,9 +43,9 @@ describe('drift words', () => {
   });
 
   it('should print p-values to three decimals and tiny ones as below a thousandth', () => {
-    expect(pValueText(0.04321)).toBe('0.043');
-    expect(pValueText(0.0004)).toBe('< 0.001');
-    expect(pValueText(1)).toBe('1.000');
+    expect(pValueText(0.04321)).toBe('p = 0.043');
+    expect(pValueText(0.0004)).toBe('p < 0.001');
+    expect(pValueText(1)).toBe('p = 1.000');
   });
 
   it('should name a group by season and year, and hide the hue of a near-grey', () => {

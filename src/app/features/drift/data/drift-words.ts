@@ -34,9 +34,9 @@ export function driftState(comparison: DriftComparison, answer: Pick<DriftAnswer
   return Math.min(sizeOf(comparison.from), sizeOf(comparison.to)) < answer.minGroupSize ? 'too-few' : 'steady';
 }
 
-/** A p-value as tables print it: "< 0.001" below a thousandth, else three decimals. */
+/** A p-value as tables print it, with its relation: "p < 0.001" below a thousandth, else "p = 0.043". */
 export function pValueText(p: number): string {
-  return p < 0.001 ? '< 0.001' : p.toFixed(3);
+  return p < 0.001 ? 'p < 0.001' : `p = ${p.toFixed(3)}`;
 }
 
 /** "consecutive seasons" or "same season, a year apart". */

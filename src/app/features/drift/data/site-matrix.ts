@@ -44,7 +44,7 @@ export function siteMatrix(answer: SiteComparisonAnswer): MatrixRow[] {
         marked,
         word,
         icon: marked ? 'warning' : 'check',
-        label: self ? `${row.siteCode} against itself` : `${row.siteCode} to ${col.siteCode}: ΔE00 ${deltaEText(deltaE00)}, ${marked ? 'at or above' : 'below'} the threshold ${answer.threshold}, p ${pValueText(pValue)}`,
+        label: self ? `${row.siteCode} against itself` : `${row.siteCode} to ${col.siteCode}: ΔE00 ${deltaEText(deltaE00)}, ${marked ? 'at or above' : 'below'} the threshold ${answer.threshold}, ${pValueText(pValue)}`,
       };
     }),
   }));

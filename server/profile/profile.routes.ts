@@ -1,0 +1,23 @@
+import { Router } from 'express';
+import { profileQuery } from '../../shared/api/profile.js';
+import { signedIn } from '../core/access.js';
+import type { AppContext } from '../core/context.js';
+import { idParam, parse } from '../core/validate.js';
+import { accessionProfile } from './profile.js';
+
+/**
+ * The characterisation of accessions (issue 14): every signed-in role reads a record, since
+ * recorders, reviewers, trainers and admins all need to know what colour a variety is. Mounted
+ * before the collection routes, so fixed paths under /accessions are not read as an id.
+ */
+export function profileRoutes(ctx: AppContext): Router {
+  const router = Router();
+
+  router.get('/accessions/:id/profile', signedIn, async (req, res) => {
+    const id = idParam(req.params['id']);
+    const q = parse(profileQuery, req.query, 'query');
+    res.json(await accessionProfile(ctx, id, q.setId));
+  });
+
+  return router;
+}
