@@ -13,6 +13,7 @@ import { AuthStore } from '../../../core/auth/auth-store';
 import { UnitPreference } from '../../../core/units/unit-preference';
 import { PlantValues } from '../../descriptors/components/plant-values';
 import { AccessionDialog, type AccessionDialogData } from '../components/accession-dialog';
+import { Characterisation } from '../components/characterisation';
 import { PlantDialog, type PlantDialogData } from '../components/plant-dialog';
 import { CollectionApi } from '../data/collection-api';
 import { PASSPORT_LABELS, type PassportField, mcpdDateWords, plantAgeWords, sampleStatusWords } from '../data/passport-fields';
@@ -26,7 +27,7 @@ const SHOWN: readonly PassportField[] = [
 /** One accession: passport with MCPD names, its plants with their age, and the latest descriptor values per plant. */
 @Component({
   selector: 'hl-accession-page',
-  imports: [MatButtonModule, MatIconModule, MatProgressSpinnerModule, PlantValues, RouterLink],
+  imports: [Characterisation, MatButtonModule, MatIconModule, MatProgressSpinnerModule, PlantValues, RouterLink],
   templateUrl: './accession-page.html',
   styleUrl: './accession-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
