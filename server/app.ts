@@ -18,6 +18,8 @@ import type { AppContext } from './core/context.js';
 import { csrfProtection } from './core/csrf.js';
 import { apiNotFound, problemHandler } from './core/problem.js';
 import type { Mailer } from './mail/mailer.js';
+import { DATA_FOLDER } from './operations/data-folder.js';
+import { PhotoFiles } from './photos/photo-files.js';
 import { outboxRoutes } from './mail/outbox.routes.js';
 import { photoRoutes } from './photos/photos.routes.js';
 import { profileRoutes } from './profile/profile.routes.js';
@@ -58,7 +60,9 @@ export function createApp(options: AppOptions): Express {
   const secure = options.secureCookies ?? false;
   const sessions = new SqliteSessionStore(options.dataSource);
   const referenceSets = new ReferenceSets(options.dataSource);
-  const ctx: AppContext = { ds: options.dataSource, mailer: options.mailer, publicUrl: options.publicUrl, sessions, referenceSets };
+  const photos = options.dataDir ? new PhotoFiles(path.join(options.dataDir, DATA_FOLDER.photos)) : null;
+  const logError = options.logError ?? console.error;
+  const ctx: AppContext = { ds: options.dataSource, mailer: options.mailer, publicUrl: options.publicUrl, sessions, referenceSets, photos, logError };
   const passport = createPassport(options.dataSource);
 
   app.use(helmet({ contentSecurityPolicy: { directives: cspDirectives() }, hsts: secure }));
@@ -93,10 +97,10 @@ export function createApp(options: AppOptions): Express {
   api.use('/', collectionRoutes(ctx));
   api.use('/', descriptorRoutes(ctx));
   api.use('/', referenceSetRoutes(ctx));
-  api.use('/photos', photoRoutes(ctx, options.dataDir ?? null));
-  api.use('/calibration', calibrationRoutes(ctx, options.dataDir ?? null));
-  api.use('/readings', reviewRoutes(ctx, options.logError));
-  api.use('/readings', readingsRoutes(ctx, options.dataDir ?? null));
+  api.use('/photos', photoRoutes(ctx));
+  api.use('/calibration', calibrationRoutes(ctx));
+  api.use('/readings', reviewRoutes(ctx));
+  api.use('/readings', readingsRoutes(ctx));
   api.use('/reviews', reviewQueueRoutes(ctx));
   api.use('/notifications', notificationRoutes(ctx));
   api.use('/analysis', analysisRoutes(ctx));
@@ -104,7 +108,7 @@ export function createApp(options: AppOptions): Express {
   app.use('/api', api);
 
   if (options.clientDir) serveClient(app, options.clientDir);
-  app.use(problemHandler(options.logError));
+  app.use(problemHandler(logError));
   return app;
 }
 

@@ -1,11 +1,9 @@
 import { Router } from 'express';
-import path from 'node:path';
 import { createResponseBody, createScreeningBody, createSessionBody, createSpecimenBody, inviteParticipantsBody, userFilterQuery } from '../../shared/api/calibration.js';
 import { labFromTuple } from '../../shared/colour/lab.js';
 import { actorOf, allow, currentUser, signedIn } from '../core/access.js';
 import type { AppContext } from '../core/context.js';
 import { idParam, parse } from '../core/validate.js';
-import { PhotoFiles } from '../photos/photo-files.js';
 import { samplePhoto } from '../photos/photos.js';
 import { closeSession, respond } from './calibration-close.js';
 import { findSession, loadResults } from './calibration-load.js';
@@ -18,10 +16,10 @@ import { addSpecimen, createSession, inviteParticipants, listSessions, sessionDe
  * takes part (unless a session is restricted to invited observers), reads their own result once a
  * session closes, and records their own colour-vision screening.
  */
-export function calibrationRoutes(ctx: AppContext, dataDir: string | null, logError?: (err: unknown) => void): Router {
+export function calibrationRoutes(ctx: AppContext): Router {
   const router = Router();
   const runs = allow('trainer', 'admin');
-  const files = dataDir === null ? null : new PhotoFiles(path.join(dataDir, 'photos'));
+  const files = ctx.photos;
   const sample: PhotoSampler = files
     ? async (photoId, region, setId) => labFromTuple((await samplePhoto(ctx.ds, files, (lab, k) => ctx.referenceSets.match(lab, k, setId), photoId, { region })).lab)
     : null;
@@ -60,7 +58,7 @@ export function calibrationRoutes(ctx: AppContext, dataDir: string | null, logEr
   });
 
   router.post('/sessions/:id/close', runs, async (req, res) => {
-    res.json(await closeSession(ctx.ds, ctx.mailer, ctx.publicUrl, actorOf(req), idParam(req.params['id']), logError));
+    res.json(await closeSession(ctx.ds, ctx.mailer, ctx.publicUrl, actorOf(req), idParam(req.params['id']), ctx.logError));
   });
 
   router.get('/sessions/:id/results', runs, async (req, res) => {

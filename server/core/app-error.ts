@@ -13,6 +13,8 @@ export class AppError extends Error {
     readonly errors?: FieldError[],
     /** A short slug appended to the problem type URI. */
     readonly slug: string = defaultSlug(status),
+    /** RFC 9457 §3.2 extension members, written beside the standard ones. */
+    readonly extensions?: Record<string, unknown>,
   ) {
     super(detail ?? title);
   }

@@ -30,6 +30,7 @@ function toProblem(err: unknown): Record<string, unknown> & { status: number } {
       status: err.status,
       ...(err.detail ? { detail: err.detail } : {}),
       ...(err.errors ? { errors: err.errors } : {}),
+      ...err.extensions,
     };
   }
   const e = err as { status?: number; statusCode?: number; type?: string; expose?: boolean; message?: string };

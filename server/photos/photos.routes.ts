@@ -1,13 +1,11 @@
-import { Router, type RequestHandler } from 'express';
-import multer from 'multer';
-import path from 'node:path';
+import { Router } from 'express';
 import { PHOTO_FIELD, PHOTO_MAX_BYTES, sampleBody } from '../../shared/api/photos.js';
 import { actorOf, allow, signedIn } from '../core/access.js';
 import { AppError } from '../core/app-error.js';
 import type { AppContext } from '../core/context.js';
+import { receiveOneFile } from '../core/file-upload.js';
 import { idParam, parse } from '../core/validate.js';
 import { idempotent } from '../idempotency/idempotent.js';
-import { PhotoFiles } from './photo-files.js';
 import { findPhotoRow, photoFile, samplePhoto, storePhoto, type MatchColour } from './photos.js';
 import { toPhotoDto } from './photo.entity.js';
 
@@ -16,13 +14,13 @@ import { toPhotoDto } from './photo.entity.js';
  * (recorder, trainer, admin); everyone signed in may view a photo and sample it, so a reviewer can
  * re-measure the region a reading was taken from. Files live under `<dataDir>/photos/`.
  */
-export function photoRoutes(ctx: AppContext, dataDir: string | null): Router {
+export function photoRoutes(ctx: AppContext): Router {
   const router = Router();
-  if (dataDir === null) {
+  const files = ctx.photos;
+  if (files === null) {
     router.use((_req, _res, next) => next(new AppError(503, 'Photos unavailable', 'This server was started without a data folder for photos.', undefined, 'no-photo-storage')));
     return router;
   }
-  const files = new PhotoFiles(path.join(dataDir, 'photos'));
   const match: MatchColour = (lab, k) => ctx.referenceSets.match(lab, k);
 
   router.post('/', allow('recorder', 'trainer', 'admin'), receivePhoto, idempotent(ctx), async (req, res) => {
@@ -52,22 +50,13 @@ export function photoRoutes(ctx: AppContext, dataDir: string | null): Router {
   return router;
 }
 
-/** multer in memory (no temporary files), one file of at most 25 MB; its refusals become problem+json. */
-const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: PHOTO_MAX_BYTES, files: 1, fields: 4, parts: 6 } }).single(PHOTO_FIELD);
-
-const receivePhoto: RequestHandler = (req, res, next) => {
-  if (!req.is('multipart/form-data')) {
-    return next(new AppError(415, 'Unsupported media type', `Send the photo as multipart/form-data in the field "${PHOTO_FIELD}".`, undefined, 'unsupported-media-type'));
-  }
-  upload(req, res, (err: unknown) => {
-    if (!err) return next();
-    if (err instanceof multer.MulterError) {
-      if (err.code === 'LIMIT_FILE_SIZE') {
-        return next(new AppError(413, 'Payload too large', `The photo is larger than ${PHOTO_MAX_BYTES / 1024 / 1024} MB. Use the camera's normal photo size.`, undefined, 'too-large'));
-      }
-      const detail = err.code === 'LIMIT_UNEXPECTED_FILE' ? `Send one photo, in the field "${PHOTO_FIELD}".` : `The upload was refused: ${err.message}.`;
-      return next(AppError.badRequest(detail, [{ field: err.field ?? PHOTO_FIELD, message: err.message }]));
-    }
-    next(AppError.badRequest('The upload could not be read (a broken multipart body).'));
-  });
-};
+/** One photo of at most 25 MB; its refusals become problem+json. */
+const receivePhoto = receiveOneFile({
+  field: PHOTO_FIELD,
+  maxBytes: PHOTO_MAX_BYTES,
+  fields: 4,
+  parts: 6,
+  what: 'the photo',
+  tooLarge: `The photo is larger than ${PHOTO_MAX_BYTES / 1024 / 1024} MB. Use the camera's normal photo size.`,
+  oneFile: `Send one photo, in the field "${PHOTO_FIELD}".`,
+});

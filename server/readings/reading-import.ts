@@ -39,6 +39,8 @@ export class ImportRefused extends AppError {
       `${bad.length} row${bad.length === 1 ? '' : 's'} of the file cannot be imported, so nothing was: ${bad.map((r) => `row ${r.row}: ${r.errors.map((e) => `${e.field} ${e.message}`).join('; ')}`).join(' | ')}.`,
       bad.flatMap((r) => r.errors.map((e) => ({ field: `row ${r.row}: ${e.field}`, message: e.message }))),
       'import-refused',
+      // The row-by-row report, so a client can show each bad row.
+      { rows },
     );
   }
 }

@@ -1,15 +1,13 @@
-import { Router, type RequestHandler } from 'express';
-import multer from 'multer';
-import path from 'node:path';
+import { Router } from 'express';
 import { createReadingBody, listReadingsQuery, supersedeReadingBody } from '../../shared/api/readings.js';
 import { actorOf, allow, currentUser, signedIn } from '../core/access.js';
 import { AppError } from '../core/app-error.js';
 import type { AppContext } from '../core/context.js';
+import { receiveOneFile } from '../core/file-upload.js';
 import { idParam, parse } from '../core/validate.js';
 import { idempotent } from '../idempotency/idempotent.js';
-import { PhotoFiles } from '../photos/photo-files.js';
 import { readingsXlsx, writeReadingsCsv } from './reading-export.js';
-import { ImportRefused, importReadings } from './reading-import.js';
+import { importReadings } from './reading-import.js';
 import { getReadingDetail } from './reading-detail.js';
 import { listReadings } from './reading-list.js';
 import { createReading, supersedeReading, type ReadingsDeps } from './readings.js';
@@ -32,9 +30,9 @@ function exportName(ext: string): string {
  * everyone signed in lists, opens and exports them. The fixed paths come before `/:id`. Photo
  * readings sample the photo under `<dataDir>/photos/` (503 for them without a data folder).
  */
-export function readingsRoutes(ctx: AppContext, dataDir: string | null): Router {
+export function readingsRoutes(ctx: AppContext): Router {
   const router = Router();
-  const deps: ReadingsDeps = { ds: ctx.ds, referenceSets: ctx.referenceSets, photos: dataDir === null ? null : new PhotoFiles(path.join(dataDir, 'photos')) };
+  const deps: ReadingsDeps = { ds: ctx.ds, referenceSets: ctx.referenceSets, photos: ctx.photos };
 
   router.get('/', signedIn, async (req, res) => {
     res.json(await listReadings(ctx.ds, parse(listReadingsQuery, req.query, 'query')));
@@ -59,13 +57,7 @@ export function readingsRoutes(ctx: AppContext, dataDir: string | null): Router 
 
   router.post('/import', OBSERVERS, receiveFile, async (req, res) => {
     if (!req.file) throw AppError.badRequest(`Send the CSV as multipart/form-data in the field "${IMPORT_FIELD}".`, [{ field: IMPORT_FIELD, message: 'no file' }]);
-    try {
-      res.status(201).json(await importReadings(deps, actorOf(req), currentUser(req), req.file.buffer));
-    } catch (err) {
-      if (!(err instanceof ImportRefused)) throw err;
-      // RFC 9457 §3.2 extension member `rows`: the row-by-row report, so a client can show each bad row.
-      res.status(422).type('application/problem+json').json({ type: 'https://hueledger.invalid/problems/import-refused', title: err.title, status: 422, detail: err.detail, errors: err.errors, rows: err.rows, instance: req.originalUrl });
-    }
+    res.status(201).json(await importReadings(deps, actorOf(req), currentUser(req), req.file.buffer));
   });
 
   router.get('/:id', signedIn, async (req, res) => {
@@ -81,19 +73,12 @@ export function readingsRoutes(ctx: AppContext, dataDir: string | null): Router 
   return router;
 }
 
-const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: IMPORT_MAX_BYTES, files: 1, fields: 2, parts: 3 } }).single(IMPORT_FIELD);
-
-/** multer in memory, one CSV of at most 5 MB; its refusals become problem+json. */
-const receiveFile: RequestHandler = (req, res, next) => {
-  if (!req.is('multipart/form-data')) {
-    return next(new AppError(415, 'Unsupported media type', `Send the CSV as multipart/form-data in the field "${IMPORT_FIELD}".`, undefined, 'unsupported-media-type'));
-  }
-  upload(req, res, (err: unknown) => {
-    if (!err) return next();
-    if (err instanceof multer.MulterError) {
-      if (err.code === 'LIMIT_FILE_SIZE') return next(new AppError(413, 'Payload too large', `The file is larger than ${IMPORT_MAX_BYTES / 1024 / 1024} MB; split it.`, undefined, 'too-large'));
-      return next(AppError.badRequest(`The upload was refused: ${err.message}.`, [{ field: err.field ?? IMPORT_FIELD, message: err.message }]));
-    }
-    next(AppError.badRequest('The upload could not be read (a broken multipart body).'));
-  });
-};
+/** One CSV of at most 5 MB; its refusals become problem+json. */
+const receiveFile = receiveOneFile({
+  field: IMPORT_FIELD,
+  maxBytes: IMPORT_MAX_BYTES,
+  fields: 2,
+  parts: 3,
+  what: 'the CSV',
+  tooLarge: `The file is larger than ${IMPORT_MAX_BYTES / 1024 / 1024} MB; split it.`,
+});

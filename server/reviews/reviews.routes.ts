@@ -9,13 +9,13 @@ import { reviewQueue, reviewReading, reviewsOf } from './reviews.js';
 const reviewers = allow('reviewer', 'admin');
 
 /** Under /api/readings, beside the readings router: a decision on a reading (reviewers, admins) and its reviews (everyone signed in). */
-export function reviewRoutes(ctx: AppContext, logError: (err: unknown) => void = console.error): Router {
+export function reviewRoutes(ctx: AppContext): Router {
   const router = Router();
 
   router.post('/:id/review', reviewers, async (req, res) => {
     const id = idParam(req.params['id']);
     const body = parse(reviewBody, req.body);
-    res.status(201).json(await reviewReading({ ds: ctx.ds, mailer: ctx.mailer, publicUrl: ctx.publicUrl, logError }, actorOf(req), currentUser(req), id, body));
+    res.status(201).json(await reviewReading({ ds: ctx.ds, mailer: ctx.mailer, publicUrl: ctx.publicUrl, logError: ctx.logError }, actorOf(req), currentUser(req), id, body));
   });
 
   router.get('/:id/reviews', signedIn, async (req, res) => {
