@@ -8,6 +8,8 @@ import { auditRoutes } from './audit/audit.routes.js';
 import { authRoutes } from './auth/auth.routes.js';
 import { invitationRoutes } from './auth/invitations.routes.js';
 import { createPassport } from './auth/passport.js';
+import { apiTokenRoutes } from './brapi/api-tokens.routes.js';
+import { brapiFallback, brapiRoutes } from './brapi/brapi.routes.js';
 import { SESSION_COOKIE, SqliteSessionStore } from './auth/session-store.js';
 import { analysisRoutes } from './analysis/analysis.routes.js';
 import { calibrationRoutes } from './calibration/calibration.routes.js';
@@ -69,8 +71,9 @@ export function createApp(options: AppOptions): Express {
   // Body parsing, sessions and passport only where they are needed: the built client's files are
   // served without a session lookup or a rolling-session write per asset.
   app.use('/api', express.json({ limit: '1mb' }));
+  // /brapi is signed in by the same session as /api (or by a token, see server/brapi/).
   app.use(
-    '/api',
+    ['/api', '/brapi'],
     session({
       name: SESSION_COOKIE,
       secret: options.sessionSecret,
@@ -81,7 +84,7 @@ export function createApp(options: AppOptions): Express {
       cookie: { httpOnly: true, sameSite: 'lax', secure, maxAge: SESSION_MAX_AGE_MS },
     }),
   );
-  app.use('/api', passport.initialize(), passport.session());
+  app.use(['/api', '/brapi'], passport.initialize(), passport.session());
 
   const api = express.Router();
   api.use(csrfProtection(options.sessionSecret, secure));
@@ -91,6 +94,7 @@ export function createApp(options: AppOptions): Express {
   api.use('/auth', authRoutes(ctx, passport));
   api.use('/invitations', invitationRoutes(ctx));
   api.use('/users', userRoutes(ctx));
+  api.use('/api-tokens', apiTokenRoutes(ctx));
   api.use('/outbox', outboxRoutes(ctx));
   api.use('/audit', auditRoutes(ctx));
   api.use('/', profileRoutes(ctx));
@@ -106,6 +110,8 @@ export function createApp(options: AppOptions): Express {
   api.use('/analysis', analysisRoutes(ctx));
   api.use(apiNotFound);
   app.use('/api', api);
+  app.use('/brapi/v2', brapiRoutes(ctx, options.dataDir ?? null, options.logError));
+  app.use('/brapi', brapiFallback(options.logError));
 
   if (options.clientDir) serveClient(app, options.clientDir);
   app.use(problemHandler(logError));

@@ -17,11 +17,11 @@ interface RouterLayer {
   route?: { path: string; methods: Record<string, boolean>; stack: RouterLayer[] };
 }
 
-/** Lists every route mounted under /api by walking the app's router stack, so no route escapes the role table. */
+/** Lists every route mounted under /api and /brapi by walking the app's router stack, so no route escapes the role table. */
 export function listApiRoutes(app: Express): MountedRoute[] {
   const routes: MountedRoute[] = [];
   walk((app as unknown as { router: { stack: RouterLayer[] } }).router.stack, '', routes);
-  return routes.filter((r) => r.path.startsWith('/api/'));
+  return routes.filter((r) => r.path.startsWith('/api/') || r.path.startsWith('/brapi/'));
 }
 
 function walk(stack: RouterLayer[], prefix: string, into: MountedRoute[]): void {

@@ -36,3 +36,18 @@ export function assertInvalidFields(res: Response, ...fields: string[]): string[
   for (const field of fields) assert.ok(named.includes(field), `errors name ${field}; they name ${named.join(', ')}`);
   return named;
 }
+
+/**
+ * Asserts BrAPI's error answer (BrAPI v2.1 `400BadRequest`, `401Unauthorized`, `403Forbidden`,
+ * `404NotFound`: a JSON string "ERROR - <timestamp> - <message>"), without internals; returns the message.
+ */
+export function assertBrapiError(res: Response, status: number): string {
+  assert.equal(res.status, status, `expected ${status}, got ${res.status}: ${res.text}`);
+  assert.match(String(res.headers['content-type']), /^application\/json\b/);
+  assert.equal(typeof res.body, 'string', `a JSON string: ${res.text}`);
+  const match = /^ERROR - (\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}Z) - (.+)$/s.exec(res.body as string);
+  assert.ok(match, `the BrAPI error form "ERROR - <timestamp> - <message>": ${res.text}`);
+  assert.ok(!Number.isNaN(Date.parse(match[1]!)));
+  assertNoLeak(res);
+  return match[2]!;
+}

@@ -54,7 +54,7 @@ const pathParam = fc.oneof(
 );
 
 const query = fc.dictionary(
-  fc.oneof(fc.constantFrom('page', 'pageSize', 'sort', 'dir', 'accessionId', 'characterId', 'siteId', 'observerId', 'method', 'status', 'from', 'to', 'season', 'seasonYear', 'q', 'k', 'kind', 'includeSuperseded'), fc.string({ minLength: 1, maxLength: 8 })),
+  fc.oneof(fc.constantFrom('page', 'pageSize', 'sort', 'dir', 'accessionId', 'characterId', 'siteId', 'observerId', 'method', 'status', 'from', 'to', 'season', 'seasonYear', 'q', 'k', 'kind', 'includeSuperseded', 'germplasmDbId', 'observationUnitDbId', 'observationVariableDbId', 'seasonDbId', 'observationTimeStampRangeStart', 'observationTimeStampRangeEnd', 'year'), fc.string({ minLength: 1, maxLength: 8 })),
   fc.oneof(oddQueryValue.map(String), fc.array(fc.string({ maxLength: 6 }), { minLength: 2, maxLength: 3 })),
   { maxKeys: 5 },
 );
@@ -97,7 +97,7 @@ describe('fuzzing every JSON API route (fast-check)', () => {
     assert.ok(routes.length >= 20, `only ${routes.length} routes found`);
   });
 
-  test('never answers 5xx, always problem+json when refusing, and changes nothing when it refuses', async () => {
+  test('never answers 5xx, always problem+json (BrAPI\'s error string under /brapi) when refusing, and changes nothing when it refuses', async () => {
     const failures: string[] = [];
     const statuses = new Map<number, number>();
     for (const route of routes) {
@@ -114,7 +114,8 @@ describe('fuzzing every JSON API route (fast-check)', () => {
           const what = `${route.method} ${url.slice(0, 200)} as ${who} with ${JSON.stringify(payload).slice(0, 300)}`;
           assert.ok(res.status < 500, `${what} → ${res.status} ${res.text.slice(0, 300)}`);
           if (res.status >= 400) {
-            assert.match(res.headers['content-type'] ?? '', /^application\/problem\+json/, `${what} → ${res.status} not problem+json`);
+            if (route.path.startsWith('/brapi/')) assert.match(res.text, /^"ERROR - /, `${what} → ${res.status} not BrAPI's error string`);
+            else assert.match(res.headers['content-type'] ?? '', /^application\/problem\+json/, `${what} → ${res.status} not problem+json`);
             assert.equal(JSON.stringify(await rowCounts(h.ds)), before, `${what} → ${res.status} but rows changed`);
           }
         },

@@ -6,7 +6,7 @@ import { Site } from '../../server/collection/site.entity.js';
 import { Notification } from '../../server/reviews/review.entity.js';
 import { Certification } from '../../server/calibration/certification.entity.js';
 import { listApiRoutes } from './api-routes.js';
-import { assertProblem } from './assert-problem.js';
+import { assertBrapiError, assertProblem } from './assert-problem.js';
 import { addUser, Client, mailsTo, PASSWORD, rowCounts, signedInAs, startHarness, tokenFromLink, type Harness } from './harness.js';
 import { fromRaw, paintScene, uploadPhoto } from './photo-fixtures.js';
 
@@ -47,6 +47,8 @@ interface Fixtures {
   noticeOf(role?: Role): number;
   /** A certification of each role's own user (its PDF is theirs to fetch). */
   certificateOf(role?: Role): number;
+  /** A BrAPI token to revoke (revoking twice answers the same row). */
+  apiTokenId: number;
 }
 
 /** One API route: who may call it and a request that succeeds for them. */
@@ -151,6 +153,16 @@ const ROUTES: readonly RouteCase[] = [
   { method: 'POST', path: '/api/notifications/:id/read', access: EVERYONE, ok: 204, url: (f, role) => `/api/notifications/${f.noticeOf(role)}/read` },
   { method: 'GET', path: '/api/analysis/drift', access: EVERYONE, ok: 200, url: (f) => `/api/analysis/drift?accessionId=${f.accessionId}&characterId=${f.characterId}` },
   { method: 'GET', path: '/api/analysis/sites', access: EVERYONE, ok: 200, url: (f) => `/api/analysis/sites?accessionId=${f.accessionId}&characterId=${f.characterId}` },
+  { method: 'GET', path: '/api/api-tokens', access: ADMIN, ok: 200 },
+  { method: 'POST', path: '/api/api-tokens', access: ADMIN, ok: 201, body: (f) => ({ userId: f.patchTargetId, label: `Matrix token ${f.next()}` }) },
+  { method: 'POST', path: '/api/api-tokens/:id/revoke', access: ADMIN, ok: 200, url: (f) => `/api/api-tokens/${f.apiTokenId}/revoke` },
+  // The read-only BrAPI interface: every role reads; refusals are BrAPI's error string, not problem+json.
+  ...['serverinfo', 'commoncropnames', 'germplasm', 'locations', 'seasons', 'observationunits', 'variables', 'observations', 'images'].map(
+    (call): RouteCase => ({ method: 'GET', path: `/brapi/v2/${call}`, access: EVERYONE, ok: 200 }),
+  ),
+  { method: 'GET', path: '/brapi/v2/germplasm/:germplasmDbId', access: EVERYONE, ok: 200, url: (f) => `/brapi/v2/germplasm/${f.accessionId}` },
+  { method: 'GET', path: '/brapi/v2/images/:imageDbId', access: EVERYONE, ok: 200, url: (f) => `/brapi/v2/images/${f.photoId}` },
+  { method: 'GET', path: '/brapi/v2/images/:imageDbId/imagecontent', access: EVERYONE, ok: 200, url: (f) => `/brapi/v2/images/${f.photoId}/imagecontent` },
 ];
 
 /** Calibration sessions for the table: an open one with a specimen, a closed one, and a pool to close. */
@@ -285,6 +297,7 @@ describe('who may call each API route', () => {
       ...(await readingFixtures(clients)),
       ...(await reviewFixtures(h, clients)),
       certificateOf: () => 0,
+      apiTokenId: (await admin.post('/api/api-tokens', { userId: target.id, label: 'Matrix token' }).expect(201)).body.id as number,
     };
     Object.assign(f, await certificateFixtures(h, clients, f.closedCalibrationSessionId));
   });
@@ -312,9 +325,11 @@ describe('who may call each API route', () => {
       }
       const allowed = route.access;
 
-      test('should answer 401 problem+json when signed out, changing nothing', async () => {
+      test('should answer 401 when signed out (problem+json, or BrAPI\'s error under /brapi), changing nothing', async () => {
         const before = await snapshot(h);
-        assertProblem(await send(await new Client(h.app).prime(), route, f), 401);
+        const res = await send(await new Client(h.app).prime(), route, f);
+        if (route.path.startsWith('/brapi/')) assertBrapiError(res, 401);
+        else assertProblem(res, 401);
         assert.equal(await snapshot(h), before);
       });
 
