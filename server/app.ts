@@ -110,8 +110,8 @@ export function createApp(options: AppOptions): Express {
   api.use('/analysis', analysisRoutes(ctx));
   api.use(apiNotFound);
   app.use('/api', api);
-  app.use('/brapi/v2', brapiRoutes(ctx, options.dataDir ?? null, options.logError));
-  app.use('/brapi', brapiFallback(options.logError));
+  app.use('/brapi/v2', brapiRoutes(ctx));
+  app.use('/brapi', brapiFallback(logError));
 
   if (options.clientDir) serveClient(app, options.clientDir);
   app.use(problemHandler(logError));

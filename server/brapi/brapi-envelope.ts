@@ -115,7 +115,7 @@ export function errorText(message: string, at = new Date()): string {
 }
 
 /** Turns any error under /brapi into BrAPI's error answer; 5xx keep their cause in the log only. */
-export function brapiErrorHandler(log: (err: unknown) => void = console.error): ErrorRequestHandler {
+export function brapiErrorHandler(log: (err: unknown) => void): ErrorRequestHandler {
   return (err, _req, res, next) => {
     if (res.headersSent) return next(err);
     let status = 500;

@@ -1,8 +1,6 @@
-import path from 'node:path';
 import { Router, type Request, type RequestHandler } from 'express';
 import { signedIn } from '../core/access.js';
 import type { AppContext } from '../core/context.js';
-import { PhotoFiles } from '../photos/photo-files.js';
 import { photoFile } from '../photos/photos.js';
 import { APP_VERSION } from '../version.js';
 import { bearerAuth, readOnly } from './brapi-auth.js';
@@ -28,8 +26,8 @@ function yearParam(req: Request): number | undefined {
   return Number(raw);
 }
 
-function calls(ctx: AppContext, dataDir: string | null): Call[] {
-  const files = dataDir === null ? null : new PhotoFiles(path.join(dataDir, 'photos'));
+function calls(ctx: AppContext): Call[] {
+  const files = ctx.photos;
   const list: Call[] = [
     {
       service: 'serverinfo',
@@ -159,19 +157,19 @@ function calls(ctx: AppContext, dataDir: string | null): Call[] {
  * /brapi/v2: the read-only BrAPI interface. Every call admits any signed-in role, by session or
  * by an API token; anything but GET is refused; every refusal is BrAPI's error answer.
  */
-export function brapiRoutes(ctx: AppContext, dataDir: string | null, logError?: (err: unknown) => void): Router {
+export function brapiRoutes(ctx: AppContext): Router {
   const router = Router();
   router.use(readOnly, bearerAuth(ctx.ds));
-  for (const call of calls(ctx, dataDir)) {
+  for (const call of calls(ctx)) {
     router.get(`/${call.service.replace(/\{(\w+)\}/g, ':$1')}`, signedIn, call.handle);
   }
   router.use((req, _res, next) => next(new BrapiError(404, `No BrAPI call GET ${req.path} here; GET /brapi/v2/serverinfo lists the calls served`)));
-  router.use(brapiErrorHandler(logError));
+  router.use(brapiErrorHandler(ctx.logError));
   return router;
 }
 
 /** Anything else under /brapi (another version, a typo): BrAPI's 404, or 405 for a write. */
-export function brapiFallback(logError?: (err: unknown) => void): Router {
+export function brapiFallback(logError: (err: unknown) => void): Router {
   const router = Router();
   router.use(readOnly);
   router.use((req, _res, next) => next(new BrapiError(404, `No BrAPI call ${req.method} ${req.originalUrl.split('?')[0]!.slice(0, 80)} here; this server speaks BrAPI v${BRAPI_VERSION} under /brapi/v2`)));

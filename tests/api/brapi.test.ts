@@ -406,7 +406,7 @@ describe('BrAPI v2.1 interface', () => {
     });
   });
 
-  describe('round trip: a BrAPI client reads the same numbers as the readings export', () => {
+  describe('round trip: a BrAPI client reads the same numbers as the readings export and the characterisation record', () => {
     test('should find, for every current reading of HL-0001, the L*, a*, b* and chip of the XLSX export', async () => {
       const germplasm = (await brapi.get('germplasm', { accessionNumber: 'HL-0001' })).body.result.data[0] as { germplasmDbId: string };
       const observations = await brapi.all<Obs>('observations', { germplasmDbId: germplasm.germplasmDbId }, 25);
@@ -434,6 +434,42 @@ describe('BrAPI v2.1 interface', () => {
           [Number(got.L), Number(got.a), Number(got.b), got.chip],
           [row.getCell(col('L*')).value, row.getCell(col('a*')).value, row.getCell(col('b*')).value, row.getCell(col('best chip')).value],
         );
+      }
+    });
+
+    test('should find, from the same observations, the centres the characterisation record shows (per-channel medians, overall and per season)', async () => {
+      const germplasm = (await brapi.get('germplasm', { accessionNumber: 'HL-0001' })).body.result.data[0] as { germplasmDbId: string };
+      const observations = await brapi.all<Obs>('observations', { germplasmDbId: germplasm.germplasmDbId }, 100);
+      // One reading per readingId: its L*, a*, b*, review status, season and character (from the variable DbId "c<id>-L").
+      const readings = new Map<string, { character: string; status: string; season?: string; lab: number[] }>();
+      for (const o of observations) {
+        const m = /^c(\d+)-(L|a|b)$/.exec(o.observationVariableDbId);
+        if (!m) continue;
+        const r = readings.get(o.additionalInfo['readingId']!) ?? { character: m[1]!, status: o.additionalInfo['reviewStatus']!, season: o.season?.seasonDbId, lab: [NaN, NaN, NaN] };
+        r.lab['Lab'.indexOf(m[2]!)] = Number(o.value);
+        readings.set(o.additionalInfo['readingId']!, r);
+      }
+      const median = (xs: number[]) => {
+        const s = [...xs].sort((x, y) => x - y);
+        return s.length % 2 ? s[(s.length - 1) / 2]! : (s[s.length / 2 - 1]! + s[s.length / 2]!) / 2;
+      };
+      const centre = (rs: { lab: number[] }[]) => [0, 1, 2].map((i) => median(rs.map((r) => r.lab[i]!)));
+      const profile = (await admin.get(`/api/accessions/${germplasm.germplasmDbId}/profile`).expect(200)).body as {
+        characters: { characterId: number; basis: string; nReadings: number; centre: { lab: number[] }; seasons: { season: string; seasonYear: number; n: number; centre: { lab: number[] } }[] }[];
+      };
+      assert.ok(profile.characters.length >= 2, 'the demo accession is characterised');
+      // BrAPI values carry 2 decimals, as the exports do; a median of rounded values is within 0.01 of the rounded median (0.005 each side).
+      const near = (got: number[], want: number[], what: string) => want.forEach((w, i) => assert.ok(Math.abs(got[i]! - w) <= 0.01 + 1e-9, `${what}: ${got} vs ${want}`));
+      for (const c of profile.characters) {
+        const mine = [...readings.values()].filter((r) => r.character === String(c.characterId));
+        const basis = c.basis === 'approved' ? mine.filter((r) => r.status === 'approved') : mine;
+        assert.equal(basis.length, c.nReadings, `character ${c.characterId}: readings in the basis`);
+        near(centre(basis), c.centre.lab, `character ${c.characterId} centre`);
+        for (const s of c.seasons) {
+          const group = mine.filter((r) => r.season === `${s.seasonYear}-${s.season}`);
+          assert.equal(group.length, s.n, `character ${c.characterId}, ${s.seasonYear} ${s.season}: readings`);
+          near(centre(group), s.centre.lab, `character ${c.characterId}, ${s.seasonYear} ${s.season} centre`);
+        }
       }
     });
   });
