@@ -21,9 +21,9 @@ import { Season, Site } from '../server/collection/site.entity.js';
 import { openDatabase } from '../server/data-source.js';
 import { DEMO_SITES } from '../server/demo/demo-scenario.js';
 import { mulberry32 } from '../reference-colors/prng.js';
-import { reportRatio } from './ratio.js';
+import { benchSize, reportRatio } from './ratio.js';
 
-const READINGS = Number(process.argv[2] ?? 100_000);
+const READINGS = benchSize(100_000, 400);
 const ACCESSIONS = 25;
 const CHARACTERS = 8;
 /** Three years of readings, so every pair has same-season comparisons a year apart. */

@@ -8,10 +8,10 @@
 import autocannon from 'autocannon';
 import { signInOverHttp, type HttpSession } from '../tests/e2e/http-session.js';
 import { startServerProcess } from '../tests/e2e/server-process.js';
-import { reportRatio } from './ratio.js';
+import { benchSize, reportRatio, SMOKE } from './ratio.js';
 
-const RECORDERS = 50;
-const AMOUNT = Math.min(50_000, Number(process.argv[2] ?? 4000));
+const RECORDERS = SMOKE ? 4 : 50;
+const AMOUNT = Math.min(50_000, benchSize(4000, 100));
 const DEMO_PASSWORD = 'demo-pass-2026';
 
 interface Phase {

@@ -5,10 +5,10 @@ import type { AddressInfo } from 'node:net';
 import { formatHex } from 'culori';
 import { addUser, PASSWORD, startHarness } from '../tests/api/harness.js';
 import { mulberry32 } from '../reference-colors/prng.js';
-import { reportRatio } from './ratio.js';
+import { benchSize, reportRatio, SMOKE } from './ratio.js';
 
-const REQUESTS = Math.min(5000, Number(process.argv[2] ?? 1000));
-const WARM_UP = 100;
+const REQUESTS = Math.min(5000, benchSize(1000, 30));
+const WARM_UP = SMOKE ? 5 : 100;
 
 const h = await startHarness();
 const server = h.app.listen(0, '127.0.0.1');

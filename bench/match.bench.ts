@@ -9,10 +9,10 @@ import type { ReferenceSetFile } from '../shared/colour/reference-set.js';
 import { sampleRegion } from '../reference-colors/coverage.js';
 import { mulberry32 } from '../reference-colors/prng.js';
 import { TISSUE_REGIONS } from '../reference-colors/tissue-regions.js';
-import { reportRatio } from './ratio.js';
+import { benchSize, reportRatio } from './ratio.js';
 
 const K = 5;
-const QUERIES = Number(process.argv[2] ?? 2000);
+const QUERIES = benchSize(2000, 20);
 const set = JSON.parse(readFileSync(new URL('../reference-colors/reference-set-v1.json', import.meta.url), 'utf8')) as ReferenceSetFile;
 const toLab65 = converter('lab65');
 

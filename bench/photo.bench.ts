@@ -13,11 +13,13 @@ import { samplePhoto, storePhoto } from '../server/photos/photos.js';
 import { loadReferenceSets } from '../server/reference-sets/load-reference-sets.js';
 import { ReferenceSets } from '../server/reference-sets/reference-sets.js';
 import { mulberry32 } from '../reference-colors/prng.js';
-import { reportRatio } from './ratio.js';
+import { benchSize, reportRatio, SMOKE } from './ratio.js';
 
-const RUNS = Number(process.argv[2] ?? 9);
-const WIDTH = 4000;
-const HEIGHT = 3000;
+const RUNS = benchSize(9, 1);
+const WIDTH = SMOKE ? 800 : 4000;
+const HEIGHT = SMOKE ? 600 : 3000;
+/** Region coordinates are written for 4000 × 3000 and scaled to the photo of this run. */
+const at = (n: number) => Math.round((n * WIDTH) / 4000);
 
 // Neither path may be answered from libvips' operation cache.
 sharp.cache(false);
@@ -65,10 +67,10 @@ try {
 
   const decodeMs = await median(() => sharp(jpeg).raw().toBuffer());
   const cases: [string, SampleBody][] = [
-    ['rect 300 × 300', { region: { shape: 'rect', x: 1800, y: 1300, width: 300, height: 300 } }],
-    ['ellipse 800 × 500', { region: { shape: 'ellipse', cx: 2000, cy: 1500, rx: 400, ry: 250 } }],
-    ['rect 300 × 300 + neutral card', { region: { shape: 'rect', x: 1800, y: 1300, width: 300, height: 300 }, neutral: { region: { shape: 'rect', x: 200, y: 200, width: 200, height: 200 } } }],
-    ['polygon over 2000 × 1500', { region: { shape: 'polygon', points: [[1000, 750], [3000, 750], [3000, 2250], [1000, 2250]] } }],
+    ['rect 300 × 300', { region: { shape: 'rect', x: at(1800), y: at(1300), width: at(300), height: at(300) } }],
+    ['ellipse 800 × 500', { region: { shape: 'ellipse', cx: at(2000), cy: at(1500), rx: at(400), ry: at(250) } }],
+    ['rect 300 × 300 + neutral card', { region: { shape: 'rect', x: at(1800), y: at(1300), width: at(300), height: at(300) }, neutral: { region: { shape: 'rect', x: at(200), y: at(200), width: at(200), height: at(200) } } }],
+    ['polygon over 2000 × 1500', { region: { shape: 'polygon', points: [[at(1000), at(750)], [at(3000), at(750)], [at(3000), at(2250)], [at(1000), at(2250)]] } }],
     ['the whole photo', { region: { shape: 'rect', x: 0, y: 0, width: WIDTH, height: HEIGHT } }],
   ];
 

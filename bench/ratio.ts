@@ -8,3 +8,16 @@ export const RATIO_MARK = '::bench-ratio::';
 export function reportRatio(what: string, ratio: number, floor: string, aim?: string, higherIsBetter = false): void {
   console.log(`${RATIO_MARK}${JSON.stringify({ what, ratio, floor, aim: aim ?? null, higherIsBetter })}`);
 }
+
+/**
+ * Whether this is a smoke run (`BENCH_SMOKE=1`, as npm test does): tiny sizes, only to prove that
+ * each benchmark still runs to its ratio. Its figures mean nothing.
+ */
+export const SMOKE = process.env['BENCH_SMOKE'] === '1';
+
+/** A benchmark's size: the first command-line argument if given, else `full`, or `smoke` in a smoke run. */
+export function benchSize(full: number, smoke: number): number {
+  const given = process.argv[2];
+  if (given !== undefined && given !== '') return Number(given);
+  return SMOKE ? smoke : full;
+}

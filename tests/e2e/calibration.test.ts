@@ -11,9 +11,10 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { after, before, describe, test } from 'node:test';
 import Color from 'colorjs.io';
-import type { Page } from 'playwright-core';
-import { openBrowser, screenshot, signIn, type Browser } from './browser.js';
-import { startServer, type ServerProcess } from './server-process.js';
+import type { BrowserContext, Page } from 'playwright-core';
+import { screenshot, signIn, useApp } from './browser.js';
+
+const app = useApp();
 
 type LabTuple = [number, number, number];
 interface Chip {
@@ -117,22 +118,19 @@ async function pickSteps(page: Page, code: string, position: number): Promise<vo
 }
 
 describe('a trainer runs a calibration session with three observers', () => {
-  let server: ServerProcess;
-  let trainerBrowser: Browser;
+  let trainerBrowser: BrowserContext;
   let trainer: Page;
-  const observers: { browser: Browser; page: Page; name: string }[] = [];
+  const observers: { browser: BrowserContext; page: Page; name: string }[] = [];
   let sessionUrl = '';
 
   before(async () => {
-    server = await startServer();
-    trainerBrowser = await openBrowser(server.url);
+    trainerBrowser = await app.newContext();
     trainer = await trainerBrowser.newPage();
-    await signIn(trainer, server.url, 'trainer@demo.test');
+    await signIn(trainer, app.url, 'trainer@demo.test');
   });
   after(async () => {
     for (const o of observers) await o.browser.close();
     await trainerBrowser?.close();
-    await server?.stop();
   });
 
   test('hand computation is what we think it is', () => {
@@ -143,7 +141,7 @@ describe('a trainer runs a calibration session with three observers', () => {
   });
 
   test('should create a session with three specimens from the sessions page', async () => {
-    await trainer.goto(`${server.url}/calibration`);
+    await trainer.goto(`${app.url}/calibration`);
     await trainer.getByRole('button', { name: /New session/ }).click();
     await trainer.getByLabel('Title').fill(TITLE);
     await trainer.getByLabel('Group agreement κ at least').fill(String(KAPPA_THRESHOLD));
@@ -171,15 +169,15 @@ describe('a trainer runs a calibration session with three observers', () => {
 
   test('should let three observers pick their chips on the trainee screen, one on a phone', async () => {
     for (const o of OBSERVERS) {
-      const browser = await openBrowser(server.url, { phone: o.phone });
+      const browser = await app.newContext({ phone: o.phone });
       const page = await browser.newPage();
       page.on('console', (m) => m.type() === 'error' && console.error(`[${o.email}] ${m.text()}`));
-      await signIn(page, server.url, o.email);
+      await signIn(page, app.url, o.email);
       observers.push({ browser, page, name: await whoAmI(page) });
     }
     for (const [i, o] of OBSERVERS.entries()) {
       const { page } = observers[i];
-      await page.goto(`${server.url}/calibration`);
+      await page.goto(`${app.url}/calibration`);
       await page.locator('li.card', { hasText: TITLE }).getByRole('link', { name: 'Take part' }).click();
       await page.getByText(`Specimen 1 of 3: ${SPECIMENS[0].label}`).waitFor();
       for (const [s, code] of o.picks.entries()) {
@@ -195,7 +193,7 @@ describe('a trainer runs a calibration session with three observers', () => {
       }
       await page.getByText('3 of 3 answered').waitFor();
       // The trainer's live results fill in without a reload.
-      await trainer.getByText(`${(i + 1) * 3} of ${(i + 1) * 3} answers in`).waitFor({ timeout: 15_000 });
+      await trainer.getByText(`${(i + 1) * 3} of ${(i + 1) * 3} answers in`).waitFor();
     }
   });
 
@@ -214,7 +212,7 @@ describe('a trainer runs a calibration session with three observers', () => {
 
   test('should show live results that match the hand computation, then close with a confirmation', async () => {
     const kappaLine = trainer.locator('[data-testid="fleiss-kappa"]');
-    await trainer.waitForFunction((want) => document.querySelector('[data-testid="fleiss-kappa"]')?.textContent?.includes(want), `κ ${shown(EXPECTED_KAPPA)}, moderate agreement`, { timeout: 15_000 });
+    await trainer.waitForFunction((want) => document.querySelector('[data-testid="fleiss-kappa"]')?.textContent?.includes(want), `κ ${shown(EXPECTED_KAPPA)}, moderate agreement`);
     assert.match(await kappaLine.innerText(), new RegExp(`κ ${shown(EXPECTED_KAPPA)}, moderate agreement \\(Landis & Koch 1977\\) over 3 specimens`));
     await trainer.locator('hl-bias-chart').scrollIntoViewIfNeeded();
     assert.equal(await trainer.locator('hl-bias-chart g.arrow').count(), 3, 'one arrow per observer');
@@ -269,7 +267,7 @@ describe('a trainer runs a calibration session with three observers', () => {
 
   test('should offer practice with ΔE00 and a verdict in words, and say it is no certification', async () => {
     const { page } = observers[0];
-    await page.goto(`${server.url}/calibration/practice?seed=2026`);
+    await page.goto(`${app.url}/calibration/practice?seed=2026`);
     assert.match(await page.locator('.hl-page').innerText(), /Practice on screen is not a certification/);
     await page.locator('hl-chip-chooser hl-swatch-grid [data-code]').first().click();
     await page.getByText('Step 2 of 2').waitFor();

@@ -2,10 +2,11 @@
 // desk edits a site's season scheme across the year end and adds a plant; a recorder on a phone
 // enters descriptor values in inches, sees the derived ratio, and switches to metric.
 import assert from 'node:assert/strict';
-import { after, before, describe, test } from 'node:test';
+import { before, describe, test } from 'node:test';
 import type { Page } from 'playwright-core';
-import { openBrowser, screenshot, signIn, type Browser } from './browser.js';
-import { startServer, type ServerProcess } from './server-process.js';
+import { screenshot, signIn, useApp, waitForValue } from './browser.js';
+
+const app = useApp();
 
 /** GET an API route with the page's session. */
 async function api<T>(page: Page, path: string): Promise<T> {
@@ -46,13 +47,17 @@ async function wholePage(page: Page, name: string): Promise<void> {
   await page.setViewportSize(size);
 }
 
-/** The position of the season row with this name. */
+/** The position of the season row with this name, once the editor shows it. */
 async function rowNamed(page: Page, name: string): Promise<number> {
-  const names = await page.locator('hl-season-editor fieldset').evaluateAll((rows) =>
-    rows.map((row) => (row.querySelector('input[formcontrolname=name]') as HTMLInputElement | null)?.value),
-  );
-  const index = names.indexOf(name);
-  assert.ok(index >= 0, `a season called ${name} among ${names.join(', ')}`);
+  const names = () =>
+    page.locator('hl-season-editor fieldset').evaluateAll((rows) => rows.map((row) => (row.querySelector('input[formcontrolname=name]') as HTMLInputElement | null)?.value));
+  await page.waitForFunction(
+    (wanted) => [...document.querySelectorAll('hl-season-editor fieldset input[formcontrolname=name]')].some((i) => (i as HTMLInputElement).value === wanted),
+    name,
+  ).catch(() => undefined);
+  const shown = await names();
+  const index = shown.indexOf(name);
+  assert.ok(index >= 0, `a season called ${name} among ${shown.join(', ')}`);
   return index;
 }
 
@@ -62,35 +67,27 @@ function seasonField(page: Page, row: number, label: 'Name' | 'Starts (MM-DD)' |
 }
 
 describe('an admin at a desk manages sites and accessions', () => {
-  let server: ServerProcess;
-  let browser: Browser;
   let page: Page;
 
   before(async () => {
-    server = await startServer();
-    browser = await openBrowser(server.url);
-    page = await browser.newPage();
-    await signIn(page, server.url, 'admin@demo.test');
-  });
-  after(async () => {
-    await browser?.close();
-    await server?.stop();
+    page = await app.newPage();
+    await signIn(page, app.url, 'admin@demo.test');
   });
 
   test('should edit a site’s seasons to wrap the year end, see an overlap in words, and save', async () => {
-    await page.goto(`${server.url}/collection?tab=sites`);
+    await page.goto(`${app.url}/collection?tab=sites`);
     // The demo's coastal garden has Dry 01-01 → 05-31 and Wet 06-01 → 12-31: nothing wraps yet.
     await page.getByRole('link', { name: 'Coastal Collection Garden' }).click();
     await page.waitForURL(/\/collection\/sites\/\d+$/);
     await page.getByRole('heading', { name: 'Seasons' }).waitFor();
     const dry = await rowNamed(page, 'Dry');
     const wet = await rowNamed(page, 'Wet');
-    assert.equal(await seasonField(page, dry, 'Starts (MM-DD)').inputValue(), '01-01');
+    await waitForValue(seasonField(page, dry, 'Starts (MM-DD)'), '01-01');
 
     // Dry now starts on 1 December: it overlaps Wet until Wet is shortened.
     await seasonField(page, dry, 'Starts (MM-DD)').fill('1201');
     await seasonField(page, dry, 'Name').click(); // leaving the field writes 1201 as 12-01
-    assert.equal(await seasonField(page, dry, 'Starts (MM-DD)').inputValue(), '12-01');
+    await waitForValue(seasonField(page, dry, 'Starts (MM-DD)'), '12-01');
     const overlap = page.locator('.problem', { hasText: 'Overlap:' });
     await overlap.waitFor();
     assert.match(await overlap.innerText(), /“Dry” and “Wet” both cover 1 Dec–31 Dec/);
@@ -117,11 +114,12 @@ describe('an admin at a desk manages sites and accessions', () => {
     ]);
     await page.reload();
     await page.getByRole('heading', { name: 'Seasons' }).waitFor();
-    assert.equal(await seasonField(page, await rowNamed(page, 'Dry'), 'Starts (MM-DD)').inputValue(), '12-01');
+    await page.locator('hl-season-editor fieldset').first().waitFor();
+    await waitForValue(seasonField(page, await rowNamed(page, 'Dry'), 'Starts (MM-DD)'), '12-01');
   });
 
   test('should add a plant to an accession and see it listed with its age', async () => {
-    await page.goto(`${server.url}/collection`);
+    await page.goto(`${app.url}/collection`);
     await page.getByRole('link', { name: 'HL-0001' }).click();
     await page.waitForURL(/\/collection\/accessions\/\d+$/);
     await page.getByRole('heading', { name: /HL-0001/ }).waitFor();
@@ -142,7 +140,7 @@ describe('an admin at a desk manages sites and accessions', () => {
   });
 
   test('should offer the MCPD passport CSV from the accessions list', async () => {
-    await page.goto(`${server.url}/collection`);
+    await page.goto(`${app.url}/collection`);
     const link = page.getByRole('link', { name: 'MCPD passport CSV' });
     assert.equal(await link.getAttribute('href'), '/api/accessions/mcpd.csv');
     const [download] = await Promise.all([page.waitForEvent('download'), link.click()]);
@@ -150,7 +148,7 @@ describe('an admin at a desk manages sites and accessions', () => {
   });
 
   test('should change a character’s drift threshold and see the descriptor catalogue', async () => {
-    await page.goto(`${server.url}/collection?tab=characters`);
+    await page.goto(`${app.url}/collection?tab=characters`);
     const row = page.locator('tr', { hasText: 'upper third' }).first();
     const label = (await row.locator('td').nth(1).innerText()).split('\n')[0]!.trim();
     await row.getByRole('button', { name: `Edit ${label}` }).click();
@@ -171,30 +169,22 @@ describe('an admin at a desk manages sites and accessions', () => {
   });
 
   test('should load nothing from another origin', () => {
-    assert.deepEqual(browser.foreignRequests, []);
+    assert.deepEqual(app.foreignRequests, []);
   });
 });
 
 describe('a recorder on a phone enters descriptors', () => {
-  let server: ServerProcess;
-  let browser: Browser;
   let page: Page;
 
   before(async () => {
-    server = await startServer();
-    browser = await openBrowser(server.url, { phone: true });
-    page = await browser.newPage();
-    await signIn(page, server.url, 'recorder@demo.test');
-  });
-  after(async () => {
-    await browser?.close();
-    await server?.stop();
+    page = await app.newPage({ phone: true });
+    await signIn(page, app.url, 'recorder@demo.test');
   });
 
   test('should reach the descriptor entry from an accession page', async () => {
     const accessions = await api<AccessionAnswer[]>(page, '/api/accessions');
     const first = accessions.find((a) => a.accessionNumber === 'HL-0001')!;
-    await page.goto(`${server.url}/collection/accessions/${first.id}`);
+    await page.goto(`${app.url}/collection/accessions/${first.id}`);
     await page.getByRole('heading', { name: /HL-0001/ }).waitFor();
     await wholePage(page, 'collection-accession-phone');
     await page.getByRole('link', { name: `Record descriptors of plant ${first.plants[0]!.label}` }).click();
@@ -219,8 +209,9 @@ describe('a recorder on a phone enters descriptors', () => {
     await wholePage(page, 'descriptor-entry-phone');
 
     await page.getByRole('group', { name: 'Units' }).getByText('Metric', { exact: true }).click();
-    assert.equal(await page.getByLabel('Petiole length', { exact: true }).inputValue(), '101.6');
-    assert.equal(await page.getByLabel('Sheath length', { exact: true }).inputValue(), '71.12');
+    // The fields redraw after the click in the app's own time: wait for the converted values.
+    await waitForValue(page.getByLabel('Petiole length', { exact: true }), '101.6');
+    await waitForValue(page.getByLabel('Sheath length', { exact: true }), '71.12');
     assert.match(await page.locator('hl-descriptor-row', { hasText: 'Petiole length' }).first().innerText(), /stored as 1\.016 m · typed 40 in/);
     await ratioRow.locator('.ratio-value', { hasText: expected }).waitFor();
   });
@@ -246,7 +237,7 @@ describe('a recorder on a phone enters descriptors', () => {
   });
 
   test('should show the recorder the season ring without edit fields', async () => {
-    await page.goto(`${server.url}/collection?tab=sites`);
+    await page.goto(`${app.url}/collection?tab=sites`);
     await page.getByRole('link', { name: /Riverside Demonstration Plot/ }).first().click();
     await page.locator('hl-year-ring').waitFor();
     assert.equal(await page.locator('hl-season-editor').count(), 0);
@@ -256,22 +247,10 @@ describe('a recorder on a phone enters descriptors', () => {
 });
 
 describe('an admin on a phone edits seasons', () => {
-  let server: ServerProcess;
-  let browser: Browser;
-
-  before(async () => {
-    server = await startServer();
-    browser = await openBrowser(server.url, { phone: true });
-  });
-  after(async () => {
-    await browser?.close();
-    await server?.stop();
-  });
-
   test('should show the season editor in one column with the ring on top', async () => {
-    const page = await browser.newPage();
-    await signIn(page, server.url, 'admin@demo.test');
-    await page.goto(`${server.url}/collection?tab=sites`);
+    const page = await app.newPage({ phone: true });
+    await signIn(page, app.url, 'admin@demo.test');
+    await page.goto(`${app.url}/collection?tab=sites`);
     await page.getByRole('link', { name: /Hilltop Trial Garden/ }).first().click();
     await page.locator('hl-season-editor').waitFor();
     await seasonField(page, await rowNamed(page, 'Rainy'), 'Ends (MM-DD)').fill('09-30');

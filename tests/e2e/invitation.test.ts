@@ -1,25 +1,23 @@
 import assert from 'node:assert/strict';
 import { after, before, test } from 'node:test';
-import { openBrowser, screenshot, signIn, type Browser } from './browser.js';
-import { startServer, type ServerProcess } from './server-process.js';
+import type { BrowserContext } from 'playwright-core';
+import { screenshot, signIn, useApp } from './browser.js';
 
-let server: ServerProcess;
-let browser: Browser;
+const app = useApp();
+let browser: BrowserContext;
 
 before(async () => {
-  server = await startServer();
-  browser = await openBrowser(server.url);
+  browser = await app.newContext();
 });
 after(async () => {
   await browser?.close();
-  await server?.stop();
 });
 
 test('should let an admin invite a trainer who follows the mailed link, sets a password and is signed in', async () => {
   const admin = await browser.newPage();
-  await signIn(admin, server.url, 'admin@demo.test');
+  await signIn(admin, app.url, 'admin@demo.test');
 
-  await admin.goto(`${server.url}/admin/users`);
+  await admin.goto(`${app.url}/admin/users`);
   await admin.getByRole('button', { name: /Invite/ }).click();
   const dialog = admin.getByRole('dialog');
   await dialog.getByLabel('E-mail').fill('new.trainer@demo.test');
@@ -31,7 +29,7 @@ test('should let an admin invite a trainer who follows the mailed link, sets a p
   await dialog.waitFor({ state: 'hidden' });
   await admin.getByText('new.trainer@demo.test').first().waitFor();
 
-  await admin.goto(`${server.url}/admin/outbox`);
+  await admin.goto(`${app.url}/admin/outbox`);
   await admin.getByRole('button', { name: /You are invited to Hueledger/ }).first().click();
   const link = admin.locator('article a[href*="/invitation/"]');
   await link.waitFor();
@@ -50,15 +48,15 @@ test('should let an admin invite a trainer who follows the mailed link, sets a p
   await screenshot(invitee, 'invitation-accept');
   await invitee.getByRole('button', { name: 'Accept and sign in' }).click();
   await invitee.waitForURL((u) => u.pathname.startsWith('/collection'));
-  assert.match(await invitee.locator('mat-toolbar').innerText(), /trainer/);
+  // The toolbar names the new person once their account has loaded: wait for that, then read it.
+  await invitee.locator('mat-toolbar', { hasText: 'trainer' }).waitFor();
   const me = (await invitee.evaluate(() => fetch('/api/auth/me').then((r) => r.json()))) as { user: { email: string; role: string } };
   assert.deepEqual([me.user.email, me.user.role], ['new.trainer@demo.test', 'trainer']);
 
   // The link works once.
   await invitee.context().clearCookies();
   await invitee.goto(href);
-  await invitee.getByRole('alert').waitFor();
-  assert.match(await invitee.getByRole('alert').innerText(), /already (been used|accepted)/i);
+  await invitee.getByRole('alert').filter({ hasText: /already (been used|accepted)/i }).waitFor();
   await invitee.close();
-  assert.deepEqual(browser.foreignRequests, []);
+  assert.deepEqual(app.foreignRequests, []);
 });

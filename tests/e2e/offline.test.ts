@@ -8,27 +8,13 @@ import { existsSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { after, before, describe, test } from 'node:test';
-import type { Page } from 'playwright-core';
+import type { BrowserContext, Page } from 'playwright-core';
 import sharp from 'sharp';
-import { openBrowser, screenshot, signIn, type Browser } from './browser.js';
-import { startServer, type ServerProcess } from './server-process.js';
+import { screenshot, signIn, navigateTo, choose, useApp } from './browser.js';
+
+const app = useApp();
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
-
-/** Opens the phone's navigation drawer and follows an entry. */
-async function navigateTo(page: Page, label: string): Promise<void> {
-  await page.getByRole('button', { name: 'Open navigation' }).click();
-  await page.locator('mat-sidenav').getByRole('link', { name: label, exact: true }).click();
-  // The landing page (Collection) has an "Accessions" tab: wait for the route itself, not a look-alike.
-  if (label === 'Record') await page.waitForURL(/\/record(\?|$)/);
-}
-
-/** Chooses an option of a Material select by its label and the option's text. */
-async function choose(page: Page, label: string, option: string | RegExp): Promise<void> {
-  await page.getByRole('combobox', { name: label }).click();
-  await page.getByRole('option', { name: option }).first().click();
-  await page.locator('.cdk-overlay-backdrop').waitFor({ state: 'detached' }).catch(() => undefined);
-}
 
 /** An invented scene made here: olive ground with a purple petiole band across the middle. */
 async function bandPhoto(): Promise<Buffer> {
@@ -68,8 +54,7 @@ async function myReadings(page: Page): Promise<{ id: number; method: string }[] 
 }
 
 describe('offline on a phone: cached app, queued readings, sent once back in range', () => {
-  let server: ServerProcess;
-  let browser: Browser;
+  let browser: BrowserContext;
   let page: Page;
   /** The recorder's readings on the server before going offline (the demo may hold some). */
   let known: Set<number>;
@@ -77,22 +62,20 @@ describe('offline on a phone: cached app, queued readings, sent once back in ran
 
   before(async () => {
     assert.ok(existsSync(path.join(root, 'dist/client/browser/ngsw-worker.js')), 'the production build has the service worker (npm run build)');
-    server = await startServer();
-    browser = await openBrowser(server.url, { phone: true });
+    browser = await app.newContext({ phone: true });
     page = await browser.newPage();
-    await signIn(page, server.url, 'recorder@demo.test');
+    await signIn(page, app.url, 'recorder@demo.test');
     const mine = await myReadings(page);
     known = new Set(mine.map((r) => r.id));
     knownTotal = mine.total ?? 0;
   });
   after(async () => {
     await browser?.close();
-    await server?.stop();
   });
 
   test('should install the service worker and cache what the Record form needs while online', async () => {
     const scope = await page.evaluate(async () => (await navigator.serviceWorker.ready).scope);
-    assert.equal(scope, `${server.url}/`);
+    assert.equal(scope, `${app.url}/`);
     // A reload puts the page under the worker's control; then the form's lists pass through its cache.
     await page.reload();
     await page.waitForFunction(() => navigator.serviceWorker.controller !== null);
@@ -111,8 +94,8 @@ describe('offline on a phone: cached app, queued readings, sent once back in ran
   });
 
   test('should open from the cache after a reload with no connection', async () => {
-    await browser.context.setOffline(true);
-    await page.goto(`${server.url}/record`);
+    await browser.setOffline(true);
+    await page.goto(`${app.url}/record`);
     await page.getByRole('heading', { name: 'New reading' }).waitFor();
     assert.equal(await page.evaluate(() => navigator.onLine), false);
     await page.getByLabel('Accession', { exact: true }).waitFor();
@@ -179,8 +162,8 @@ describe('offline on a phone: cached app, queued readings, sent once back in ran
       return all.sort((a, b) => a.createdAt.localeCompare(b.createdAt));
     });
     assert.equal(waiting.length, 2);
-    await browser.context.setOffline(false);
-    await page.getByText('Nothing waiting').waitFor({ timeout: 20_000 });
+    await browser.setOffline(false);
+    await page.getByText('Nothing waiting').waitFor();
     assert.equal(await page.locator('hl-queue-indicator a').count(), 0, 'the toolbar indicator is gone');
     await screenshot(page, 'offline-queue-sent');
 
@@ -201,21 +184,19 @@ describe('offline on a phone: cached app, queued readings, sent once back in ran
   });
 
   test('should load nothing from another origin', () => {
-    assert.deepEqual(browser.foreignRequests, []);
+    assert.deepEqual(app.foreignRequests, []);
   });
 });
 
 describe('offline on a phone: a photo reading kept on the phone, measured again by the server', () => {
-  let server: ServerProcess;
-  let browser: Browser;
+  let browser: BrowserContext;
   let page: Page;
   let known: Set<number>;
 
   before(async () => {
-    server = await startServer();
-    browser = await openBrowser(server.url, { phone: true });
+    browser = await app.newContext({ phone: true });
     page = await browser.newPage();
-    await signIn(page, server.url, 'recorder@demo.test');
+    await signIn(page, app.url, 'recorder@demo.test');
     await page.evaluate(async () => (await navigator.serviceWorker.ready).scope);
     await page.reload();
     await page.waitForFunction(() => navigator.serviceWorker.controller !== null);
@@ -225,11 +206,10 @@ describe('offline on a phone: a photo reading kept on the phone, measured again 
   });
   after(async () => {
     await browser?.close();
-    await server?.stop();
   });
 
   test('should keep the photo, show its colour as provisional, and send photo then reading once online', async () => {
-    await browser.context.setOffline(true);
+    await browser.setOffline(true);
     await page.getByLabel('Accession', { exact: true }).fill('HL-0001');
     await page.getByRole('option', { name: /HL-0001/ }).click();
     await choose(page, 'Character', 'Petiole, upper third');
@@ -253,8 +233,8 @@ describe('offline on a phone: a photo reading kept on the phone, measured again 
     assert.match(await page.locator('hl-queued-reading').innerText(), /Photo region/);
     await screenshot(page, 'offline-photo-queue');
 
-    await browser.context.setOffline(false);
-    await page.getByText('Nothing waiting').waitFor({ timeout: 20_000 });
+    await browser.setOffline(false);
+    await page.getByText('Nothing waiting').waitFor();
     const stored = (await myReadings(page)).filter((r) => !known.has(r.id));
     assert.equal(stored.length, 1);
     assert.equal(stored[0]!.method, 'photo');

@@ -2,12 +2,12 @@
 // region, mark a grey card, and read the result with its chip codes, on a phone and at a desk.
 import assert from 'node:assert/strict';
 import { after, before, describe, test } from 'node:test';
-import type { Page } from 'playwright-core';
+import type { BrowserContext, Page } from 'playwright-core';
 import sharp from 'sharp';
-import { openBrowser, screenshot, type Browser } from './browser.js';
-import { startServer, type ServerProcess } from './server-process.js';
+import { navigateTo, screenshot, signIn, useApp } from './browser.js';
 
-const DEMO_PASSWORD = 'demo-pass-2026';
+const app = useApp();
+
 const WIDTH = 1600;
 const HEIGHT = 1200;
 
@@ -29,14 +29,6 @@ async function fieldPhoto(): Promise<Buffer> {
   return sharp(px, { raw: { width: WIDTH, height: HEIGHT, channels: 3 } }).jpeg({ quality: 90 }).toBuffer();
 }
 
-async function signIn(page: Page, url: string): Promise<void> {
-  await page.goto(`${url}/sign-in`);
-  await page.getByLabel('E-mail').fill('recorder@demo.test');
-  await page.getByLabel('Password', { exact: true }).fill(DEMO_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
-}
-
 /** Drags across the photo between two points given as fractions of its width and height. */
 async function drag(page: Page, from: [number, number], to: [number, number], beforeRelease?: () => Promise<void>): Promise<void> {
   const box = await page.locator('hl-photo-canvas .viewport').boundingBox();
@@ -50,13 +42,10 @@ async function drag(page: Page, from: [number, number], to: [number, number], be
 }
 
 /** The whole flow; returns the page for screenshots. */
-async function takeReading(browser: Browser, url: string, phone: boolean, shot: string): Promise<void> {
+async function takeReading(browser: BrowserContext, url: string, phone: boolean, shot: string): Promise<void> {
   const page = await browser.newPage();
-  await signIn(page, url);
-  if (phone) {
-    await page.getByRole('button', { name: 'Open navigation' }).click();
-  }
-  await page.locator('mat-sidenav').getByText('Record').click();
+  await signIn(page, url, 'recorder@demo.test');
+  await navigateTo(page, 'Record');
   // Record opens the reading form; its photo method leads to the photo page.
   await page.getByRole('radio', { name: /Photo region/ }).click();
   await page.getByRole('heading', { name: 'Photo reading' }).waitFor();
@@ -104,43 +93,36 @@ async function takeReading(browser: Browser, url: string, phone: boolean, shot: 
 }
 
 describe('a photo reading in Chromium', () => {
-  let server: ServerProcess;
-  let phone: Browser;
-  let desk: Browser;
+  let phone: BrowserContext;
+  let desk: BrowserContext;
 
   before(async () => {
-    server = await startServer();
-    phone = await openBrowser(server.url, { phone: true });
-    desk = await openBrowser(server.url);
+    phone = await app.newContext({ phone: true });
+    desk = await app.newContext();
   });
   after(async () => {
     await phone?.close();
     await desk?.close();
-    await server?.stop();
   });
 
   test('should let a recorder on a 390 × 844 phone upload a photo, draw a box and read the chips', async () => {
-    await takeReading(phone, server.url, true, 'photo-reading-phone');
+    await takeReading(phone, app.url, true, 'photo-reading-phone');
   });
 
   test('should lay the photo and the reading side by side at a desk', async () => {
-    await takeReading(desk, server.url, false, 'photo-reading-desktop');
+    await takeReading(desk, app.url, false, 'photo-reading-desktop');
   });
 
   test('should not offer Record to a reviewer', async () => {
     const page = await desk.newPage();
-    await page.goto(`${server.url}/sign-in`);
-    await page.getByLabel('E-mail').fill('reviewer@demo.test');
-    await page.getByLabel('Password', { exact: true }).fill(DEMO_PASSWORD);
-    await page.getByRole('button', { name: 'Sign in' }).click();
-    await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
+    await signIn(page, app.url, 'reviewer@demo.test');
     assert.doesNotMatch((await page.locator('mat-sidenav a').allInnerTexts()).join(' | '), /Record/);
-    await page.goto(`${server.url}/record/photo`);
+    await page.goto(`${app.url}/record/photo`);
     await page.waitForURL((u) => !u.pathname.startsWith('/record'));
     await page.close();
   });
 
   test('should load nothing from another origin', () => {
-    assert.deepEqual([...phone.foreignRequests, ...desk.foreignRequests], []);
+    assert.deepEqual([...app.foreignRequests, ...app.foreignRequests], []);
   });
 });

@@ -4,10 +4,11 @@
 import assert from 'node:assert/strict';
 import { readFileSync } from 'node:fs';
 import { after, before, describe, test } from 'node:test';
-import type { Page } from 'playwright-core';
+import type { BrowserContext, Page } from 'playwright-core';
 import sharp from 'sharp';
-import { openBrowser, screenshot, signIn, type Browser } from './browser.js';
-import { startServer, type ServerProcess } from './server-process.js';
+import { screenshot, signIn, navigateTo, choose, useApp } from './browser.js';
+
+const app = useApp();
 
 const WIDTH = 1200;
 const HEIGHT = 900;
@@ -28,19 +29,6 @@ async function petiolePhoto(): Promise<Buffer> {
     }
   }
   return sharp(px, { raw: { width: WIDTH, height: HEIGHT, channels: 3 } }).jpeg({ quality: 90 }).toBuffer();
-}
-
-/** Opens the phone's navigation drawer and follows an entry. */
-async function navigateTo(page: Page, label: string): Promise<void> {
-  await page.getByRole('button', { name: 'Open navigation' }).click();
-  await page.locator('mat-sidenav').getByRole('link', { name: label, exact: true }).click();
-}
-
-/** Chooses an option of a Material select by its label and the option's text. */
-async function choose(page: Page, label: string, option: string | RegExp): Promise<void> {
-  await page.getByRole('combobox', { name: label }).click();
-  await page.getByRole('option', { name: option }).first().click();
-  await page.locator('.cdk-overlay-backdrop').waitFor({ state: 'detached' }).catch(() => undefined);
 }
 
 /** Saves the form and returns the new reading's id from the saved panel. */
@@ -77,20 +65,17 @@ async function scrollToEnd(page: Page): Promise<void> {
 }
 
 describe('readings on a phone: each method, the table, the detail and the export', () => {
-  let server: ServerProcess;
-  let browser: Browser;
+  let browser: BrowserContext;
   let page: Page;
   const ids: Record<string, number> = {};
 
   before(async () => {
-    server = await startServer();
-    browser = await openBrowser(server.url, { phone: true });
+    browser = await app.newContext({ phone: true });
     page = await browser.newPage();
-    await signIn(page, server.url, 'recorder@demo.test');
+    await signIn(page, app.url, 'recorder@demo.test');
   });
   after(async () => {
     await browser?.close();
-    await server?.stop();
   });
 
   test('should record an instrument reading, choosing accession, character and light', async () => {
@@ -213,6 +198,6 @@ describe('readings on a phone: each method, the table, the detail and the export
   });
 
   test('should load nothing from another origin', () => {
-    assert.deepEqual(browser.foreignRequests, []);
+    assert.deepEqual(app.foreignRequests, []);
   });
 });

@@ -1,19 +1,9 @@
 import assert from 'node:assert/strict';
 import { after, before, describe, test } from 'node:test';
-import type { Page } from 'playwright-core';
-import { openBrowser, screenshot, type Browser } from './browser.js';
-import { startServer, type ServerProcess } from './server-process.js';
+import type { BrowserContext, Page } from 'playwright-core';
+import { navigateTo, screenshot, signIn, useApp } from './browser.js';
 
-/** The demo password (README.md). */
-const DEMO_PASSWORD = 'demo-pass-2026';
-
-async function signIn(page: Page, url: string, email: string): Promise<void> {
-  await page.goto(`${url}/sign-in`);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password', { exact: true }).fill(DEMO_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
-}
+const app = useApp();
 
 /** The codes of the match strip, nearest first. */
 async function stripCodes(page: Page): Promise<string[]> {
@@ -21,24 +11,20 @@ async function stripCodes(page: Page): Promise<string[]> {
 }
 
 describe('a recorder on a phone matches and browses the reference set', () => {
-  let server: ServerProcess;
-  let browser: Browser;
+  let browser: BrowserContext;
   let page: Page;
 
   before(async () => {
-    server = await startServer();
-    browser = await openBrowser(server.url, { phone: true });
+    browser = await app.newContext({ phone: true });
     page = await browser.newPage();
-    await signIn(page, server.url, 'recorder@demo.test');
+    await signIn(page, app.url, 'recorder@demo.test');
   });
   after(async () => {
     await browser?.close();
-    await server?.stop();
   });
 
   test('should reach the reference set from the navigation', async () => {
-    await page.getByRole('button', { name: 'Open navigation' }).click();
-    await page.locator('mat-sidenav').getByText('Reference set').click();
+    await navigateTo(page, 'Reference set');
     await page.waitForURL((u) => u.pathname === '/reference-set/match');
     await page.getByRole('heading', { name: 'Your colour' }).waitFor();
   });
@@ -134,33 +120,30 @@ describe('a recorder on a phone matches and browses the reference set', () => {
   });
 
   test('should load nothing from another origin', () => {
-    assert.deepEqual(browser.foreignRequests, []);
+    assert.deepEqual(app.foreignRequests, []);
   });
 });
 
 describe('a reviewer at a desk browses the reference set', () => {
-  let server: ServerProcess;
-  let browser: Browser;
+  let browser: BrowserContext;
 
   before(async () => {
-    server = await startServer();
-    browser = await openBrowser(server.url);
+    browser = await app.newContext();
   });
   after(async () => {
     await browser?.close();
-    await server?.stop();
   });
 
   test('should see the field chips beside the chosen chip’s detail, and a match strip', async () => {
     const page = await browser.newPage();
-    await signIn(page, server.url, 'reviewer@demo.test');
-    await page.goto(`${server.url}/reference-set/browse?chip=F-087.014`);
+    await signIn(page, app.url, 'reviewer@demo.test');
+    await page.goto(`${app.url}/reference-set/browse?chip=F-087.014`);
     await page.locator('hl-chip-detail .code', { hasText: 'F-087.014' }).waitFor();
     const families = await page.locator('.families').boundingBox();
     const chosen = await page.locator('aside.chosen').boundingBox();
     assert.ok(families && chosen && chosen.x > families.x + families.width - 1, 'the chosen chip sits beside the families on a desk');
     await screenshot(page, 'reference-set-browse-desktop');
-    await page.goto(`${server.url}/reference-set/match`);
+    await page.goto(`${app.url}/reference-set/match`);
     await page.getByLabel('Hex colour').fill('#c8b27a');
     await page.getByText('Checked by the server against set v1').waitFor();
     await screenshot(page, 'reference-set-match-desktop');

@@ -5,10 +5,11 @@
 // re-read mail is in the admin's outbox. Screenshots go to tests/e2e/screenshots/.
 import assert from 'node:assert/strict';
 import { after, before, describe, test } from 'node:test';
-import type { Page } from 'playwright-core';
+import type { BrowserContext, Page } from 'playwright-core';
 import { DEMO_DRIFT, DEMO_STEADY } from '../../server/demo/demo-readings.js';
-import { openBrowser, screenshot, signIn, type Browser } from './browser.js';
-import { startServer, type ServerProcess } from './server-process.js';
+import { screenshot, signIn, choose, useApp } from './browser.js';
+
+const app = useApp();
 
 interface Named {
   id: number;
@@ -34,13 +35,6 @@ function postJson<T>(page: Page, path: string, body: unknown): Promise<{ status:
   ) as Promise<{ status: number; body: T }>;
 }
 
-/** Chooses an option of a Material select by its label and the option's text. */
-async function choose(page: Page, label: string, option: string | RegExp): Promise<void> {
-  await page.getByRole('combobox', { name: label }).click();
-  await page.getByRole('option', { name: option }).first().click();
-  await page.locator('.cdk-overlay-backdrop').waitFor({ state: 'detached' }).catch(() => undefined);
-}
-
 /** The reading id in the review dialog's title. */
 async function dialogReadingId(page: Page): Promise<number> {
   const title = page.getByRole('dialog').locator('[mat-dialog-title]');
@@ -49,9 +43,8 @@ async function dialogReadingId(page: Page): Promise<number> {
 }
 
 describe('drift, the review queue and the recorder’s notice', () => {
-  let server: ServerProcess;
-  let desk: Browser;
-  let phone: Browser;
+  let desk: BrowserContext;
+  let phone: BrowserContext;
   let reviewer: Page;
   let recorder: Page;
   let drift: { accessionId: number; characterId: number; characterLabel: string };
@@ -63,13 +56,12 @@ describe('drift, the review queue and the recorder’s notice', () => {
   const REREAD_COMMENT = 'Please read it again in open shade, on a freshly exposed surface, with the chip touching it.';
 
   before(async () => {
-    server = await startServer();
-    desk = await openBrowser(server.url);
-    phone = await openBrowser(server.url, { phone: true });
+    desk = await app.newContext();
+    phone = await app.newContext({ phone: true });
     reviewer = await desk.newPage();
-    await signIn(reviewer, server.url, 'reviewer@demo.test');
+    await signIn(reviewer, app.url, 'reviewer@demo.test');
     recorder = await phone.newPage();
-    await signIn(recorder, server.url, 'recorder@demo.test');
+    await signIn(recorder, app.url, 'recorder@demo.test');
     const accessions = await getJson<Named[]>(reviewer, '/api/accessions');
     const characters = await getJson<Named[]>(reviewer, '/api/characters');
     const accession = (n: string) => accessions.find((a) => a.accessionNumber === n)!.id;
@@ -82,7 +74,6 @@ describe('drift, the review queue and the recorder’s notice', () => {
   after(async () => {
     await desk?.close();
     await phone?.close();
-    await server?.stop();
   });
 
   test('should show drift on the wet/dry comparison of the drifting accession, picked in the page', async () => {
@@ -119,7 +110,7 @@ describe('drift, the review queue and the recorder’s notice', () => {
   });
 
   test('should show no drift for the steady accession', async () => {
-    await reviewer.goto(`${server.url}/drift?accessionId=${steady.accessionId}&characterId=${steady.characterId}`);
+    await reviewer.goto(`${app.url}/drift?accessionId=${steady.accessionId}&characterId=${steady.characterId}`);
     await reviewer.locator('hl-comparison-list li').first().waitFor();
     assert.equal(await reviewer.locator('hl-comparison-list li[data-state="drift"]').count(), 0);
     assert.ok((await reviewer.locator('hl-comparison-list li[data-state="steady"]').count()) > 0);
@@ -127,7 +118,7 @@ describe('drift, the review queue and the recorder’s notice', () => {
   });
 
   test('should read drift on a phone, charts stacked and tall enough', async () => {
-    await recorder.goto(`${server.url}/drift?accessionId=${drift.accessionId}&characterId=${drift.characterId}`);
+    await recorder.goto(`${app.url}/drift?accessionId=${drift.accessionId}&characterId=${drift.characterId}`);
     await recorder.locator('hl-time-charts canvas').nth(2).waitFor();
     const boxes = await Promise.all([0, 1, 2].map((i) => recorder.locator('hl-time-charts canvas').nth(i).boundingBox()));
     for (const b of boxes) assert.ok(b && b.height >= 280 && b.width <= 390, 'each time chart fits the phone and is at least 280 px tall');
@@ -151,7 +142,7 @@ describe('drift, the review queue and the recorder’s notice', () => {
       assert.equal(saved.status, 201, JSON.stringify(saved.body));
     }
     await reviewer.getByRole('link', { name: 'Drift', exact: true }).click();
-    await reviewer.goto(`${server.url}/drift/sites?accessionId=${drift.accessionId}&characterId=${drift.characterId}`);
+    await reviewer.goto(`${app.url}/drift/sites?accessionId=${drift.accessionId}&characterId=${drift.characterId}`);
     await reviewer.locator('hl-site-matrix-table').waitFor();
     const marked = reviewer.locator('hl-site-matrix-table td.marked');
     assert.ok((await marked.count()) >= 2, 'both cells of the differing pair are marked');
@@ -163,7 +154,7 @@ describe('drift, the review queue and the recorder’s notice', () => {
   test('should flag one reading with a reason and ask for a re-read of the next, moving on after each', async () => {
     await reviewer.getByRole('link', { name: 'Review', exact: true }).click();
     await reviewer.waitForURL((u) => u.pathname === '/review');
-    await reviewer.goto(`${server.url}/review?observerId=${recorderId}`);
+    await reviewer.goto(`${app.url}/review?observerId=${recorderId}`);
     await reviewer.getByRole('button', { name: /^Review reading \d+/ }).first().click();
     const dialog = reviewer.getByRole('dialog');
     flaggedId = await dialogReadingId(reviewer);
@@ -198,7 +189,7 @@ describe('drift, the review queue and the recorder’s notice', () => {
   });
 
   test('should show the recorder the bell count on a phone and lead from the notice to the reading', async () => {
-    await recorder.goto(`${server.url}/readings`);
+    await recorder.goto(`${app.url}/readings`);
     const bell = recorder.locator('mat-toolbar hl-notification-bell a');
     const expected = `Notifications: ${unreadBefore + 2} unread`;
     await recorder.waitForFunction((e) => document.querySelector('mat-toolbar hl-notification-bell a')?.getAttribute('aria-label') === e, expected);
@@ -218,11 +209,11 @@ describe('drift, the review queue and the recorder’s notice', () => {
   });
 
   test('should put the re-read mail, with its link to the reading, in the admin’s outbox', async () => {
-    const admin = await openBrowser(server.url);
+    const admin = await app.newContext();
     try {
       const page = await admin.newPage();
-      await signIn(page, server.url, 'admin@demo.test');
-      await page.goto(`${server.url}/admin/outbox`);
+      await signIn(page, app.url, 'admin@demo.test');
+      await page.goto(`${app.url}/admin/outbox`);
       await page.getByRole('button', { name: /Please read again/ }).first().click();
       const article = page.locator('article');
       await article.getByText(REREAD_COMMENT).waitFor();

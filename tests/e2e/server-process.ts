@@ -28,6 +28,9 @@ export interface ServerOptions {
   needsClient?: boolean;
 }
 
+/** How long a server may take to answer /api/health after it was started. */
+const START_LIMIT_MS = 180_000;
+
 /** A TCP port nobody listens on right now, on loopback. */
 export function freePort(): Promise<number> {
   return new Promise((resolve, reject) => {
@@ -56,7 +59,9 @@ export async function startServerProcess(opts: ServerOptions = {}): Promise<Serv
   child.stdout?.on('data', (d) => (output += d));
   child.stderr?.on('data', (d) => (output += d));
   const url = `http://localhost:${port}`;
-  const deadline = Date.now() + 30_000;
+  // Generous: on a loaded two-core machine compiling the server, migrating and seeding the demo
+  // has taken over 30 s; a server that starts sooner is not waited for any longer.
+  const deadline = Date.now() + START_LIMIT_MS;
   for (;;) {
     if (child.exitCode !== null) throw new Error(`server exited early:\n${output}`);
     try {
@@ -67,7 +72,7 @@ export async function startServerProcess(opts: ServerOptions = {}): Promise<Serv
     }
     if (Date.now() > deadline) {
       child.kill('SIGKILL');
-      throw new Error(`server did not start in 30 s:\n${output}`);
+      throw new Error(`server did not start in ${START_LIMIT_MS / 1000} s:\n${output}`);
     }
     await new Promise((r) => setTimeout(r, 200));
   }

@@ -1,8 +1,10 @@
 import assert from 'node:assert/strict';
 import { after, before, describe, test } from 'node:test';
 import type { Role } from '../../shared/api/roles.js';
-import { DEMO_PASSWORD, openBrowser, screenshot, signIn, type Browser } from './browser.js';
-import { startServer, type ServerProcess } from './server-process.js';
+import type { BrowserContext } from 'playwright-core';
+import { DEMO_PASSWORD, screenshot, signIn, useApp } from './browser.js';
+
+const app = useApp();
 
 /** What each role must and must not see in the side navigation (this issue's sections). */
 const EXPECTED_NAV: Record<Role, { shows: string[]; hides: string[] }> = {
@@ -13,25 +15,21 @@ const EXPECTED_NAV: Record<Role, { shows: string[]; hides: string[] }> = {
 };
 
 describe('signing in as each demo role in Chromium', () => {
-  let server: ServerProcess;
-  let browser: Browser;
+  let browser: BrowserContext;
 
   before(async () => {
-    server = await startServer();
-    browser = await openBrowser(server.url);
+    browser = await app.newContext();
   });
   after(async () => {
     await browser?.close();
-    await server?.stop();
   });
 
   for (const role of ['admin', 'trainer', 'reviewer', 'recorder'] as const) {
     test(`should show the ${role} their own navigation, name and role, then sign out`, async () => {
       const page = await browser.newPage();
-      await signIn(page, server.url, `${role}@demo.test`, DEMO_PASSWORD);
+      await signIn(page, app.url, `${role}@demo.test`, DEMO_PASSWORD);
       await page.getByRole('heading', { name: 'Collection' }).waitFor();
-      const toolbar = page.locator('mat-toolbar');
-      assert.match(await toolbar.innerText(), new RegExp(role));
+      await page.locator('mat-toolbar', { hasText: role }).waitFor();
       const nav = (await page.locator('mat-sidenav a').allInnerTexts()).join(' | ');
       for (const label of EXPECTED_NAV[role].shows) assert.match(nav, new RegExp(`\\b${label}\\b`), `${role} should see ${label}`);
       for (const label of EXPECTED_NAV[role].hides) assert.doesNotMatch(nav, new RegExp(`\\b${label}\\b`), `${role} should not see ${label}`);
@@ -50,7 +48,7 @@ describe('signing in as each demo role in Chromium', () => {
 
   test('should refuse a wrong password with a readable message', async () => {
     const page = await browser.newPage();
-    await page.goto(`${server.url}/sign-in`);
+    await page.goto(`${app.url}/sign-in`);
     await page.getByLabel('E-mail').fill('recorder@demo.test');
     await page.getByLabel('Password', { exact: true }).fill('not-the-password');
     await page.getByRole('button', { name: 'Sign in' }).click();
@@ -62,36 +60,33 @@ describe('signing in as each demo role in Chromium', () => {
 
   test('should send a recorder away from the admin pages', async () => {
     const page = await browser.newPage();
-    await signIn(page, server.url, 'recorder@demo.test', DEMO_PASSWORD);
-    await page.goto(`${server.url}/admin/users`);
+    await signIn(page, app.url, 'recorder@demo.test', DEMO_PASSWORD);
+    await page.goto(`${app.url}/admin/users`);
     await page.getByRole('heading', { name: 'Collection' }).waitFor();
     assert.ok(!new URL(page.url()).pathname.startsWith('/admin'));
     await page.close();
   });
 
   test('should load nothing from another origin', () => {
-    assert.deepEqual(browser.foreignRequests, []);
+    assert.deepEqual(app.foreignRequests, []);
   });
 });
 
 describe('a recorder on a phone', () => {
-  let server: ServerProcess;
-  let browser: Browser;
+  let browser: BrowserContext;
 
   before(async () => {
-    server = await startServer();
-    browser = await openBrowser(server.url, { phone: true });
+    browser = await app.newContext({ phone: true });
   });
   after(async () => {
     await browser?.close();
-    await server?.stop();
   });
 
   test('should find the navigation behind the menu button', async () => {
     const page = await browser.newPage();
-    await page.goto(`${server.url}/sign-in`);
+    await page.goto(`${app.url}/sign-in`);
     await screenshot(page, 'sign-in-phone');
-    await signIn(page, server.url, 'recorder@demo.test', DEMO_PASSWORD);
+    await signIn(page, app.url, 'recorder@demo.test', DEMO_PASSWORD);
     await page.getByRole('heading', { name: 'Collection' }).waitFor();
     await page.locator('text=HL-0001').first().waitFor();
     await screenshot(page, 'collection-recorder-phone');
@@ -106,6 +101,6 @@ describe('a recorder on a phone', () => {
   });
 
   test('should load nothing from another origin', () => {
-    assert.deepEqual(browser.foreignRequests, []);
+    assert.deepEqual(app.foreignRequests, []);
   });
 });
