@@ -8,7 +8,8 @@ import { User } from '../auth/user.entity.js';
 import { AppError } from '../core/app-error.js';
 import type { Mailer } from '../mail/mailer.js';
 import type { ReferenceSets } from '../reference-sets/reference-sets.js';
-import { resultsOutMail } from './calibration-mail.js';
+import { Notification } from '../reviews/review.entity.js';
+import { resultsNotice, resultsOutMail } from './calibration-mail.js';
 import { chipOf, fieldCodeOf } from './calibration-chips.js';
 import { assertOpen, findSession, loadResults, mayTakePart, participantOf, today } from './calibration-load.js';
 import { CalibrationResponse, CalibrationSession, Participant, Specimen } from './calibration-session.entity.js';
@@ -80,6 +81,10 @@ export async function certifyAndClose(m: EntityManager, actor: Actor, sessionId:
     certifiedUserIds.push(o.userId);
   }
   await m.update(CalibrationSession, { id: sessionId }, { status: 'closed', closedAt, kappaAtClose: live.fleissKappa });
+  for (const o of live.observers) {
+    const certified = certifiedUserIds.includes(o.userId);
+    await m.insert(Notification, { userId: o.userId, kind: 'calibration-results', readingId: null, sessionId, message: resultsNotice(session.title, certified, o.failedRules), readAt: null });
+  }
   await recordAudit(m, actor, 'calibration.session.closed', `calibration-session:${sessionId}`, {
     fleissKappa: live.fleissKappa,
     band: live.band,

@@ -20,3 +20,32 @@ export function resultsOutMail(to: string, name: string, title: string, heldOn: 
     ].join('\n'),
   };
 }
+
+/** The mail an observer gets when a trainer invites them to a session. */
+export function invitedMail(to: string, name: string, title: string, heldOn: string, publicUrl: string, sessionId: number): OutgoingMail {
+  const link = `${publicUrl}${calibrationSessionPath(sessionId)}/take`;
+  return {
+    to,
+    subject: `You are invited to a calibration session: ${title}`,
+    text: [
+      `Hello ${name},`,
+      '',
+      `You are invited to the calibration session "${title}" of ${heldOn}.`,
+      'For each specimen laid out, pick the chip you see as nearest, under the light the trainer sets.',
+      'Wear gloves when handling raw corm, leaf or sap, and never taste raw tissue.',
+      '',
+      link,
+    ].join('\n'),
+  };
+}
+
+/** The in-app notice of an invitation. */
+export function invitedNotice(title: string, heldOn: string): string {
+  return `You are invited to the calibration session "${title}" of ${heldOn}: open it and pick a chip for each specimen.`;
+}
+
+/** The in-app notice that a session's results are out, with the observer's own outcome. */
+export function resultsNotice(title: string, certified: boolean, failedRules: readonly { text: string }[]): string {
+  const outcome = certified ? 'you are certified' : `you are not certified${failedRules.length ? `: ${failedRules.map((r) => r.text).join('; ')}` : ''}`;
+  return `The results of "${title}" are out, and ${outcome}. Open the session to see each of your picks beside the reference.`;
+}

@@ -15,7 +15,10 @@ import type { Region } from '../../shared/photo/region.js';
 import { recordAudit, type Actor } from '../audit/audit.js';
 import { User } from '../auth/user.entity.js';
 import { AppError } from '../core/app-error.js';
+import type { Mailer } from '../mail/mailer.js';
 import { Photo } from '../photos/photo.entity.js';
+import { Notification } from '../reviews/review.entity.js';
+import { invitedMail, invitedNotice } from './calibration-mail.js';
 import type { ReferenceSets } from '../reference-sets/reference-sets.js';
 import { chipOf, fieldCodeOf, nearestFieldChip } from './calibration-chips.js';
 import { assertMaySee, assertOpen, findSession, mayTakePart, participantsOf, runsSessions, today } from './calibration-load.js';
@@ -103,9 +106,22 @@ export async function addSpecimen(ds: DataSource, sets: ReferenceSets, sample: P
   });
 }
 
-/** Invites users to a session (restricted sessions admit only them); already-invited users are left as they are. */
-export async function inviteParticipants(ds: DataSource, actor: Actor, sessionId: number, userIds: readonly number[]): Promise<ParticipantsAnswer> {
+/** Where invitation mails go and how a failed one is logged. */
+export interface InviteMail {
+  mailer: Mailer;
+  publicUrl: string;
+  logError?: (err: unknown) => void;
+}
+
+/**
+ * Invites users to a session (restricted sessions admit only them); already-invited users are left
+ * as they are. Each newly invited user gets an in-app notice (with the invitation, in one
+ * transaction) and then a mail; a failed mail does not undo the invitation.
+ */
+export async function inviteParticipants(ds: DataSource, actor: Actor, sessionId: number, userIds: readonly number[], mail?: InviteMail): Promise<ParticipantsAnswer> {
   const unique = [...new Set(userIds)];
+  const newly: User[] = [];
+  const session = await findSession(ds.manager, sessionId);
   const added = await ds.transaction(async (m) => {
     assertOpen(await findSession(m, sessionId), 'nobody more can be invited');
     const users = await m.find(User, { where: { id: In(unique), active: true } });
@@ -118,12 +134,23 @@ export async function inviteParticipants(ds: DataSource, actor: Actor, sessionId
       if (row?.invited) continue;
       if (row) await m.update(Participant, { id: row.id }, { invited: true });
       else await m.insert(Participant, { session: { id: sessionId }, user: { id }, invited: true });
+      await m.insert(Notification, { userId: id, kind: 'calibration-invited', readingId: null, sessionId, message: invitedNotice(session.title, session.heldOn), readAt: null });
+      newly.push(users.find((u) => u.id === id)!);
       count++;
     }
     if (count) await recordAudit(m, actor, 'calibration.participants.invited', `calibration-session:${sessionId}`, { userIds: unique });
     return count;
   });
-  return { added, participants: await participantsOf(ds.manager, sessionId) };
+  let mailed = 0;
+  for (const user of mail ? newly : []) {
+    try {
+      await mail!.mailer.send(invitedMail(user.email, user.name, session.title, session.heldOn, mail!.publicUrl, sessionId));
+      mailed++;
+    } catch (err) {
+      mail!.logError?.(err);
+    }
+  }
+  return { added, mailed, participants: await participantsOf(ds.manager, sessionId) };
 }
 
 interface SummaryRow {

@@ -29,10 +29,10 @@ export async function markNotificationRead(ds: DataSource, actor: Actor, userId:
     if (!n) throw AppError.notFound(`You have no notice ${id}.`);
     if (n.readAt !== null) return;
     await m.update(Notification, { id }, { readAt: new Date() });
-    await recordAudit(m, actor, 'notification.read', `notification:${id}`, { readingId: n.readingId });
+    await recordAudit(m, actor, 'notification.read', `notification:${id}`, n.readingId !== null ? { readingId: n.readingId } : { sessionId: n.sessionId });
   });
 }
 
 function toNotificationDto(n: Notification): NotificationDto {
-  return { id: n.id, kind: n.kind, readingId: n.readingId, message: n.message, createdAt: n.createdAt.toISOString(), readAt: n.readAt?.toISOString() ?? null };
+  return { id: n.id, kind: n.kind, readingId: n.readingId, sessionId: n.sessionId, message: n.message, createdAt: n.createdAt.toISOString(), readAt: n.readAt?.toISOString() ?? null };
 }

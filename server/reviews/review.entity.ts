@@ -1,6 +1,7 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import type { NotificationKind, ReviewDecision } from '../../shared/api/review-answers.js';
 import { User } from '../auth/user.entity.js';
+import { CalibrationSession } from '../calibration/calibration-session.entity.js';
 import { Reading } from '../readings/reading.entity.js';
 
 /**
@@ -21,7 +22,7 @@ export class Review {
   @CreateDateColumn({ type: 'datetime' }) createdAt: Date;
 }
 
-/** An in-app notice to one user about one reading (a flag or a re-read request on their reading). */
+/** An in-app notice to one user about one reading (a flag or a re-read request) or one calibration session (an invitation, results out). */
 @Entity('notification')
 @Index(['userId', 'readAt'])
 export class Notification {
@@ -29,8 +30,10 @@ export class Notification {
   @Column('integer') userId: number;
   @ManyToOne(() => User, { nullable: false, onDelete: 'CASCADE' }) @JoinColumn({ name: 'userId' }) user?: User;
   @Column('varchar', { length: 24 }) kind: NotificationKind;
-  @Column('integer') readingId: number;
-  @ManyToOne(() => Reading, { nullable: false, onDelete: 'RESTRICT' }) @JoinColumn({ name: 'readingId' }) reading?: Reading;
+  @Column('integer', { nullable: true }) readingId: number | null;
+  @ManyToOne(() => Reading, { nullable: true, onDelete: 'RESTRICT' }) @JoinColumn({ name: 'readingId' }) reading?: Reading;
+  @Column('integer', { nullable: true }) sessionId: number | null;
+  @ManyToOne(() => CalibrationSession, { nullable: true, onDelete: 'RESTRICT' }) @JoinColumn({ name: 'sessionId' }) session?: CalibrationSession;
   @Column('text') message: string;
   @CreateDateColumn({ type: 'datetime' }) createdAt: Date;
   /** When the user marked it read; null while unread. */

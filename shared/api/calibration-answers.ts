@@ -111,6 +111,8 @@ export interface ResponseCreated {
 export interface ParticipantsAnswer {
   /** How many of the users given were not yet invited. */
   added: number;
+  /** How many of those were told by mail (each also gets an in-app notice). */
+  mailed: number;
   participants: Participant[];
 }
 

@@ -44,14 +44,17 @@ export interface ReviewAnswer {
 /** `GET /api/reviews/queue`: the readings filter (status defaults to submitted), paginated → `{items,total}`. */
 export type ReviewQueueQuery = ReadingListQuery;
 
-export const NOTIFICATION_KINDS = ['reading-flagged', 'reread-requested'] as const;
+export const NOTIFICATION_KINDS = ['reading-flagged', 'reread-requested', 'calibration-invited', 'calibration-results'] as const;
 export type NotificationKind = (typeof NOTIFICATION_KINDS)[number];
 
-/** An in-app notice to a recorder about one of their readings. */
+/** An in-app notice: to a recorder about one of their readings, or to an observer about a calibration session. */
 export interface NotificationDto {
   id: number;
   kind: NotificationKind;
-  readingId: number;
+  /** The reading it is about (reading kinds); null for calibration notices. */
+  readingId: number | null;
+  /** The calibration session it is about (calibration kinds); null for reading notices. */
+  sessionId: number | null;
   /** Plain words: what the reviewer decided and their comment. */
   message: string;
   createdAt: string;

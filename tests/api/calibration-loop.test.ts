@@ -7,7 +7,8 @@ import Color from 'colorjs.io';
 import type { CalibrationResults, Certification, ObserverStandingRow } from '../../shared/api/calibration-answers.js';
 import { certificationState } from '../../server/calibration/certificate-standing.js';
 import { assertProblem } from './assert-problem.js';
-import { addUser, Client, PASSWORD, startHarness, type Harness } from './harness.js';
+import type { NotificationList } from '../../shared/api/review-answers.js';
+import { addUser, Client, mailsTo, PASSWORD, startHarness, type Harness } from './harness.js';
 
 type Lab3 = [number, number, number];
 /** CIEDE2000 by colorjs.io, independent of the server's culori (same L*a*b* numbers, the formula compared). */
@@ -123,6 +124,32 @@ describe('calibration results people can act on', () => {
     for (const words of ['Observer A', 'Small group', `Valid until: ${cert.validUntil}`, 'rule at least 0.61', 'limit 1.8', `Certified on: ${cert.certifiedOn}`]) assert.ok(text.includes(words), `the PDF says "${words}"`);
     await trainer.get(`/api/calibration/certifications/${cert.id}/certificate.pdf`).expect(200);
     assertProblem(await obs.C.client.get(`/api/calibration/certifications/${cert.id}/certificate.pdf`), 404);
+  });
+
+  test('should tell each observer in the app that the results are out, with their own outcome', async () => {
+    const a = (await obs.A.client.get('/api/notifications').expect(200)).body as NotificationList;
+    const c = (await obs.C.client.get('/api/notifications').expect(200)).body as NotificationList;
+    const resultsOf = (list: NotificationList) => list.items.filter((n) => n.kind === 'calibration-results' && n.sessionId === first);
+    assert.equal(resultsOf(a).length, 1);
+    assert.match(resultsOf(a)[0]!.message, /^The results of "Small group" are out, and you are certified\./);
+    assert.equal(resultsOf(a)[0]!.readingId, null);
+    assert.match(resultsOf(c)[0]!.message, /you are not certified: mean ΔE00 [0-9.]+ is above the limit 1.8/);
+    assert.ok(c.unread >= 1);
+    assert.equal((await mailsTo(h.ds, 'loop-c@test.example')).filter((m) => /calibration results are out: Small group/.test(m.subject)).length, 1);
+  });
+
+  test('should tell an invited observer in the app and by mail, once', async () => {
+    const id = (await trainer.post('/api/calibration/sessions', { title: 'Invited group', heldOn: '2026-04-02', restricted: true }).expect(201)).body.id;
+    const answer = (await trainer.post(`/api/calibration/sessions/${id}/participants`, { userIds: [obs.C.id] }).expect(200)).body as { added: number; mailed: number };
+    assert.deepEqual([answer.added, answer.mailed], [1, 1]);
+    await trainer.post(`/api/calibration/sessions/${id}/participants`, { userIds: [obs.C.id] }).expect(200);
+    const notices = ((await obs.C.client.get('/api/notifications').expect(200)).body as NotificationList).items.filter((n) => n.kind === 'calibration-invited' && n.sessionId === id);
+    assert.equal(notices.length, 1, 'inviting again sends nothing more');
+    assert.equal(notices[0]!.message, 'You are invited to the calibration session "Invited group" of 2026-04-02: open it and pick a chip for each specimen.');
+    const mails = (await mailsTo(h.ds, 'loop-c@test.example')).filter((m) => m.subject === 'You are invited to a calibration session: Invited group');
+    assert.equal(mails.length, 1);
+    assert.match(mails[0]!.text, new RegExp(`/calibration/sessions/${id}/take`));
+    assert.match(mails[0]!.text, /gloves/);
   });
 
   test('should lapse a certification when a later session does not certify the observer, and list current, lapsed and never-certified observers', async () => {

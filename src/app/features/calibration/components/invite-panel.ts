@@ -18,8 +18,9 @@ interface Candidate {
 }
 
 /**
- * Invites observers to a restricted session. Admins choose from every user; trainers (who may not
- * list users) from the people with a screening or certification on record.
+ * Invites observers to a session; each invited person is told in the app and by mail. Admins
+ * choose from the user list; trainers (who may not list users) from every active user's
+ * certification standing.
  */
 @Component({
   selector: 'hl-invite-panel',
@@ -29,10 +30,13 @@ interface Candidate {
     @if (problem(); as message) {
       <div class="hl-notice hl-notice-error" role="alert"><mat-icon aria-hidden="true">error</mat-icon><p>{{ message }}</p></div>
     }
+    @if (done(); as message) {
+      <p role="status" class="done"><mat-icon aria-hidden="true" class="inline">mark_email_read</mat-icon> {{ message }}</p>
+    }
     @if (candidates() === null) {
       <p class="hl-muted">Loading people…</p>
     } @else if (!open().length) {
-      <p class="hl-muted">Everyone we know of is invited already.{{ role() === 'admin' ? '' : ' Trainers see people once they have a screening or a certification on record; an admin can invite anyone.' }}</p>
+      <p class="hl-muted">Everyone is invited already.</p>
     } @else {
       <ul class="people">
         @for (c of open(); track c.id) {
@@ -68,6 +72,8 @@ export class InvitePanel implements OnInit {
   protected readonly chosen = signal(new Set<number>());
   protected readonly busy = signal(false);
   protected readonly problem = signal<string | null>(null);
+  /** What the last invitation did, in words. */
+  protected readonly done = signal<string | null>(null);
   protected readonly open = computed(() => {
     const taken = new Set(this.participants().filter((p) => p.invited).map((p) => p.userId));
     return (this.candidates() ?? []).filter((c) => !taken.has(c.id));
@@ -92,6 +98,7 @@ export class InvitePanel implements OnInit {
       next: (answer) => {
         this.busy.set(false);
         this.chosen.set(new Set());
+        this.done.set(`Invited ${answer.added}; each was told in the app and ${answer.mailed === answer.added ? 'by mail' : `by mail (${answer.mailed} of ${answer.added} mails sent)`}.`);
         this.invited.emit(answer);
       },
       error: (error: unknown) => {
@@ -110,13 +117,10 @@ export class InvitePanel implements OnInit {
             catchError(() => of(null)),
           )
         : of(null);
-    const known = forkJoin([this.api.screenings().pipe(catchError(() => of([]))), this.api.certifications().pipe(catchError(() => of([])))]).pipe(
-      map(([screenings, certs]) => {
-        const byId = new Map<number, Candidate>();
-        for (const s of screenings) byId.set(s.userId, { id: s.userId, name: s.name, note: 'screened' });
-        for (const c of certs) if (!byId.has(c.userId)) byId.set(c.userId, { id: c.userId, name: c.name, note: 'certified before' });
-        return [...byId.values()].sort((x, y) => x.name.localeCompare(y.name));
-      }),
+    // Trainers choose from every active user's certification standing, which they may read.
+    const known = this.api.standings().pipe(
+      map((rows) => rows.map((r): Candidate => ({ id: r.userId, name: r.name, note: `${r.role}, ${r.standing === 'never' ? 'never certified' : `certificate ${r.standing}`}` }))),
+      catchError(() => of([] as Candidate[])),
     );
     forkJoin([users, known]).subscribe(([all, fromRecords]) => this.candidates.set(all ?? fromRecords));
   }

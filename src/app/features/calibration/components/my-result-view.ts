@@ -6,6 +6,7 @@ import { verdictFor } from '../../../../../shared/colour/verdict.js';
 import { VerdictMark } from '../../reference-set/components/verdict-mark';
 import { deltaEText } from '../../reference-set/data/chip-words';
 import { biasNumbers, biasWords } from '../data/bias-words';
+import { certificatePdfUrl } from '../data/calibration-api';
 import { kappaWords } from '../data/session-words';
 
 /** An observer's own result of a closed session: mean ΔE00, bias in words, and each pick beside its reference. */
@@ -26,6 +27,9 @@ export class MyResultView {
     return bias ? biasNumbers(bias) : null;
   });
   protected readonly kappa = computed(() => kappaWords(this.result().fleissKappa, this.result().band));
+  /** The rules not met, joined into one clause. */
+  protected readonly failedText = computed(() => this.observer().failedRules.map((r) => r.text).join('; '));
   protected readonly deltaEText = deltaEText;
   protected readonly verdictFor = verdictFor;
+  protected readonly pdfUrl = certificatePdfUrl;
 }

@@ -1,7 +1,7 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
 
-import { SCREENING_METHOD_LABELS, type CalibrationResults, type PairAgreement } from '../../../../../shared/api/calibration-answers.js';
+import { SCREENING_METHOD_LABELS, type CalibrationResults, type FailedRule, type PairAgreement } from '../../../../../shared/api/calibration-answers.js';
 import { verdictFor } from '../../../../../shared/colour/verdict.js';
 import { KAPPA_BAND_LABELS } from '../../../../../shared/stats/landis-koch.js';
 import { VerdictMark } from '../../reference-set/components/verdict-mark';
@@ -45,4 +45,10 @@ export class ResultsView {
   protected readonly biasNumbers = biasNumbers;
   protected readonly bandLabels = KAPPA_BAND_LABELS;
   protected readonly methodLabels = SCREENING_METHOD_LABELS;
+
+  /** The failed rules joined into one clause: "a; b and c". */
+  protected failedText(rules: readonly FailedRule[]): string {
+    const texts = rules.map((r) => r.text);
+    return texts.length < 2 ? (texts[0] ?? '') : `${texts.slice(0, -1).join('; ')} and ${texts.at(-1)}`;
+  }
 }

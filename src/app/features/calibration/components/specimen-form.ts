@@ -1,5 +1,5 @@
-import { ChangeDetectionStrategy, Component, inject, input, output, signal } from '@angular/core';
-import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { ChangeDetectionStrategy, Component, inject, input, output, signal, viewChild } from '@angular/core';
+import { FormGroupDirective, NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -33,6 +33,8 @@ export class SpecimenForm {
   readonly sessionId = input.required<number>();
   /** A specimen was added (its id). */
   readonly added = output<number>();
+  /** The form's directive: resetting through it also clears "submitted", so the emptied label shows no error. */
+  private readonly formDirective = viewChild.required(FormGroupDirective);
 
   protected readonly limits = LAB_INPUT_LIMITS;
   protected readonly source = signal<SpecimenSource>('lab');
@@ -78,7 +80,7 @@ export class SpecimenForm {
     this.api.addSpecimen(this.sessionId(), body).subscribe({
       next: ({ id }) => {
         this.busy.set(false);
-        this.form.reset();
+        this.formDirective().resetForm();
         this.region.set(null);
         this.photo.set(null);
         this.added.emit(id);

@@ -15,6 +15,7 @@ import type {
   CreateScreeningRequest,
   CreateSpecimenRequest,
   MyCalibrationResult,
+  ObserverStandingRow,
   ParticipantsAnswer,
   ResponseCreated,
   Screening,
@@ -73,6 +74,11 @@ export class CalibrationApi {
     return this.http.get<Certification[]>(`${BASE}/certifications`, { params: userParams(userId) });
   }
 
+  /** Every active user's standing: current, lapsed or never certified (trainers, admins). */
+  standings(): Observable<ObserverStandingRow[]> {
+    return this.http.get<ObserverStandingRow[]>(`${BASE}/standings`);
+  }
+
   /** Colour-vision screenings, newest first, scoped as certifications are. */
   screenings(userId?: number): Observable<Screening[]> {
     return this.http.get<Screening[]>(`${BASE}/screenings`, { params: userParams(userId) });
@@ -86,6 +92,11 @@ export class CalibrationApi {
   users(): Observable<UserRow[]> {
     return this.http.get<UserRow[]>('/api/users');
   }
+}
+
+/** Where a certificate's PDF is downloaded. */
+export function certificatePdfUrl(certificationId: number): string {
+  return `${BASE}/certifications/${certificationId}/certificate.pdf`;
 }
 
 /** Where a session's live results are read. */

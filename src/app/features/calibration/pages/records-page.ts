@@ -4,12 +4,12 @@ import { MatProgressSpinnerModule } from '@angular/material/progress-spinner';
 import { RouterLink } from '@angular/router';
 import { catchError, forkJoin, of } from 'rxjs';
 
-import { SCREENING_METHOD_LABELS, type Certification, type Screening } from '../../../../../shared/api/calibration-answers.js';
+import { SCREENING_METHOD_LABELS, type Certification, type ObserverStandingRow, type Screening } from '../../../../../shared/api/calibration-answers.js';
 import { AuthStore } from '../../../core/auth/auth-store';
 import { deltaEText, formatNumber } from '../../reference-set/data/chip-words';
 import { CalibrationTabs } from '../components/calibration-tabs';
 import { ScreeningForm } from '../components/screening-form';
-import { CalibrationApi } from '../data/calibration-api';
+import { CalibrationApi, certificatePdfUrl } from '../data/calibration-api';
 import { observerRecords } from '../data/observer-records';
 import { runsSessions } from '../data/session-words';
 
@@ -31,6 +31,13 @@ export class RecordsPage {
   protected readonly screenings = signal<Screening[]>([]);
   private readonly people = signal<{ id: number; name: string }[]>([]);
   protected readonly failed = signal(false);
+  /** Every active user's standing (trainers, admins); empty for others. */
+  protected readonly standings = signal<ObserverStandingRow[]>([]);
+  protected readonly standingCounts = computed(() => {
+    const rows = this.standings();
+    return { current: rows.filter((r) => r.standing === 'current').length, lapsed: rows.filter((r) => r.standing === 'lapsed').length, never: rows.filter((r) => r.standing === 'never').length };
+  });
+  protected readonly pdfUrl = certificatePdfUrl;
 
   protected readonly myCertifications = computed(() => (this.certifications() ?? []).filter((c) => c.userId === this.me()?.id));
   protected readonly myScreenings = computed(() => this.screenings().filter((s) => s.userId === this.me()?.id));
@@ -47,8 +54,10 @@ export class RecordsPage {
   protected loadRecords(): void {
     this.failed.set(false);
     const users = this.auth.role() === 'admin' ? this.api.users().pipe(catchError(() => of([]))) : of([]);
-    forkJoin([this.api.certifications(), this.api.screenings(), users]).subscribe({
-      next: ([certs, screenings, all]) => {
+    const standings = this.runs() ? this.api.standings() : of([]);
+    forkJoin([this.api.certifications(), this.api.screenings(), users, standings]).subscribe({
+      next: ([certs, screenings, all, rows]) => {
+        this.standings.set(rows);
         this.certifications.set(certs);
         this.screenings.set(screenings);
         this.people.set(all.map((u) => ({ id: u.id, name: u.name })));

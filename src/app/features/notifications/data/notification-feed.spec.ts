@@ -11,7 +11,7 @@ import { NOTIFICATION_POLL_MS, NotificationFeed } from './notification-feed';
 class Blank {}
 
 function notice(id: number, readAt: string | null = null): NotificationDto {
-  return { id, kind: 'reread-requested', readingId: 40 + id, message: 'Please read it again in open shade.', createdAt: '2026-03-01T10:00:00Z', readAt };
+  return { id, kind: 'reread-requested', readingId: 40 + id, sessionId: null, message: 'Please read it again in open shade.', createdAt: '2026-03-01T10:00:00Z', readAt };
 }
 
 describe('NotificationFeed', () => {

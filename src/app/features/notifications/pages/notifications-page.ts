@@ -5,6 +5,7 @@ import { MatIconModule } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
 
 import type { NotificationDto, NotificationKind } from '../../../../../shared/api/review-answers.js';
+import { calibrationSessionPath } from '../../../../../shared/api/calibration-answers.js';
 import { readingUrl } from '../../../../../shared/api/reading-answers.js';
 import { NotificationFeed } from '../data/notification-feed';
 
@@ -12,6 +13,8 @@ import { NotificationFeed } from '../data/notification-feed';
 const KIND_WORDS: Record<NotificationKind, { title: string; icon: string }> = {
   'reading-flagged': { title: 'Reading flagged', icon: 'flag' },
   'reread-requested': { title: 'Re-read asked for', icon: 'replay' },
+  'calibration-invited': { title: 'Invited to calibrate', icon: 'groups' },
+  'calibration-results': { title: 'Calibration results out', icon: 'workspace_premium' },
 };
 
 /** The signed-in person's notices, newest first; opening one marks it read and goes to the reading, where it can be corrected. */
@@ -27,7 +30,7 @@ const KIND_WORDS: Record<NotificationKind, { title: string; icon: string }> = {
       } @else if (items().length === 0) {
         <div class="hl-empty">
           <mat-icon aria-hidden="true">notifications_off</mat-icon>
-          <p>No notifications. When a reviewer flags one of your readings or asks for a re-read, it shows here and comes by e-mail.</p>
+          <p>No notifications. When a reviewer flags one of your readings or asks for a re-read, or a trainer invites you to calibrate or closes your session, it shows here and comes by e-mail.</p>
         </div>
       } @else {
         <p class="hl-muted" role="status">{{ feed.unread() }} unread of {{ items().length }}</p>
@@ -37,7 +40,7 @@ const KIND_WORDS: Record<NotificationKind, { title: string; icon: string }> = {
               <mat-icon class="kind" aria-hidden="true">{{ kind(n).icon }}</mat-icon>
               <div class="body">
                 <p class="title">
-                  <strong>{{ kind(n).title }}</strong> · reading {{ n.readingId }}
+                  <strong>{{ kind(n).title }}</strong> · {{ subject(n) }}
                   @if (!n.readAt) {
                     <span class="new"><mat-icon aria-hidden="true">fiber_new</mat-icon>unread</span>
                   }
@@ -45,7 +48,7 @@ const KIND_WORDS: Record<NotificationKind, { title: string; icon: string }> = {
                 <p class="message">{{ n.message }}</p>
                 <p class="hl-muted when"><time [attr.datetime]="n.createdAt">{{ n.createdAt | date: 'd MMM y, HH:mm' }}</time></p>
                 <div class="actions">
-                  <a mat-flat-button [routerLink]="url(n)" (click)="open(n)"><mat-icon aria-hidden="true">open_in_new</mat-icon> Open reading {{ n.readingId }}</a>
+                  <a mat-flat-button [routerLink]="url(n)" (click)="open(n)"><mat-icon aria-hidden="true">open_in_new</mat-icon> Open {{ subject(n) }}</a>
                   @if (!n.readAt) {
                     <button mat-button type="button" (click)="feed.markRead(n.id)"><mat-icon aria-hidden="true">done</mat-icon> Mark read</button>
                   }
@@ -124,7 +127,12 @@ export class NotificationsPage {
   }
 
   protected url(n: NotificationDto): string {
-    return readingUrl(n.readingId);
+    return n.readingId !== null ? readingUrl(n.readingId) : calibrationSessionPath(n.sessionId!);
+  }
+
+  /** What the notice is about, as a link label: "reading 12" or "session 3". */
+  protected subject(n: NotificationDto): string {
+    return n.readingId !== null ? `reading ${n.readingId}` : `session ${n.sessionId}`;
   }
 
   /** Opening a notice marks it read; the link itself navigates. */

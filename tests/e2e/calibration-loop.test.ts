@@ -1,0 +1,138 @@
+// What a trainer and an observer see after a calibration session, in Chromium with the demo data
+// (issue 17): κ with its interval and the small-sample warning, what to tell each observer (the
+// demo observer with every field chip right and a high mean ΔE00 is told why both hold), each
+// observer's pick per specimen; the Certificates tab with current, lapsed and never-certified
+// observers and a certificate PDF; an invitation that reaches the observer's notices; and the
+// specimen form that empties without a red error after a specimen is added.
+import assert from 'node:assert/strict';
+import { after, before, describe, test } from 'node:test';
+import type { Page } from 'playwright-core';
+import { openBrowser, screenshot, signIn, type Browser } from './browser.js';
+import { startServer, type ServerProcess } from './server-process.js';
+
+interface SessionRow {
+  id: number;
+  title: string;
+  status: string;
+}
+
+function getJson<T>(page: Page, path: string): Promise<T> {
+  return page.evaluate((p) => fetch(p).then((r) => r.json()), path) as Promise<T>;
+}
+
+describe('calibration results people can act on', () => {
+  let server: ServerProcess;
+  let trainerBrowser: Browser;
+  let trainer: Page;
+  let recorderBrowser: Browser;
+  let recorder: Page;
+  let closed: SessionRow;
+  let open: SessionRow;
+
+  before(async () => {
+    server = await startServer();
+    trainerBrowser = await openBrowser(server.url);
+    trainer = await trainerBrowser.newPage();
+    await signIn(trainer, server.url, 'trainer@demo.test');
+    const sessions = await getJson<SessionRow[]>(trainer, '/api/calibration/sessions');
+    closed = sessions.find((s) => s.status === 'closed')!;
+    open = sessions.find((s) => s.status === 'open')!;
+    recorderBrowser = await openBrowser(server.url, { phone: true });
+    recorder = await recorderBrowser.newPage();
+    await signIn(recorder, server.url, 'recorder@demo.test');
+  });
+  after(async () => {
+    await recorderBrowser?.close();
+    await trainerBrowser?.close();
+    await server?.stop();
+  });
+
+  test("should show κ's interval, the small-sample warning, what to tell each observer, and each observer's pick", async () => {
+    await trainer.goto(`${server.url}/calibration/sessions/${closed.id}`);
+    const interval = trainer.locator('[data-testid="kappa-interval"]');
+    await interval.waitFor();
+    assert.match(await interval.innerText(), /^95 % interval of κ: −?\d\.\d{2} to −?\d\.\d{2} \(percentile bootstrap over specimens, 2000 resamples/);
+    assert.match(await trainer.locator('[data-testid="sample-warning"]').first().innerText(), /Sample too small to judge: κ rests on 5 specimens/);
+    const tamsin = trainer.locator('[data-testid="observer-advice"] li', { hasText: 'Tamsin Orrowby' });
+    const advice = await tamsin.innerText();
+    assert.match(advice, /Certified: no, because mean ΔE00 \d\.\d{2} is above the limit 1\.8/);
+    assert.match(advice, /picked the reference's field chip on 100 % of specimens, but the chips they picked sit on average \d\.\d{2} ΔE00 from the references \(limit 1\.8\): a field chip is a coarse cell, so practise choosing the nearest fine chip within it/);
+    const firstSpecimen = trainer.locator('table.specimens tbody tr').first();
+    const picks = await firstSpecimen.locator('.pick').allInnerTexts();
+    assert.equal(picks.length, 4, 'one pick per observer');
+    assert.ok(picks.some((p) => /Tamsin Orrowby\s+ΔE00 \d\.\d{2}/.test(p)), picks.join(' | '));
+    assert.ok(picks.every((p) => /F-\d{3}(\.\d{3})?/.test(p)));
+    await tamsin.scrollIntoViewIfNeeded();
+    await screenshot(trainer, 'calibration-loop-advice-desktop');
+  });
+
+  test('should show current, lapsed and never-certified observers on the Certificates tab, with a certificate PDF', async () => {
+    await trainer.goto(`${server.url}/calibration/records`);
+    const counts = trainer.locator('[data-testid="standing-counts"]');
+    await counts.waitFor();
+    assert.match(await counts.innerText(), /\d+ current, \d+ lapsed, \d+ never certified\./);
+    const standings = trainer.locator('table.standings tbody tr');
+    const texts = await standings.allInnerTexts();
+    // The demo session closed on 2025-11-14: twelve months on, those certificates have lapsed by time.
+    const today = new Date().toISOString().slice(0, 10);
+    const expected = today > '2026-11-14' ? /lapsed[\s\S]*lapsed on 2026-11-15: 12 months passed since 2025-11-14/ : /current[\s\S]*valid until 2026-11-14/;
+    const juno = texts.find((t) => t.includes('Juno Pellbright')) ?? '';
+    assert.match(juno, expected);
+    assert.match(texts.find((t) => t.includes('Odile Marchbank')) ?? '', /never certified/, 'the trainer took no session');
+    const href = await standings.locator('a', { hasText: 'PDF' }).first().getAttribute('href');
+    assert.ok(href);
+    const pdf = await trainer.evaluate(async (u) => {
+      const r = await fetch(u);
+      return { type: r.headers.get('content-type'), start: new TextDecoder().decode((await r.arrayBuffer()).slice(0, 5)) };
+    }, href);
+    assert.deepEqual(pdf, { type: 'application/pdf', start: '%PDF-' });
+    await screenshot(trainer, 'calibration-loop-certificates-desktop');
+  });
+
+  test('should empty the specimen form without a red error after a specimen is added', async () => {
+    await trainer.goto(`${server.url}/calibration/sessions/${open.id}`);
+    await trainer.getByText('Add a specimen').click();
+    const form = trainer.locator('hl-specimen-form');
+    await form.getByLabel('Specimen label').fill('4 — corm flesh, upper, cream');
+    await form.getByLabel('L*', { exact: true }).fill('84');
+    await form.getByLabel('a*', { exact: true }).fill('1');
+    await form.getByLabel('b*', { exact: true }).fill('14');
+    await form.getByRole('button', { name: 'Add specimen' }).click();
+    await trainer.locator('ol.specimens li', { hasText: '4 — corm flesh, upper, cream' }).waitFor();
+    assert.equal(await form.getByLabel('Specimen label').inputValue(), '');
+    assert.equal(await form.locator('mat-error').count(), 0, 'no error shows on the emptied form');
+    assert.equal(await form.locator('.mat-form-field-invalid').count(), 0, 'no field is marked invalid');
+  });
+
+  test('should tell an invited observer in their notices, and link to the session', async () => {
+    // Invite the demo reviewer through the invite panel of the open session.
+    await trainer.goto(`${server.url}/calibration/sessions/${open.id}`);
+    const panel = trainer.locator('hl-invite-panel');
+    await panel.scrollIntoViewIfNeeded();
+    await panel.getByRole('checkbox', { name: /Caspar Thistlewood/ }).first().check();
+    await panel.getByRole('button', { name: /Invite 1/ }).click();
+    await panel.getByText('Invited 1; each was told in the app and by mail.').waitFor();
+
+    const reviewerBrowser = await openBrowser(server.url, { phone: true });
+    try {
+      const reviewer = await reviewerBrowser.newPage();
+      await signIn(reviewer, server.url, 'reviewer@demo.test');
+      await reviewer.goto(`${server.url}/notifications`);
+      const notice = reviewer.locator('li.item', { hasText: 'Invited to calibrate' });
+      await notice.waitFor();
+      assert.match(await notice.innerText(), /You are invited to the calibration session "Leaf blade greens, new observers"/);
+      await notice.getByRole('link', { name: `Open session ${open.id}` }).click();
+      await reviewer.waitForURL(new RegExp(`/calibration/sessions/${open.id}`));
+      await screenshot(reviewer, 'calibration-loop-invited-phone');
+    } finally {
+      await reviewerBrowser.close();
+    }
+  });
+
+  test("should tell the observer in their notices that the demo session's results are out", async () => {
+    await recorder.goto(`${server.url}/notifications`);
+    const notice = recorder.locator('li.item', { hasText: 'Calibration results out' });
+    await notice.waitFor();
+    assert.match(await notice.innerText(), /The results of "Petiole and corm colours, morning group" are out, and you are certified/);
+  });
+});
