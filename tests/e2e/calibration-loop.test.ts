@@ -107,8 +107,8 @@ describe('calibration results people can act on', () => {
   test('should tell an invited observer in their notices, and link to the session', async () => {
     // Invite the demo reviewer through the invite panel of the open session.
     await trainer.goto(`${server.url}/calibration/sessions/${open.id}`);
+    await trainer.getByText('Invite observers').click();
     const panel = trainer.locator('hl-invite-panel');
-    await panel.scrollIntoViewIfNeeded();
     await panel.getByRole('checkbox', { name: /Caspar Thistlewood/ }).first().check();
     await panel.getByRole('button', { name: /Invite 1/ }).click();
     await panel.getByText('Invited 1; each was told in the app and by mail.').waitFor();
