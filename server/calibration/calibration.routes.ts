@@ -47,7 +47,7 @@ export function calibrationRoutes(ctx: AppContext): Router {
   router.post('/sessions/:id/participants', runs, async (req, res) => {
     const id = idParam(req.params['id']);
     const body = parse(inviteParticipantsBody, req.body);
-    res.json(await inviteParticipants(ctx.ds, actorOf(req), id, body.userIds, { mailer: ctx.mailer, publicUrl: ctx.publicUrl, logError }));
+    res.json(await inviteParticipants(ctx.ds, actorOf(req), id, body.userIds, { mailer: ctx.mailer, publicUrl: ctx.publicUrl, logError: ctx.logError }));
   });
 
   router.post('/sessions/:id/responses', signedIn, async (req, res) => {
