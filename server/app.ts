@@ -15,6 +15,7 @@ import { analysisRoutes } from './analysis/analysis.routes.js';
 import { calibrationRoutes } from './calibration/calibration.routes.js';
 import { collectionRoutes } from './collection/collection.routes.js';
 import { descriptorRoutes } from './collection/descriptors.routes.js';
+import { plantSheetRoutes } from './collection/plant-sheet.routes.js';
 import { publicRoute } from './core/access.js';
 import type { AppContext } from './core/context.js';
 import { csrfProtection } from './core/csrf.js';
@@ -100,6 +101,7 @@ export function createApp(options: AppOptions): Express {
   api.use('/', profileRoutes(ctx));
   api.use('/', collectionRoutes(ctx));
   api.use('/', descriptorRoutes(ctx));
+  api.use('/', plantSheetRoutes(ctx));
   api.use('/', referenceSetRoutes(ctx));
   api.use('/photos', photoRoutes(ctx));
   api.use('/calibration', calibrationRoutes(ctx));

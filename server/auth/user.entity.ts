@@ -13,6 +13,8 @@ export class User {
   @Column('boolean', { default: true }) active: boolean;
   @CreateDateColumn({ type: 'datetime' }) createdAt: Date;
   @Column('datetime', { nullable: true }) lastLoginAt: Date | null;
+  /** Units the person types lengths and masses in; kept on the server so every phone they use agrees. */
+  @Column('varchar', { length: 8, default: 'metric' }) unitSystem: 'metric' | 'imperial';
 }
 
 /** The part of a user the client may see about itself. */

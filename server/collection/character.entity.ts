@@ -12,7 +12,7 @@ export class Character {
   @Column('text', { nullable: true }) caution: string | null;
   @Column('boolean', { default: true }) colour: boolean;
   @Column('boolean', { default: true }) active: boolean;
-  /** Catalogue order (organ by organ, from the top of the plant down). */
+  /** Place in the walk of a plant, shared with the descriptor catalogue (walk-order.ts). */
   @Column('integer', { default: 0 }) sortOrder: number;
   /** ΔE00 above which a season-to-season difference counts as drift (Paravina et al. 2015 acceptability threshold by default). */
   @Column('real', { default: DEFAULT_DRIFT_THRESHOLD }) driftThreshold: number;
@@ -20,5 +20,5 @@ export class Character {
 
 /** The API shape of a character. */
 export function toCharacterDto(c: Character): CharacterDto {
-  return { id: c.id, code: c.code, organ: c.organ, label: c.label, howToRead: c.howToRead, caution: c.caution, colour: c.colour, active: c.active, driftThreshold: c.driftThreshold };
+  return { id: c.id, code: c.code, organ: c.organ, label: c.label, howToRead: c.howToRead, caution: c.caution, colour: c.colour, active: c.active, driftThreshold: c.driftThreshold, sortOrder: c.sortOrder };
 }

@@ -3,13 +3,15 @@ import type { Character as CharacterDto, CreateCharacterBody, UpdateCharacterBod
 import { DEFAULT_DRIFT_THRESHOLD } from '../../shared/api/collection-answers.js';
 import { recordAudit, type Actor } from '../audit/audit.js';
 import { AppError } from '../core/app-error.js';
+import { Descriptor } from './descriptor.entity.js';
 import { Character, toCharacterDto } from './character.entity.js';
 
 /** Adds a character to the catalogue, after the seeded ones; 409 for a taken code. */
 export async function createCharacter(ds: DataSource, actor: Actor, body: CreateCharacterBody): Promise<CharacterDto> {
   return ds.transaction(async (m) => {
     if (await m.existsBy(Character, { code: body.code })) throw AppError.conflict(`Character code ${body.code} is already in use.`);
-    const last = await m.find(Character, { order: { sortOrder: 'DESC' }, take: 1 });
+    // New entries join the end of the walk, which both catalogues share.
+    const last = [...(await m.find(Character, { order: { sortOrder: 'DESC' }, take: 1 })), ...(await m.find(Descriptor, { order: { sortOrder: 'DESC' }, take: 1 }))].sort((a, b) => b.sortOrder - a.sortOrder);
     const character = await m.save(
       m.create(Character, {
         code: body.code,

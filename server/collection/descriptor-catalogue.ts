@@ -25,6 +25,8 @@ export interface DescriptorSeed {
   denominatorCode: string | null;
   howToMeasure: string;
   caution: string | null;
+  /** The colour character read on the same part, so the plant sheet shows both as one row. */
+  characterCode?: string;
 }
 
 const LEAF = 'the third fully opened leaf from the top';
@@ -59,6 +61,10 @@ export const DESCRIPTOR_CATALOGUE: readonly DescriptorSeed[] = [
     `Measure ${FULL_GROWTH} from the soil surface to the highest point of the leaves as they stand, without straightening them.`),
   measured('length', 'petiole.length', 'Petiole length', `petiole of ${LEAF}`,
     `Measure ${FULL_GROWTH} along the petiole from its base at the corm to where it joins the blade.`),
+  // How far the basal ring's colour reaches up the petiole: a length and a colour of one part, one row on the plant sheet.
+  { ...measured('length', 'petiole.ring.basal.reach', 'Basal ring reach', `petiole of ${LEAF}`,
+    `Measure ${FULL_GROWTH} from the base of the petiole, where it joins the corm, up to where the colour of the basal ring ends.`),
+    characterCode: 'petiole.ring.basal' },
   measured('length', 'sheath.length', 'Sheath length', `sheath of ${LEAF}`,
     `Measure ${FULL_GROWTH} on the same leaf as the petiole length, from the base of the petiole to the top of the sheath, where its two edges end.`),
   // Sheath over petiole, so a 28 in sheath on a 40 in petiole gives 0.70 (common practice, no source).

@@ -18,8 +18,10 @@ export class Descriptor {
   @Column('text') howToMeasure: string;
   @Column('text', { nullable: true }) caution: string | null;
   @Column('boolean', { default: true }) active: boolean;
-  /** Catalogue order. */
+  /** Place in the walk of a plant, shared with the character catalogue (walk-order.ts). */
   @Column('integer', { default: 0 }) sortOrder: number;
+  /** The colour character read on the same part (a length and a colour of one thing), or null. */
+  @Column('integer', { nullable: true }) characterId: number | null;
 }
 
 /** The API shape of a descriptor. */
@@ -36,5 +38,7 @@ export function toDescriptorDto(d: Descriptor): DescriptorDto {
     howToMeasure: d.howToMeasure,
     caution: d.caution,
     active: d.active,
+    sortOrder: d.sortOrder,
+    characterId: d.characterId ?? null,
   };
 }

@@ -2,6 +2,7 @@ import type { DataSource } from 'typeorm';
 import type { CreateDescriptorBody, Descriptor as DescriptorDto, UpdateDescriptorBody } from '../../shared/api/descriptors.js';
 import { recordAudit, type Actor } from '../audit/audit.js';
 import { AppError } from '../core/app-error.js';
+import { Character } from './character.entity.js';
 import { Descriptor, toDescriptorDto } from './descriptor.entity.js';
 
 /** The descriptor catalogue in catalogue order. */
@@ -29,7 +30,8 @@ export async function createDescriptor(ds: DataSource, actor: Actor, body: Creat
         throw AppError.badRequest('A ratio divides like by like.', [{ field: 'denominatorCode', message: `is a ${parts[1]!.kind} but the numerator is a ${parts[0]!.kind}` }]);
       }
     }
-    const last = await m.find(Descriptor, { order: { sortOrder: 'DESC' }, take: 1 });
+    // New entries join the end of the walk, which both catalogues share.
+    const last = [...(await m.find(Descriptor, { order: { sortOrder: 'DESC' }, take: 1 })), ...(await m.find(Character, { order: { sortOrder: 'DESC' }, take: 1 }))].sort((a, b) => b.sortOrder - a.sortOrder);
     const descriptor = await m.save(
       m.create(Descriptor, {
         code: body.code,

@@ -4,6 +4,7 @@ import { CHARACTER_CATALOGUE } from './character-catalogue.js';
 import { Character } from './character.entity.js';
 import { DESCRIPTOR_CATALOGUE } from './descriptor-catalogue.js';
 import { Descriptor } from './descriptor.entity.js';
+import { walkOrderOf } from './walk-order.js';
 
 /**
  * Adds every catalogue character whose code is not in the database yet. Rows already stored are
@@ -13,7 +14,7 @@ import { Descriptor } from './descriptor.entity.js';
 export async function seedCharacterCatalogue(ds: DataSource): Promise<number> {
   return ds.transaction(async (m) => {
     const existing = new Set((await m.find(Character, { select: { code: true } })).map((c) => c.code));
-    const missing = CHARACTER_CATALOGUE.map((c, i) => ({ ...c, sortOrder: (i + 1) * 10, active: true })).filter((c) => !existing.has(c.code));
+    const missing = CHARACTER_CATALOGUE.map((c, i) => ({ ...c, sortOrder: walkOrderOf(c.code, (i + 1) * 10), active: true })).filter((c) => !existing.has(c.code));
     if (missing.length) {
       await m.insert(Character, missing);
       await recordAudit(m, SYSTEM, 'catalogue.seeded', null, { added: missing.map((c) => c.code) });
@@ -29,7 +30,13 @@ export async function seedCharacterCatalogue(ds: DataSource): Promise<number> {
 export async function seedDescriptorCatalogue(ds: DataSource): Promise<number> {
   return ds.transaction(async (m) => {
     const existing = new Set((await m.find(Descriptor, { select: { code: true } })).map((d) => d.code));
-    const missing = DESCRIPTOR_CATALOGUE.map((d, i) => ({ ...d, sortOrder: (i + 1) * 10, active: true })).filter((d) => !existing.has(d.code));
+    const characterIds = new Map((await m.find(Character, { select: { id: true, code: true } })).map((c) => [c.code, c.id]));
+    const missing = DESCRIPTOR_CATALOGUE.filter((d) => !existing.has(d.code)).map(({ characterCode, ...d }) => ({
+      ...d,
+      sortOrder: walkOrderOf(d.code, (DESCRIPTOR_CATALOGUE.findIndex((x) => x.code === d.code) + 1) * 10),
+      characterId: characterCode ? (characterIds.get(characterCode) ?? null) : null,
+      active: true,
+    }));
     if (missing.length) {
       await m.insert(Descriptor, missing);
       await recordAudit(m, SYSTEM, 'descriptors.seeded', null, { added: missing.map((d) => d.code) });

@@ -106,6 +106,8 @@ export interface Character {
   active: boolean;
   /** ΔE00 above which a season-to-season difference counts as drift; default `DEFAULT_DRIFT_THRESHOLD`. */
   driftThreshold: number;
+  /** Place in the walk of a plant, shared with descriptors; the plant sheet lists rows by it. */
+  sortOrder: number;
 }
 
 /** ΔE00 acceptability threshold, Paravina et al. (2015), J. Esthet. Restor. Dent. 27:S1–S9. */

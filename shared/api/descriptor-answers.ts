@@ -41,6 +41,10 @@ export interface Descriptor {
   caution: string | null;
   /** Whether the descriptor is still offered for new observations. */
   active: boolean;
+  /** Place in the walk of a plant, shared with colour characters; the plant sheet lists rows by it. */
+  sortOrder: number;
+  /** The colour character read on the same part, shown with it as one row of the plant sheet; or null. */
+  characterId: number | null;
 }
 
 /** One observation of a descriptor (`POST /api/observations`, `GET /api/observations`). Never edited in place. */

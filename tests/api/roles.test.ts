@@ -35,6 +35,8 @@ interface Fixtures {
   plantId: number;
   characterId: number;
   descriptorId: number;
+  /** The whole walk order as it stands, for the reorder request. */
+  walkOrderItems: { kind: string; id: number }[];
   /** A current observation entered by the role (recorders and trainers correct only their own). */
   observationBy(role?: Role): number;
   /** Readings: a body that creates one, a reading to open, a fresh reading of the role for each correction, an import file. */
@@ -101,6 +103,9 @@ const ROUTES: readonly RouteCase[] = [
   { method: 'POST', path: '/api/sites', access: ADMIN, ok: 201, body: (f) => ({ code: `RT${f.next()}`, name: 'Matrix Plot', timezone: 'Pacific/Fiji', seasons: [{ name: 'All year', start: '01-01', end: '12-31' }] }) },
   { method: 'PATCH', path: '/api/sites/:id', access: ADMIN, ok: 200, url: (f) => `/api/sites/${f.siteId}`, body: (f) => ({ name: `Renamed plot ${f.next()}` }) },
   { method: 'PUT', path: '/api/sites/:id/seasons', access: ADMIN, ok: 200, url: (f) => `/api/sites/${f.siteId}/seasons`, body: () => ({ seasons: [{ name: 'Wet', start: '11-01', end: '04-30' }, { name: 'Dry', start: '05-01', end: '10-31' }] }) },
+  // Before any row adds to the catalogue: the reorder names every entry the fixtures saw.
+  { method: 'GET', path: '/api/catalogue/order', access: EVERYONE, ok: 200 },
+  { method: 'PUT', path: '/api/catalogue/order', access: ADMIN, ok: 200, body: (f) => ({ items: f.walkOrderItems }) },
   { method: 'POST', path: '/api/characters', access: ADMIN, ok: 201, body: (f) => ({ code: `matrix.test${f.next()}`, organ: 'leaf', label: 'Matrix character', howToRead: 'Read it the way the matrix test says.' }) },
   { method: 'PATCH', path: '/api/characters/:id', access: ADMIN, ok: 200, url: (f) => `/api/characters/${f.characterId}`, body: (f) => ({ driftThreshold: 1 + f.next() / 100 }) },
   { method: 'GET', path: '/api/accessions/mcpd.csv', access: EVERYONE, ok: 200 },
@@ -116,6 +121,10 @@ const ROUTES: readonly RouteCase[] = [
   { method: 'GET', path: '/api/observations', access: EVERYONE, ok: 200 },
   { method: 'POST', path: '/api/observations', access: OBSERVERS, ok: 201, body: (f) => ({ accessionId: f.accessionId, plantId: f.plantId, descriptorId: f.descriptorId, value: 40, unit: 'in' }) },
   { method: 'POST', path: '/api/observations/:id/supersede', access: OBSERVERS, ok: 201, url: (f, role) => `/api/observations/${f.observationBy(role)}/supersede`, body: () => ({ value: 101.6, unit: 'cm' }) },
+  { method: 'GET', path: '/api/plants/:id/sheet', access: EVERYONE, ok: 200, url: (f) => `/api/plants/${f.plantId}/sheet` },
+  { method: 'POST', path: '/api/plants/:id/skips', access: OBSERVERS, ok: 201, url: (f) => `/api/plants/${f.plantId}/skips`, body: (f) => ({ characterId: f.characterId, reason: `Matrix skip ${f.next()}` }) },
+  { method: 'GET', path: '/api/accessions/:id/progress', access: EVERYONE, ok: 200, url: (f) => `/api/accessions/${f.accessionId}/progress` },
+  { method: 'GET', path: '/api/progress', access: EVERYONE, ok: 200 },
   { method: 'GET', path: '/api/reference-sets', access: EVERYONE, ok: 200 },
   { method: 'GET', path: '/api/reference-sets/:id/chips', access: EVERYONE, ok: 200, url: () => '/api/reference-sets/v1/chips' },
   { method: 'GET', path: '/api/reference-sets/:id/card.pdf', access: EVERYONE, ok: 200, url: () => '/api/reference-sets/v1/card.pdf' },
@@ -179,7 +188,7 @@ async function calibrationFixtures(admin: Client, inviteeId: number) {
 }
 
 /** Ids for the collection-management rows, and one observation of each observing role to correct. */
-async function collectionFixtures(clients: Map<Role, Client>): Promise<Pick<Fixtures, 'accessionId' | 'plantId' | 'characterId' | 'descriptorId' | 'observationBy'>> {
+async function collectionFixtures(clients: Map<Role, Client>): Promise<Pick<Fixtures, 'accessionId' | 'plantId' | 'characterId' | 'descriptorId' | 'observationBy' | 'walkOrderItems'>> {
   const admin = clients.get('admin')!;
   const accession = (await admin.get('/api/accessions').expect(200)).body[0] as { id: number; plants: { id: number }[] };
   const characterId = ((await admin.get('/api/characters').expect(200)).body[0] as { id: number }).id;
@@ -189,7 +198,8 @@ async function collectionFixtures(clients: Map<Role, Client>): Promise<Pick<Fixt
     const res = await clients.get(role)!.post('/api/observations', { accessionId: accession.id, plantId: accession.plants[0]!.id, descriptorId, value: 4, unit: 'in' }).expect(201);
     own.set(role, res.body.id as number);
   }
-  return { accessionId: accession.id, plantId: accession.plants[0]!.id, characterId, descriptorId, observationBy: (role) => own.get(role ?? 'admin') ?? own.get('admin')! };
+  const walkOrderItems = ((await admin.get('/api/catalogue/order').expect(200)).body as { kind: string; id: number }[]).map((e) => ({ kind: e.kind, id: e.id }));
+  return { walkOrderItems, accessionId: accession.id, plantId: accession.plants[0]!.id, characterId, descriptorId, observationBy: (role) => own.get(role ?? 'admin') ?? own.get('admin')! };
 }
 
 /** Readings for the table: one of each observing role per correction request (a corrected reading cannot be corrected again). */
