@@ -1,6 +1,6 @@
 import { Routes } from '@angular/router';
 
-/** The Record section: the reading form, and the photo page it sends photo readings through; the parent route limits the roles. */
+/** The Record section: the reading form, the photo page it sends photo readings through, the plant sheet and descriptor entry; the parent route limits the roles. */
 export const RECORD_ROUTES: Routes = [
   {
     path: '',
@@ -12,6 +12,11 @@ export const RECORD_ROUTES: Routes = [
     path: 'photo',
     title: 'Photo reading · Hueledger',
     loadComponent: () => import('./pages/photo-page').then((m) => m.PhotoPage),
+  },
+  {
+    path: 'plant/:plantId',
+    title: 'Plant sheet · Hueledger',
+    loadComponent: () => import('./pages/plant-sheet').then((m) => m.PlantSheetPage),
   },
   {
     path: 'descriptors',

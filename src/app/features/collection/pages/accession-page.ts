@@ -12,6 +12,7 @@ import type { Accession, Plant } from '../../../../../shared/api/collection-answ
 import { AuthStore } from '../../../core/auth/auth-store';
 import { UnitPreference } from '../../../core/units/unit-preference';
 import { PlantValues } from '../../descriptors/components/plant-values';
+import { PlantProgressList } from '../components/plant-progress-list';
 import { AccessionDialog, type AccessionDialogData } from '../components/accession-dialog';
 import { Characterisation } from '../components/characterisation';
 import { PlantDialog, type PlantDialogData } from '../components/plant-dialog';
@@ -27,7 +28,7 @@ const SHOWN: readonly PassportField[] = [
 /** One accession: passport with MCPD names, its plants with their age, and the latest descriptor values per plant. */
 @Component({
   selector: 'hl-accession-page',
-  imports: [Characterisation, MatButtonModule, MatIconModule, MatProgressSpinnerModule, PlantValues, RouterLink],
+  imports: [Characterisation, MatButtonModule, MatIconModule, MatProgressSpinnerModule, PlantProgressList, PlantValues, RouterLink],
   templateUrl: './accession-page.html',
   styleUrl: './accession-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -28,6 +28,8 @@ function descriptor(id: number, code: string, label: string, kind: Descriptor['k
     howToMeasure: '',
     caution: null,
     active: true,
+    sortOrder: id * 10,
+    characterId: null,
   };
 }
 

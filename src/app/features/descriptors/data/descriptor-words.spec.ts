@@ -1,7 +1,7 @@
 import type { Descriptor } from '../../../../../shared/api/descriptor-answers.js';
 import { categoryIdOf, KIND_WORDS, ratioParts } from './descriptor-words';
 
-const base = { object: '', categories: [], howToMeasure: '', caution: null, active: true };
+const base = { object: '', categories: [], howToMeasure: '', caution: null, active: true, sortOrder: 0, characterId: null };
 const catalogue: Descriptor[] = [
   { ...base, id: 1, code: 'petiole.length', label: 'Petiole length', kind: 'length', numeratorCode: null, denominatorCode: null },
   { ...base, id: 2, code: 'sheath.length', label: 'Sheath length', kind: 'length', numeratorCode: null, denominatorCode: null },

@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, ElementRef, afterRenderEffect, computed, inject, input, signal } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
@@ -6,7 +6,7 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatSelectModule } from '@angular/material/select';
 import { MatSnackBar } from '@angular/material/snack-bar';
-import { Router } from '@angular/router';
+import { Router, RouterLink } from '@angular/router';
 import { concatMap, from, tap, toArray } from 'rxjs';
 
 import { ApiError } from '../../../core/http/api-error';
@@ -26,7 +26,7 @@ import { DescriptorsApi } from '../data/descriptors-api';
  */
 @Component({
   selector: 'hl-descriptor-entry-page',
-  imports: [DescriptorRow, LoadState, MatButtonModule, MatButtonToggleModule, MatFormFieldModule, MatIconModule, MatSelectModule, PlantValues],
+  imports: [DescriptorRow, LoadState, MatButtonModule, MatButtonToggleModule, MatFormFieldModule, MatIconModule, MatSelectModule, PlantValues, RouterLink],
   templateUrl: './descriptor-entry-page.html',
   styleUrl: './descriptor-entry-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -42,12 +42,18 @@ export class DescriptorEntryPage {
   readonly accession = input<string>();
   /** `?plant=` likewise. */
   readonly plant = input<string>();
+  /** `?sheet=` the plant whose sheet opened the page: saving goes back to it. */
+  readonly sheet = input<string>();
+  /** `?descriptor=` the row tapped on the sheet, brought into view. */
+  readonly descriptor = input<string>();
 
   protected readonly system = this.units.system;
   protected readonly accessions = rxResource({ stream: () => this.collection.accessions() });
   protected readonly descriptors = rxResource({ stream: () => this.api.descriptors() });
   protected readonly accessionId = computed(() => idOf(this.accession()));
   protected readonly plantId = computed(() => idOf(this.plant()));
+  protected readonly sheetPlantId = computed(() => idOf(this.sheet()));
+  protected readonly focusId = computed(() => idOf(this.descriptor()));
   protected readonly chosenAccession = computed(() => this.accessions.value()?.find((a) => a.id === this.accessionId()) ?? null);
   protected readonly chosenPlant = computed(() => this.chosenAccession()?.plants.find((p) => p.id === this.plantId()) ?? null);
   /** Active descriptors, each ratio right after its parts. */
@@ -73,8 +79,23 @@ export class DescriptorEntryPage {
     return this.shown().flatMap((d) => observationOf(d, this.entries()[d.id], accessionId, this.plantId()));
   });
   protected readonly busy = signal(false);
+  private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
+  private scrolledTo: number | null = null;
   protected readonly problem = signal<string | null>(null);
   protected readonly savedCount = signal(0);
+
+  constructor() {
+    // The row tapped on the plant sheet comes into view once the catalogue is drawn.
+    afterRenderEffect(() => {
+      const id = this.focusId();
+      if (id === null || id === this.scrolledTo || !this.shown().length) return;
+      const row = this.host.nativeElement.querySelector<HTMLElement>(`#descriptor-${id}`);
+      if (!row) return;
+      this.scrolledTo = id;
+      row.scrollIntoView?.({ block: 'center' });
+      row.querySelector<HTMLElement>('input, mat-select, [role="radio"], button')?.focus?.();
+    });
+  }
 
   protected chooseSystem(system: UnitSystem): void {
     this.units.choose(system);
@@ -130,6 +151,8 @@ export class DescriptorEntryPage {
     this.edited.set({});
     this.savedCount.update((n) => n + 1);
     this.snackBar.open(`${count} ${count === 1 ? 'value' : 'values'} saved.`, 'OK', { duration: 4000 });
+    const sheet = this.sheetPlantId();
+    if (sheet !== null) void this.router.navigate(['/record/plant', sheet]);
   }
 
   private showRefusal(error: unknown, saved: number[]): void {

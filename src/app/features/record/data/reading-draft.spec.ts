@@ -70,7 +70,7 @@ describe('reading draft', () => {
   });
 
   it('should ask seconds since cut for corm, cormel and sap only', () => {
-    const base = { id: 1, code: 'x', label: 'x', howToRead: '', caution: null, colour: true, active: true, driftThreshold: 1.8 };
+    const base = { id: 1, code: 'x', label: 'x', howToRead: '', caution: null, colour: true, active: true, driftThreshold: 1.8, sortOrder: 10 };
     expect(isCutCharacter({ ...base, organ: 'corm' })).toBe(true);
     expect(isCutCharacter({ ...base, organ: 'sap' })).toBe(true);
     expect(isCutCharacter({ ...base, organ: 'petiole' })).toBe(false);

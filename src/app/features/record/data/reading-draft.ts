@@ -159,3 +159,15 @@ export function nextPlantValue(value: ReadingFormValue): Partial<ReadingFormValu
     reason: null,
   };
 }
+
+/** What "Next character on this plant" keeps: everything about the plant and how it is read; the colour starts empty. */
+export function nextCharacterValue(value: ReadingFormValue, characterId: number): Partial<ReadingFormValue> {
+  return {
+    ...nextPlantValue(value),
+    plantId: value.plantId,
+    characterId,
+    method: value.method === 'photo' ? null : value.method,
+    hex: null,
+    leafPosition: value.leafPosition,
+  };
+}

@@ -5,12 +5,16 @@ export interface RememberedChoices {
   accessionId: number | null;
   characterId: number | null;
   light: string | null;
+  /** How the last reading was taken, so a walk round one plant keeps its method. */
+  method?: string | null;
+  /** The instrument's make or name, kept with the method. */
+  instrument?: string | null;
 }
 
 /** The localStorage key (one per browser profile; the choices are not secret). */
 export const READING_MEMORY_KEY = 'hueledger.reading-form';
 
-const NOTHING: RememberedChoices = { accessionId: null, characterId: null, light: null };
+const NOTHING: RememberedChoices = { accessionId: null, characterId: null, light: null, method: null, instrument: null };
 
 /**
  * Keeps the last accession, character and light in localStorage. Anything unreadable (private
@@ -28,6 +32,8 @@ export class ReadingMemory {
         accessionId: positiveInteger(value.accessionId),
         characterId: positiveInteger(value.characterId),
         light: typeof value.light === 'string' ? value.light : null,
+        method: typeof value.method === 'string' ? value.method : null,
+        instrument: typeof value.instrument === 'string' ? value.instrument : null,
       };
     } catch {
       return NOTHING;

@@ -131,7 +131,7 @@ describe('ReadingForm', () => {
     expect(el.textContent).toContain('Saved as reading 31');
     expect(el.textContent).toContain('F-150.004');
     expect(el.textContent).toContain('close');
-    expect(JSON.parse(localStorage.getItem(READING_MEMORY_KEY)!)).toEqual({ accessionId: 1, characterId: 5, light: 'overcast' });
+    expect(JSON.parse(localStorage.getItem(READING_MEMORY_KEY)!)).toEqual({ accessionId: 1, characterId: 5, light: 'overcast', method: 'instrument', instrument: null });
     expect(sessionStorage.getItem(READING_DRAFT_KEY)).toBeNull();
     click(el, 'Next plant');
     fixture.detectChanges();

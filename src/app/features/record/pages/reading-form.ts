@@ -36,6 +36,7 @@ import {
   applyMethodRules,
   buildReadingForm,
   isCutCharacter,
+  nextCharacterValue,
   nextPlantValue,
   photoProblem,
   readingRequest,
@@ -43,6 +44,8 @@ import {
   type ReadingFormValue,
 } from '../data/reading-draft';
 import { prefillFrom } from '../data/reading-prefill';
+import { PlantSheetApi } from '../data/plant-sheet-api';
+import { nextColourTodo } from '../data/sheet-progress';
 
 /** What the draft store keeps: the form's value and the reading it corrects, if any. */
 type KeptDraft = ReadingFormValue & { correcting: number | null };
@@ -91,6 +94,7 @@ export class ReadingForm {
   private readonly destroyRef = inject(DestroyRef);
   private readonly queue = inject(OfflineQueue);
   private readonly chips = inject(ChipCatalogue);
+  private readonly sheets = inject(PlantSheetApi);
 
   protected readonly form = buildReadingForm();
   protected readonly methods = READING_METHODS;
@@ -103,6 +107,10 @@ export class ReadingForm {
   protected readonly accessions = rxResource({ stream: () => this.collection.accessions() });
   protected readonly sites = rxResource({ stream: () => this.collection.sites() });
   protected readonly characters = rxResource({ stream: () => this.collection.characters() });
+  /** The plant whose sheet opened the form (`?sheet=PLANT&character=ID`): saving offers its next character. */
+  protected readonly sheetPlantId = signal<number | null>(null);
+  /** Whether the next character is being looked up. */
+  protected readonly finding = signal(false);
   /** The reading being corrected (`?correct=ID`), if any. */
   protected readonly correctingId = signal<number | null>(null);
 
@@ -131,8 +139,10 @@ export class ReadingForm {
   constructor() {
     const params = this.route.snapshot.queryParams;
     const correct = Number(params['correct']);
+    const sheetPlant = positiveId(params['sheet']);
     const draft = this.drafts.read<KeptDraft>();
     if (Number.isSafeInteger(correct) && correct > 0) this.startCorrection(correct, draft?.correcting === correct ? draft : null);
+    else if (sheetPlant) this.startFromSheet(sheetPlant, positiveId(params['character']), draft);
     else this.restore(draft && !draft.correcting ? draft : null);
     const source = photoSourceFromParams(params);
     if (source) {
@@ -148,6 +158,12 @@ export class ReadingForm {
         if (accession && c.siteId.value === null) c.siteId.setValue(this.plants().find((p) => p.id === c.plantId.value)?.siteId ?? accession.siteId);
         if (!accession && this.accessions.hasValue() && c.accessionId.value !== null) c.accessionId.setValue(null);
       });
+    });
+    // A plant from the sheet names no accession: it is found among the accessions once they arrive.
+    effect(() => {
+      const plantId = this.sheetPlantId();
+      if (plantId === null || !this.accessions.hasValue()) return;
+      untracked(() => this.placeSheetPlant(plantId));
     });
   }
 
@@ -232,8 +248,7 @@ export class ReadingForm {
 
   private savedAs(reading: ReadingDetail): void {
     this.saveKey = null;
-    const v = this.form.getRawValue();
-    this.memory.remember({ accessionId: v.accessionId, characterId: v.characterId, light: v.light });
+    this.rememberChoices();
     this.drafts.drop();
     this.saving.set(false);
     this.saved.set(reading);
@@ -242,11 +257,77 @@ export class ReadingForm {
 
   /** Kept in the queue: the form is done with it, as after a save, and says where it waits. */
   private savedOnPhone(): void {
-    const v = this.form.getRawValue();
-    this.memory.remember({ accessionId: v.accessionId, characterId: v.characterId, light: v.light });
+    this.rememberChoices();
     this.drafts.drop();
     this.saving.set(false);
     this.queued.set(true);
+    this.host.nativeElement.scrollIntoView?.({ block: 'start' });
+  }
+
+  private rememberChoices(): void {
+    const v = this.form.getRawValue();
+    this.memory.remember({ accessionId: v.accessionId, characterId: v.characterId, light: v.light, method: v.method, instrument: v.instrument });
+  }
+
+  /** Opened from a plant sheet: the plant and character from the link, method, light and instrument from the last reading. */
+  private startFromSheet(plantId: number, characterId: number | null, draft: Partial<KeptDraft> | null): void {
+    const remembered = this.memory.recall();
+    const sameRow = draft && !draft.correcting && draft.plantId === plantId && draft.characterId === characterId;
+    if (sameRow) this.form.patchValue(draft);
+    else {
+      const method = READING_METHODS.find((m) => m === remembered.method && m !== 'photo') ?? null;
+      this.form.patchValue({ characterId, light: remembered.light as ReadingFormValue['light'], method, instrument: remembered.instrument ?? null });
+    }
+    this.sheetPlantId.set(plantId);
+  }
+
+  private placeSheetPlant(plantId: number): void {
+    const c = this.form.controls;
+    if (c.plantId.value === plantId) return;
+    const accession = this.accessions.value()!.find((a) => a.plants.some((p) => p.id === plantId));
+    if (!accession) return;
+    c.accessionId.setValue(accession.id);
+    c.plantId.setValue(plantId);
+  }
+
+  /**
+   * After a save from the sheet: the same plant, the next colour character still to do in walk
+   * order, method, light and instrument kept. Out of range the sheet cannot be asked, so the next
+   * character of the catalogue is taken instead.
+   */
+  protected nextCharacter(): void {
+    const plantId = this.sheetPlantId();
+    const current = this.form.controls.characterId.value;
+    if (plantId === null) return;
+    this.finding.set(true);
+    this.sheets.sheet(plantId).subscribe({
+      next: (sheet) => {
+        const row = nextColourTodo(sheet, current);
+        if (row) this.moveToCharacter(row.colour!.characterId);
+        else void this.router.navigate(['/record/plant', plantId]);
+      },
+      error: () => {
+        const list = this.characters.value()?.filter((c) => c.active && c.colour) ?? [];
+        const at = list.findIndex((c) => c.id === current);
+        const next = list[at + 1];
+        if (next) this.moveToCharacter(next.id);
+        else void this.router.navigate(['/record/plant', plantId]);
+      },
+    });
+  }
+
+  private moveToCharacter(characterId: number): void {
+    const keep = nextCharacterValue(this.form.getRawValue(), characterId);
+    this.finding.set(false);
+    this.form.reset();
+    this.form.patchValue(keep);
+    this.saved.set(null);
+    this.queued.set(false);
+    this.problems.set([]);
+    this.eyeChipOpen.set(false);
+    this.photo.set(null);
+    applyMethodRules(this.form, keep.method ?? null, false);
+    void this.router.navigate([], { queryParams: { sheet: this.sheetPlantId(), character: characterId }, replaceUrl: true });
     this.host.nativeElement.scrollIntoView?.({ block: 'start' });
   }
 
@@ -325,4 +406,9 @@ export class ReadingForm {
     const el = this.host.nativeElement.querySelector('.ng-invalid.ng-touched:not(form), .photo-missing, .problems');
     el?.scrollIntoView?.({ block: 'center', behavior: 'smooth' });
   }
+}
+
+function positiveId(value: unknown): number | null {
+  const id = Number(value);
+  return Number.isSafeInteger(id) && id > 0 ? id : null;
 }

@@ -34,6 +34,6 @@ export const TEST_ACCESSIONS: Accession[] = [
 const CAUTION = 'Wear gloves and never taste raw tissue.';
 
 export const TEST_CHARACTERS: Character[] = [
-  { id: 5, code: 'petiole.third.upper', organ: 'petiole', label: 'Petiole, upper third', howToRead: 'Read the outer face below the blade.', caution: null, colour: true, active: true, driftThreshold: 1.8 },
-  { id: 7, code: 'corm.flesh.centre', organ: 'corm', label: 'Corm flesh, centre', howToRead: 'Cut lengthwise; read the centre within a minute.', caution: CAUTION, colour: true, active: true, driftThreshold: 1.8 },
+  { id: 5, code: 'petiole.third.upper', organ: 'petiole', label: 'Petiole, upper third', howToRead: 'Read the outer face below the blade.', caution: null, colour: true, active: true, driftThreshold: 1.8, sortOrder: 300 },
+  { id: 7, code: 'corm.flesh.centre', organ: 'corm', label: 'Corm flesh, centre', howToRead: 'Cut lengthwise; read the centre within a minute.', caution: CAUTION, colour: true, active: true, driftThreshold: 1.8, sortOrder: 500 },
 ];
