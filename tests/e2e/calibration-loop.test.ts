@@ -5,10 +5,11 @@
 // observers and a certificate PDF; an invitation that reaches the observer's notices; and the
 // specimen form that empties without a red error after a specimen is added.
 import assert from 'node:assert/strict';
-import { after, before, describe, test } from 'node:test';
+import { before, describe, test } from 'node:test';
 import type { Page } from 'playwright-core';
-import { openBrowser, screenshot, signIn, type Browser } from './browser.js';
-import { startServer, type ServerProcess } from './server-process.js';
+import { screenshot, signIn, useApp } from './browser.js';
+
+const app = useApp();
 
 interface SessionRow {
   id: number;
@@ -21,34 +22,23 @@ function getJson<T>(page: Page, path: string): Promise<T> {
 }
 
 describe('calibration results people can act on', () => {
-  let server: ServerProcess;
-  let trainerBrowser: Browser;
   let trainer: Page;
-  let recorderBrowser: Browser;
   let recorder: Page;
   let closed: SessionRow;
   let open: SessionRow;
 
   before(async () => {
-    server = await startServer();
-    trainerBrowser = await openBrowser(server.url);
-    trainer = await trainerBrowser.newPage();
-    await signIn(trainer, server.url, 'trainer@demo.test');
+    trainer = await app.newPage();
+    await signIn(trainer, app.url, 'trainer@demo.test');
     const sessions = await getJson<SessionRow[]>(trainer, '/api/calibration/sessions');
     closed = sessions.find((s) => s.status === 'closed')!;
     open = sessions.find((s) => s.status === 'open')!;
-    recorderBrowser = await openBrowser(server.url, { phone: true });
-    recorder = await recorderBrowser.newPage();
-    await signIn(recorder, server.url, 'recorder@demo.test');
-  });
-  after(async () => {
-    await recorderBrowser?.close();
-    await trainerBrowser?.close();
-    await server?.stop();
+    recorder = await app.newPage({ phone: true });
+    await signIn(recorder, app.url, 'recorder@demo.test');
   });
 
   test("should show κ's interval, the small-sample warning, what to tell each observer, and each observer's pick", async () => {
-    await trainer.goto(`${server.url}/calibration/sessions/${closed.id}`);
+    await trainer.goto(`${app.url}/calibration/sessions/${closed.id}`);
     const interval = trainer.locator('[data-testid="kappa-interval"]');
     await interval.waitFor();
     assert.match(await interval.innerText(), /^95 % interval of κ: −?\d\.\d{2} to −?\d\.\d{2} \(percentile bootstrap over specimens, 2000 resamples/);
@@ -67,7 +57,7 @@ describe('calibration results people can act on', () => {
   });
 
   test('should show current, lapsed and never-certified observers on the Certificates tab, with a certificate PDF', async () => {
-    await trainer.goto(`${server.url}/calibration/records`);
+    await trainer.goto(`${app.url}/calibration/records`);
     const counts = trainer.locator('[data-testid="standing-counts"]');
     await counts.waitFor();
     assert.match(await counts.innerText(), /\d+ current, \d+ lapsed, \d+ never certified\./);
@@ -90,7 +80,7 @@ describe('calibration results people can act on', () => {
   });
 
   test('should empty the specimen form without a red error after a specimen is added', async () => {
-    await trainer.goto(`${server.url}/calibration/sessions/${open.id}`);
+    await trainer.goto(`${app.url}/calibration/sessions/${open.id}`);
     await trainer.getByText('Add a specimen').click();
     const form = trainer.locator('hl-specimen-form');
     await form.getByLabel('Specimen label').fill('4 — corm flesh, upper, cream');
@@ -106,31 +96,26 @@ describe('calibration results people can act on', () => {
 
   test('should tell an invited observer in their notices, and link to the session', async () => {
     // Invite the demo reviewer through the invite panel of the open session.
-    await trainer.goto(`${server.url}/calibration/sessions/${open.id}`);
+    await trainer.goto(`${app.url}/calibration/sessions/${open.id}`);
     await trainer.getByText('Invite observers').click();
     const panel = trainer.locator('hl-invite-panel');
     await panel.getByRole('checkbox', { name: /Caspar Thistlewood/ }).first().check();
     await panel.getByRole('button', { name: /Invite 1/ }).click();
     await panel.getByText('Invited 1; each was told in the app and by mail.').waitFor();
 
-    const reviewerBrowser = await openBrowser(server.url, { phone: true });
-    try {
-      const reviewer = await reviewerBrowser.newPage();
-      await signIn(reviewer, server.url, 'reviewer@demo.test');
-      await reviewer.goto(`${server.url}/notifications`);
-      const notice = reviewer.locator('li.item', { hasText: 'Invited to calibrate' });
-      await notice.waitFor();
-      assert.match(await notice.innerText(), /You are invited to the calibration session "Leaf blade greens, new observers"/);
-      await notice.getByRole('link', { name: `Open session ${open.id}` }).click();
-      await reviewer.waitForURL(new RegExp(`/calibration/sessions/${open.id}`));
-      await screenshot(reviewer, 'calibration-loop-invited-phone');
-    } finally {
-      await reviewerBrowser.close();
-    }
+    const reviewer = await app.newPage({ phone: true });
+    await signIn(reviewer, app.url, 'reviewer@demo.test');
+    await reviewer.goto(`${app.url}/notifications`);
+    const notice = reviewer.locator('li.item', { hasText: 'Invited to calibrate' });
+    await notice.waitFor();
+    assert.match(await notice.innerText(), /You are invited to the calibration session "Leaf blade greens, new observers"/);
+    await notice.getByRole('link', { name: `Open session ${open.id}` }).click();
+    await reviewer.waitForURL(new RegExp(`/calibration/sessions/${open.id}`));
+    await screenshot(reviewer, 'calibration-loop-invited-phone');
   });
 
   test("should tell the observer in their notices that the demo session's results are out", async () => {
-    await recorder.goto(`${server.url}/notifications`);
+    await recorder.goto(`${app.url}/notifications`);
     const notice = recorder.locator('li.item', { hasText: 'Calibration results out' });
     await notice.waitFor();
     assert.match(await notice.innerText(), /The results of "Petiole and corm colours, morning group" are out, and you are certified/);
