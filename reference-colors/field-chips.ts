@@ -3,8 +3,8 @@ import { LAB_MODE } from '../shared/colour/constants.js';
 import { lowerBoundRaw } from '../shared/colour/delta-e-bound.js';
 import { deltaE00 } from '../shared/colour/delta-e.js';
 import { fromCulori, labToLch, type Lab } from '../shared/colour/lab.js';
-import { mulberry32 } from './prng.js';
-import { inTissueRegion, TISSUE_REGIONS } from './tissue-regions.js';
+import { mulberry32 } from '../shared/random/mulberry32.js';
+import { inTissueRegion, TISSUE_REGIONS } from '../shared/colour/tissue-regions.js';
 
 /*
  * Field chips by seeded dart throwing (Poisson-disk sampling, Cook 1986): candidates are random

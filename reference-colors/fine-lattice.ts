@@ -1,6 +1,6 @@
 import { isInSrgbGamut } from '../shared/colour/display-hex.js';
 import { labToLch, type Lab } from '../shared/colour/lab.js';
-import { inTissueRegion, TISSUE_REGIONS } from './tissue-regions.js';
+import { inTissueRegion, TISSUE_REGIONS } from '../shared/colour/tissue-regions.js';
 import { unwarp, X_MAX } from './warp.js';
 
 /*

@@ -8,8 +8,8 @@ import { parseArgs } from 'node:util';
 import { createChipIndex } from '../shared/colour/chip-index.js';
 import { labFromTuple } from '../shared/colour/lab.js';
 import { buildReferenceSet, formatReferenceSet } from './build-set.js';
-import { COVERAGE_SAMPLE, coverageOf, percentile, sampleRegion } from './coverage.js';
-import { TISSUE_REGIONS } from './tissue-regions.js';
+import { COVERAGE_SAMPLE, coverageOf, percentile } from './coverage.js';
+import { sampleRegion, TISSUE_REGIONS } from '../shared/colour/tissue-regions.js';
 
 const DEFAULT_OUT = fileURLToPath(new URL('./reference-set-v1.json', import.meta.url));
 

@@ -1,15 +1,3 @@
-/**
- * Seeded pseudo-random numbers: mulberry32 (Tommy Ettinger, 2017, public domain), a 32-bit
- * generator small enough to write here. Used only to make the reference set and the tests'
- * samples reproducible, never for anything secret.
- */
-export function mulberry32(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let t = state;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+// The seeded generator moved to shared/random/mulberry32.ts; this re-export keeps the benchmarks'
+// imports working until they import it from there.
+export { mulberry32 } from '../shared/random/mulberry32.js';

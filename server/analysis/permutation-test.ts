@@ -1,6 +1,6 @@
 import { deltaE00 } from '../../shared/colour/delta-e.js';
 import type { Lab } from '../../shared/colour/lab.js';
-import { mulberry32 } from '../../reference-colors/prng.js';
+import { mulberry32 } from '../../shared/random/mulberry32.js';
 
 /** How a permutation test can be run. */
 export interface PermutationOptions {

@@ -11,6 +11,7 @@ import { certifyAndClose } from '../calibration/calibration-close.js';
 import { CalibrationResponse, CalibrationSession, Participant, Specimen } from '../calibration/calibration-session.entity.js';
 import { ColourVisionScreening } from '../calibration/certification.entity.js';
 import { Chip, ReferenceSet } from '../reference-sets/reference-set.entity.js';
+import { CALIBRATION_DEFAULT_THRESHOLDS } from '../../shared/api/calibration-answers.js';
 
 /** Two more invented observers, so a demo session has a group to compare. */
 export const DEMO_OBSERVERS = [
@@ -74,7 +75,7 @@ export async function seedDemoCalibration(m: EntityManager, passwordHash: string
   const fieldOf = (lab: Lab) => fields.reduce((best, c) => (deltaE00(lab, c.lab) < deltaE00(lab, best.lab) ? c : best)).code;
 
   const addSession = async (title: string, heldOn: string, restricted: boolean, specimens: readonly { label: string; lab: Lab }[]) => {
-    const session = await m.save(m.create(CalibrationSession, { title, heldOn, referenceSetId: set.id, restricted, kappaThreshold: 0.61, deltaE00Threshold: 1.8, status: 'open', createdBy: trainer, closedAt: null, kappaAtClose: null }));
+    const session = await m.save(m.create(CalibrationSession, { title, heldOn, referenceSetId: set.id, restricted, kappaThreshold: CALIBRATION_DEFAULT_THRESHOLDS.kappa, deltaE00Threshold: CALIBRATION_DEFAULT_THRESHOLDS.deltaE00, status: 'open', createdBy: trainer, closedAt: null, kappaAtClose: null }));
     const rows = [];
     for (const [i, s] of specimens.entries()) {
       rows.push(await m.save(m.create(Specimen, { session, label: s.label, position: i + 1, source: 'lab', ...s.lab, referenceFieldCode: fieldOf(s.lab), chipCode: null, photo: null, region: null })));

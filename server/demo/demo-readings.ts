@@ -11,7 +11,7 @@
 // - STEADY: HL-0002 "Cream Heart", corm.flesh.centre, at RDP: the same cream (L* 86, a* 1.5,
 //   b* 16) in every season, scatter about ±0.25 per coordinate (well under 1 ΔE00).
 import type { EntityManager } from 'typeorm';
-import { mulberry32 } from '../../reference-colors/prng.js';
+import { mulberry32 } from '../../shared/random/mulberry32.js';
 import { LIGHTS, type CreateReadingRequest } from '../../shared/api/reading-answers.js';
 import type { CreateReadingBody } from '../../shared/api/readings.js';
 import { recordAudit, SYSTEM, type Actor } from '../audit/audit.js';

@@ -4,6 +4,7 @@ import type { LabTuple } from '../colour/lab.js';
 import type { Region } from '../photo/region.js';
 import type { KappaInterval } from '../stats/kappa-interval.js';
 import type { KappaBand } from '../stats/landis-koch.js';
+import { ACCEPTABILITY_THRESHOLD_DE00 } from '../colour/constants.js';
 
 export type { KappaInterval } from '../stats/kappa-interval.js';
 
@@ -14,7 +15,7 @@ export { KAPPA_BANDS, KAPPA_BAND_LABELS, type KappaBand } from '../stats/landis-
  * Landis & Koch's (1977) "substantial" band, and the observer's mean ΔE00 at most 1.8, the 50:50 %
  * acceptability threshold of Paravina et al. (2015) borrowed from dental colour science.
  */
-export const CALIBRATION_DEFAULT_THRESHOLDS = { kappa: 0.61, deltaE00: 1.8 } as const;
+export const CALIBRATION_DEFAULT_THRESHOLDS = { kappa: 0.61, deltaE00: ACCEPTABILITY_THRESHOLD_DE00 } as const;
 
 /** Longest session title and specimen label (our own). */
 export const CALIBRATION_TITLE_MAX = 120;

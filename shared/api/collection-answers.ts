@@ -2,6 +2,7 @@
 // characters, the MCPD export). No zod here, so the client can import them cheaply; the request
 // schemas are in collection.ts, which re-exports everything below.
 import type { SchemeIssue } from '../collection/season-scheme.js';
+import { ACCEPTABILITY_THRESHOLD_DE00 } from '../colour/constants.js';
 
 export type { DayRun, SchemeCheck, SchemeIssue, SeasonRange } from '../collection/season-scheme.js';
 
@@ -111,7 +112,7 @@ export interface Character {
 }
 
 /** ΔE00 acceptability threshold, Paravina et al. (2015), J. Esthet. Restor. Dent. 27:S1–S9. */
-export const DEFAULT_DRIFT_THRESHOLD = 1.8;
+export const DEFAULT_DRIFT_THRESHOLD = ACCEPTABILITY_THRESHOLD_DE00;
 
 /** MCPD date: YYYYMMDD, unknown month/day as hyphens ("2019----", "201903--"). */
 export const MCPD_DATE = /^\d{4}(0[1-9]|1[0-2]|--)(0[1-9]|[12]\d|3[01]|--)$/;

@@ -1,6 +1,7 @@
 // Every number photo sampling and correction rely on, with the reason beside it. Values marked
 // "our own" are project choices, not published figures; the server and the client's preview use
 // the same ones.
+import { ACCEPTABILITY_THRESHOLD_DE00 } from '../colour/constants.js';
 
 /** Version of the sampling pipeline, stored with a reading so a later change of rules is traceable. */
 export const PHOTO_PIPELINE_VERSION = 'photo-sample/1';
@@ -42,7 +43,7 @@ export const SPREAD_SAMPLE_MAX = 5000;
  * 27:S1–S9. Pixel noise of an evenly lit matt surface in a phone JPEG stays below it; veins,
  * stripes, spots or a shadow inside the region push it above.
  */
-export const UNIFORM_SPREAD_MAX_DE00 = 3.6;
+export const UNIFORM_SPREAD_MAX_DE00 = 2 * ACCEPTABILITY_THRESHOLD_DE00;
 
 /**
  * A neutral card or target patch with more than this fraction of clipped pixels is refused (our

@@ -8,7 +8,7 @@
 // Hall, ch. 13 — chapter from memory) resamples whole subjects with replacement, recomputes κ with
 // the same rule as the estimate (shared/stats/fleiss-kappa.ts), and takes the 2.5th and 97.5th
 // percentiles. Seeded, so the same answers always give the same interval.
-import { mulberry32 } from '../../reference-colors/prng.js';
+import { mulberry32 } from '../random/mulberry32.js';
 import { fleissKappa } from './fleiss-kappa.js';
 
 /** Resamples drawn unless told otherwise (our own choice: the 2.5 % tail then rests on 50 values). */

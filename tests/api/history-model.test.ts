@@ -3,7 +3,7 @@
 // reading was lost (readings are never deleted or edited in place; only the review status moves).
 import { after, before, test } from 'node:test';
 import assert from 'node:assert/strict';
-import { mulberry32 } from '../../reference-colors/prng.js';
+import { mulberry32 } from '../../shared/random/mulberry32.js';
 import type { ReadingDetail, ReadingStatus } from '../../shared/api/reading-answers.js';
 import type { ReviewDecision } from '../../shared/api/review-answers.js';
 import { Client, signedInAs, startHarness, type Harness } from './harness.js';

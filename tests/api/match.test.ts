@@ -3,7 +3,7 @@ import assert from 'node:assert/strict';
 import { differenceCiede2000, formatHex } from 'culori';
 import type { MatchAnswer } from '../../shared/api/reference-set-answers.js';
 import type { ReferenceChip, ReferenceSetFile } from '../../shared/colour/reference-set.js';
-import { mulberry32 } from '../../reference-colors/prng.js';
+import { mulberry32 } from '../../shared/random/mulberry32.js';
 import { assertInvalidFields, assertProblem } from './assert-problem.js';
 import { signedInAs, startHarness, type Client, type Harness } from './harness.js';
 import { readSetV1 } from './reference-set-file.js';

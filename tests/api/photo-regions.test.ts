@@ -7,7 +7,7 @@ import { iccProfileName, NO_PROFILE } from '../../server/photos/icc.js';
 import { LINEAR_OF_CODE, RegionAccumulator, trimmedLinearMean } from '../../shared/photo/region-stats.js';
 import { rasteriseRegion, RegionError, type Region } from '../../shared/photo/region.js';
 import { TRIM_FRACTION } from '../../shared/photo/sampling-rules.js';
-import { mulberry32 } from '../../reference-colors/prng.js';
+import { mulberry32 } from '../../shared/random/mulberry32.js';
 
 /** Pixels of a mask as "x,y" strings. */
 function pixelsOf(region: Region, width = 100, height = 100): Set<string> {

@@ -10,7 +10,7 @@ import { existsSync, mkdtempSync, readdirSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { fromRaw } from '../api/photo-fixtures.js';
-import { mulberry32 } from '../../reference-colors/prng.js';
+import { mulberry32 } from '../../shared/random/mulberry32.js';
 import { signInOverHttp } from './http-session.js';
 import { startServerProcess } from './server-process.js';
 

@@ -8,7 +8,7 @@ import { deltaE00 } from '../../shared/colour/delta-e.js';
 import { fromCulori, labFromTuple, type Lab } from '../../shared/colour/lab.js';
 import { createScan } from '../../shared/colour/nearest.js';
 import type { ReferenceSetFile } from '../../shared/colour/reference-set.js';
-import { mulberry32 } from '../../reference-colors/prng.js';
+import { mulberry32 } from '../../shared/random/mulberry32.js';
 
 // Exactness of the chip index: its answers must equal a full scan's (the scan computes every
 // ΔE00 with culori and sorts, ties by list position). Seeds are our own.

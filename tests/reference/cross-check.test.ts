@@ -5,7 +5,7 @@ import Color from 'colorjs.io';
 import { deltaE00 } from '../../shared/colour/delta-e.js';
 import { labToLch, type Lab } from '../../shared/colour/lab.js';
 import { parseHex } from '../../shared/colour/parse.js';
-import { mulberry32 } from '../../reference-colors/prng.js';
+import { mulberry32 } from '../../shared/random/mulberry32.js';
 
 // Cross-check of Hueledger's CIELAB and ΔE00 (culori, D65 from xy (0.3127, 0.3290), CSS Color 4
 // matrix) against two other libraries on 10,000 seeded random sRGB pairs.

@@ -7,7 +7,7 @@ import { analyseDrift, type DriftInput } from '../../server/analysis/drift.js';
 import { meanLab, spreadDeltaE00 } from '../../server/analysis/lab-stats.js';
 import { binomial, permutationTest } from '../../server/analysis/permutation-test.js';
 import type { Lab } from '../../shared/colour/lab.js';
-import { mulberry32 } from '../../reference-colors/prng.js';
+import { mulberry32 } from '../../shared/random/mulberry32.js';
 
 const lab = (l: number, a: number, b: number): Lab => ({ l, a, b });
 const close = (actual: number, expected: number, tol = 1e-5, what = '') => assert.ok(Math.abs(actual - expected) <= tol, `${what} ${actual} ≠ ${expected}`);

@@ -12,8 +12,8 @@ import { displayHex } from '../../shared/colour/display-hex.js';
 import { labFromTuple } from '../../shared/colour/lab.js';
 import { createScan } from '../../shared/colour/nearest.js';
 import { FIELD_CODE_PATTERN, FINE_CODE_PATTERN, type ReferenceSetFile } from '../../shared/colour/reference-set.js';
-import { coverageOf, sampleRegion } from '../../reference-colors/coverage.js';
-import { TISSUE_REGIONS } from '../../reference-colors/tissue-regions.js';
+import { coverageOf } from '../../reference-colors/coverage.js';
+import { sampleRegion, TISSUE_REGIONS } from '../../shared/colour/tissue-regions.js';
 
 // The committed reference set (reference-colors/README.md): determinism, shape and the coverage requirement —
 // within sRGB, each tissue region within ΔE00 1.8 of a chip at the 99th percentile, 1.8 being the

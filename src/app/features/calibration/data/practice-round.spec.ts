@@ -1,4 +1,4 @@
-import { inTissueRegion, TISSUE_REGIONS } from '../../../../../reference-colors/tissue-regions.js';
+import { inTissueRegion, TISSUE_REGIONS } from '../../../../../shared/colour/tissue-regions.js';
 import { isInSrgbGamut } from '../../../../../shared/colour/display-hex.js';
 import { labToLch } from '../../../../../shared/colour/lab.js';
 import { practiceTarget } from './practice-round';

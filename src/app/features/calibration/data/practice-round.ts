@@ -1,8 +1,7 @@
 // Practice targets: random colours from the plant-tissue regions the reference set is densest in,
 // seeded so a round can be played again (the seed is shown and kept in the address).
-import { sampleRegion } from '../../../../../reference-colors/coverage.js';
-import { mulberry32 } from '../../../../../reference-colors/prng.js';
-import { TISSUE_REGIONS } from '../../../../../reference-colors/tissue-regions.js';
+import { mulberry32 } from '../../../../../shared/random/mulberry32.js';
+import { sampleRegion, TISSUE_REGIONS } from '../../../../../shared/colour/tissue-regions.js';
 import { displayHex } from '../../../../../shared/colour/display-hex.js';
 import type { Lab } from '../../../../../shared/colour/lab.js';
 

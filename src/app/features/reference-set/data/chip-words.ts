@@ -1,5 +1,6 @@
 import type { MatchBetween } from '../../../../../shared/api/reference-set-answers.js';
 import type { HueFamily } from '../../../../../shared/colour/colour-name.js';
+import { ACCEPTABILITY_THRESHOLD_DE00, PERCEPTIBILITY_THRESHOLD_DE00 } from '../../../../../shared/colour/constants.js';
 import type { Verdict } from '../../../../../shared/colour/verdict.js';
 
 /** An icon beside each verdict's words, so the verdict never rests on colour alone. */
@@ -11,9 +12,9 @@ export const VERDICT_ICONS: Record<Verdict, string> = {
 
 /** What each verdict means, for a tooltip or a screen reader (bands of Paravina et al. 2015). */
 export const VERDICT_MEANINGS: Record<Verdict, string> = {
-  indistinguishable: 'most observers see no difference (ΔE00 ≤ 0.8)',
-  close: 'a visible but acceptable difference (ΔE00 ≤ 1.8)',
-  'clearly different': 'most observers would not accept it as a match (ΔE00 > 1.8)',
+  indistinguishable: `most observers see no difference (ΔE00 ≤ ${PERCEPTIBILITY_THRESHOLD_DE00})`,
+  close: `a visible but acceptable difference (ΔE00 ≤ ${ACCEPTABILITY_THRESHOLD_DE00})`,
+  'clearly different': `most observers would not accept it as a match (ΔE00 > ${ACCEPTABILITY_THRESHOLD_DE00})`,
 };
 
 /** A number with a true minus sign and fixed decimals, as tables of CIELAB print them. */
