@@ -1,8 +1,9 @@
 /*
  * Invented scenario for the demo only; no real people, places or varieties.
  *
- * Site names, coordinates, variety names, donors and people are made up. Time zones and
- * ISO 3166-1 alpha-3 country codes are real, because the app computes with them. Passport fields
+ * Site names, place names, variety names, donors and people are made up, and the sites carry no
+ * coordinates, so none of them points at a real place. Time zones and ISO 3166-1 alpha-3 country
+ * codes are real, because the app computes with them. Passport fields
  * follow the FAO/Bioversity Multi-Crop Passport Descriptors V.2.1 (Alercia, Diulgheroff &
  * Mackay 2015); the MCPD tag is named beside each field of DemoAccession.
  */
@@ -18,9 +19,9 @@ export interface DemoPerson {
 }
 
 export const DEMO_PEOPLE: readonly DemoPerson[] = [
-  { email: 'admin@demo.test', name: 'Wren Halloway', role: 'admin' },
-  { email: 'trainer@demo.test', name: 'Odile Marchbank', role: 'trainer' },
-  { email: 'reviewer@demo.test', name: 'Caspar Thistlewood', role: 'reviewer' },
+  { email: 'admin@demo.test', name: 'Wren Hallowquist', role: 'admin' },
+  { email: 'trainer@demo.test', name: 'Odile Marchenvey', role: 'trainer' },
+  { email: 'reviewer@demo.test', name: 'Caspar Thistlequen', role: 'reviewer' },
   { email: 'recorder@demo.test', name: 'Juno Pellbright', role: 'recorder' },
 ];
 
@@ -52,10 +53,10 @@ export interface DemoSite {
 export const DEMO_SITES: readonly DemoSite[] = [
   {
     code: 'RDP',
-    name: 'Riverside Demonstration Plot',
+    name: 'Rellowmere Demonstration Plot',
     timezone: 'Pacific/Fiji',
-    latitude: -17.712,
-    longitude: 178.164,
+    latitude: null,
+    longitude: null,
     elevationM: 14,
     seasons: [
       { name: 'Wet', start: '11-01', end: '04-30' },
@@ -64,10 +65,10 @@ export const DEMO_SITES: readonly DemoSite[] = [
   },
   {
     code: 'HTG',
-    name: 'Hilltop Trial Garden',
+    name: 'Hobbenvale Trial Garden',
     timezone: 'Asia/Bangkok',
-    latitude: 18.436,
-    longitude: 98.752,
+    latitude: null,
+    longitude: null,
     elevationM: 640,
     seasons: [
       { name: 'Cool', start: '10-16', end: '02-15' },
@@ -77,10 +78,10 @@ export const DEMO_SITES: readonly DemoSite[] = [
   },
   {
     code: 'LVS',
-    name: 'Lowland Valley Station',
+    name: 'Lummerdown Valley Station',
     timezone: 'Africa/Lagos',
-    latitude: 7.284,
-    longitude: 3.917,
+    latitude: null,
+    longitude: null,
     elevationM: 96,
     seasons: [
       { name: 'Dry', start: '11-01', end: '03-31' },
@@ -90,10 +91,10 @@ export const DEMO_SITES: readonly DemoSite[] = [
   },
   {
     code: 'CCG',
-    name: 'Coastal Collection Garden',
+    name: 'Cindlecove Collection Garden',
     timezone: 'America/Port_of_Spain',
-    latitude: 10.487,
-    longitude: -61.318,
+    latitude: null,
+    longitude: null,
     elevationM: null,
     seasons: [
       { name: 'Dry', start: '01-01', end: '05-31' },
@@ -151,7 +152,7 @@ export const DEMO_ACCESSIONS: readonly DemoAccession[] = [
     otherNames: ['Purple Bar'],
     instituteCode: DEMO_GENEBANK,
     originCountry: 'FJI',
-    collectingSite: 'Home garden beside the upper ford, Kettle Creek valley',
+    collectingSite: 'Home garden beside the upper ford, Quorrish Creek valley',
     acquisitionDate: '20240312',
     sampleStatus: 300,
     donorName: 'Mara Quillfeather',
@@ -169,7 +170,7 @@ export const DEMO_ACCESSIONS: readonly DemoAccession[] = [
     otherNames: [],
     instituteCode: DEMO_GENEBANK,
     originCountry: 'FJI',
-    collectingSite: 'Roadside plot near Oldmill Landing',
+    collectingSite: 'Roadside plot near Fallowquern Landing',
     acquisitionDate: '2023----',
     sampleStatus: 300,
     donorName: 'Mara Quillfeather',
@@ -189,7 +190,7 @@ export const DEMO_ACCESSIONS: readonly DemoAccession[] = [
     collectingSite: null,
     acquisitionDate: '202406--',
     sampleStatus: 300,
-    donorName: 'Bellrock Growers Circle',
+    donorName: 'Dunquillow Growers Circle',
     remarks: 'Dark basal ring; compare across sites.',
     siteCode: 'RDP',
     plants: [
@@ -204,7 +205,7 @@ export const DEMO_ACCESSIONS: readonly DemoAccession[] = [
     otherNames: [],
     instituteCode: DEMO_NURSERY,
     originCountry: 'THA',
-    collectingSite: 'Terrace garden on the north slope above Pinewater',
+    collectingSite: 'Terrace garden on the north slope above Tessivane',
     acquisitionDate: '20240827',
     sampleStatus: 300,
     donorName: 'Tobiah Fenmarch',
@@ -224,7 +225,7 @@ export const DEMO_ACCESSIONS: readonly DemoAccession[] = [
     collectingSite: null,
     acquisitionDate: '2024----',
     sampleStatus: 400,
-    donorName: 'Hilltop Trial Garden breeding team',
+    donorName: 'Hobbenvale Trial Garden breeding team',
     remarks: 'Breeding line kept for its pink corm flesh.',
     siteCode: 'HTG',
     plants: [
@@ -240,7 +241,7 @@ export const DEMO_ACCESSIONS: readonly DemoAccession[] = [
     otherNames: [],
     instituteCode: null,
     originCountry: 'PHL',
-    collectingSite: 'Market garden at Greyfield Crossing',
+    collectingSite: 'Market garden at Marrowdyne Crossing',
     acquisitionDate: '20250107',
     sampleStatus: 500,
     donorName: 'Tobiah Fenmarch',
@@ -257,10 +258,10 @@ export const DEMO_ACCESSIONS: readonly DemoAccession[] = [
     otherNames: ['Red Base'],
     instituteCode: DEMO_GENEBANK,
     originCountry: 'NGA',
-    collectingSite: 'Wetland edge below Sallowford',
+    collectingSite: 'Wetland edge below Yarrowquist',
     acquisitionDate: '202311--',
     sampleStatus: 300,
-    donorName: 'Eluned Brackwater',
+    donorName: 'Eluned Brackwillow',
     remarks: 'Sheath edge reddens in the early rains.',
     siteCode: 'LVS',
     plants: [
@@ -292,10 +293,10 @@ export const DEMO_ACCESSIONS: readonly DemoAccession[] = [
     otherNames: ['Shadow Leaf'],
     instituteCode: DEMO_NURSERY,
     originCountry: 'CMR',
-    collectingSite: 'Farm garden on the Ashbourne road',
+    collectingSite: 'Farm garden on the Orrelbane road',
     acquisitionDate: '20240519',
     sampleStatus: 300,
-    donorName: 'Eluned Brackwater',
+    donorName: 'Eluned Brackwillow',
     remarks: null,
     siteCode: 'LVS',
     plants: [
@@ -309,10 +310,10 @@ export const DEMO_ACCESSIONS: readonly DemoAccession[] = [
     otherNames: [],
     instituteCode: DEMO_GENEBANK,
     originCountry: 'TTO',
-    collectingSite: 'Backyard plot at Lantern Bay',
+    collectingSite: 'Backyard plot at Skellivan Bay',
     acquisitionDate: '20250210',
     sampleStatus: 300,
-    donorName: 'Corwin Saltmarsh',
+    donorName: 'Corwin Saltervane',
     remarks: null,
     siteCode: 'CCG',
     plants: [
@@ -330,7 +331,7 @@ export const DEMO_ACCESSIONS: readonly DemoAccession[] = [
     collectingSite: null,
     acquisitionDate: '2025----',
     sampleStatus: 400,
-    donorName: 'Coastal Collection Garden seedling trial',
+    donorName: 'Cindlecove Collection Garden seedling trial',
     remarks: 'Seedling selection; leaf margin colour still variable between plants.',
     siteCode: 'CCG',
     plants: [
@@ -344,10 +345,10 @@ export const DEMO_ACCESSIONS: readonly DemoAccession[] = [
     otherNames: [],
     instituteCode: DEMO_GENEBANK,
     originCountry: 'PNG',
-    collectingSite: 'Hamlet garden past the Stillwater bend',
+    collectingSite: 'Hamlet garden past the Vessinmoor bend',
     acquisitionDate: '20240930',
     sampleStatus: 500,
-    donorName: 'Corwin Saltmarsh',
+    donorName: 'Corwin Saltervane',
     remarks: null,
     siteCode: 'CCG',
     plants: [

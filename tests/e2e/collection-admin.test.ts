@@ -77,7 +77,7 @@ describe('an admin at a desk manages sites and accessions', () => {
   test('should edit a site’s seasons to wrap the year end, see an overlap in words, and save', async () => {
     await page.goto(`${app.url}/collection?tab=sites`);
     // The demo's coastal garden has Dry 01-01 → 05-31 and Wet 06-01 → 12-31: nothing wraps yet.
-    await page.getByRole('link', { name: 'Coastal Collection Garden' }).click();
+    await page.getByRole('link', { name: 'Cindlecove Collection Garden' }).click();
     await page.waitForURL(/\/collection\/sites\/\d+$/);
     await page.getByRole('heading', { name: 'Seasons' }).waitFor();
     const dry = await rowNamed(page, 'Dry');
@@ -238,7 +238,7 @@ describe('a recorder on a phone enters descriptors', () => {
 
   test('should show the recorder the season ring without edit fields', async () => {
     await page.goto(`${app.url}/collection?tab=sites`);
-    await page.getByRole('link', { name: /Riverside Demonstration Plot/ }).first().click();
+    await page.getByRole('link', { name: /Rellowmere Demonstration Plot/ }).first().click();
     await page.locator('hl-year-ring').waitFor();
     assert.equal(await page.locator('hl-season-editor').count(), 0);
     assert.match(await page.locator('.season-list').innerText(), /Wet 1 Nov → 30 Apr · 181 days \(182 in leap years\), across the year end/);
@@ -251,7 +251,7 @@ describe('an admin on a phone edits seasons', () => {
     const page = await app.newPage({ phone: true });
     await signIn(page, app.url, 'admin@demo.test');
     await page.goto(`${app.url}/collection?tab=sites`);
-    await page.getByRole('link', { name: /Hilltop Trial Garden/ }).first().click();
+    await page.getByRole('link', { name: /Hobbenvale Trial Garden/ }).first().click();
     await page.locator('hl-season-editor').waitFor();
     await seasonField(page, await rowNamed(page, 'Rainy'), 'Ends (MM-DD)').fill('09-30');
     await page.locator('.problem', { hasText: 'Gap:' }).waitFor();

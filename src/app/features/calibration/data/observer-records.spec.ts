@@ -10,8 +10,8 @@ const cert = (id: number, userId: number, name: string): Certification => ({
 
 describe('observer records', () => {
   it('should list unscreened people with a null screening so they can be shown as not screened', () => {
-    const rows = observerRecords([{ id: 3, name: 'Wren Halloway' }], [], []);
-    expect(rows).toEqual([{ userId: 3, name: 'Wren Halloway', screening: null, certifications: [] }]);
+    const rows = observerRecords([{ id: 3, name: 'Wren Hallowquist' }], [], []);
+    expect(rows).toEqual([{ userId: 3, name: 'Wren Hallowquist', screening: null, certifications: [] }]);
   });
 
   it('should keep only the newest screening of each person (the list comes newest first)', () => {

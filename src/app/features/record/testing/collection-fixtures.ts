@@ -2,8 +2,8 @@
 import type { Accession, Character, Site } from '../../../../../shared/api/collection-answers.js';
 
 export const TEST_SITES: Site[] = [
-  { id: 1, code: 'RDP', name: 'Riverside Demonstration Plot', timezone: 'Pacific/Fiji', latitude: null, longitude: null, elevationM: null, seasons: [{ id: 1, name: 'Wet', start: '11-01', end: '04-30' }] },
-  { id: 2, code: 'HTG', name: 'Hilltop Trial Garden', timezone: 'Asia/Bangkok', latitude: null, longitude: null, elevationM: null, seasons: [] },
+  { id: 1, code: 'RDP', name: 'Rellowmere Demonstration Plot', timezone: 'Pacific/Fiji', latitude: null, longitude: null, elevationM: null, seasons: [{ id: 1, name: 'Wet', start: '11-01', end: '04-30' }] },
+  { id: 2, code: 'HTG', name: 'Hobbenvale Trial Garden', timezone: 'Asia/Bangkok', latitude: null, longitude: null, elevationM: null, seasons: [] },
 ];
 
 export const TEST_ACCESSIONS: Accession[] = [
