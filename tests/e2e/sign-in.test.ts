@@ -8,10 +8,10 @@ const app = useApp();
 
 /** What each role must and must not see in the side navigation (this sections). */
 const EXPECTED_NAV: Record<Role, { shows: string[]; hides: string[] }> = {
-  admin: { shows: ['Collection', 'Users', 'Outbox', 'Audit', 'Account'], hides: [] },
-  trainer: { shows: ['Collection', 'Account'], hides: ['Users', 'Outbox', 'Audit'] },
-  reviewer: { shows: ['Collection', 'Account'], hides: ['Users', 'Outbox', 'Audit'] },
-  recorder: { shows: ['Collection', 'Account'], hides: ['Users', 'Outbox', 'Audit'] },
+  admin: { shows: ['Collection', 'Users', 'Outbox', 'BrAPI tokens', 'Audit', 'Account'], hides: [] },
+  trainer: { shows: ['Collection', 'Account'], hides: ['Users', 'Outbox', 'BrAPI tokens', 'Audit'] },
+  reviewer: { shows: ['Collection', 'Account'], hides: ['Users', 'Outbox', 'BrAPI tokens', 'Audit'] },
+  recorder: { shows: ['Collection', 'Account'], hides: ['Users', 'Outbox', 'BrAPI tokens', 'Audit'] },
 };
 
 describe('signing in as each demo role in Chromium', () => {

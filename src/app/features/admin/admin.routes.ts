@@ -14,6 +14,11 @@ export const ADMIN_ROUTES: Routes = [
     loadComponent: () => import('./pages/outbox-page').then((m) => m.OutboxPage),
   },
   {
+    path: 'api-tokens',
+    title: 'BrAPI tokens · Hueledger',
+    loadComponent: () => import('./pages/api-tokens-page').then((m) => m.ApiTokensPage),
+  },
+  {
     path: 'audit',
     title: 'Audit · Hueledger',
     loadComponent: () => import('./pages/audit-page').then((m) => m.AuditPage),
