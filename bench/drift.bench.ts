@@ -12,6 +12,8 @@ import { displayHex } from '../shared/colour/display-hex.js';
 import type { Lab } from '../shared/colour/lab.js';
 import { analyseDrift } from '../server/analysis/drift.js';
 import { driftAnswer, driftRows, utcFromSqlite } from '../server/analysis/drift-query.js';
+import { DriftOverview } from '../server/analysis/drift-overview.js';
+import { DriftPool } from '../server/analysis/drift-pool.js';
 import { meanLab, spreadDeltaE00 } from '../server/analysis/lab-stats.js';
 import { User } from '../server/auth/user.entity.js';
 import { Accession } from '../server/collection/accession.entity.js';
@@ -33,6 +35,11 @@ const TO = Date.parse('2026-01-01T00:00:00Z');
 const dir = mkdtempSync(path.join(tmpdir(), 'hueledger-drift-bench-'));
 const file = path.join(dir, 'bench.sqlite');
 const ds = await openDatabase(file);
+
+/** TypeORM's own better-sqlite3 connection, for bulk inserts outside its layer. */
+function db(): Database.Database {
+  return (ds.driver as unknown as { databaseConnection: Database.Database }).databaseConnection;
+}
 
 interface Pair {
   accessionId: number;
@@ -57,14 +64,13 @@ async function seed(ds: DataSource): Promise<Pair[]> {
   const pairs: Pair[] = accessions.flatMap((a) => characters.map((characterId) => ({ accessionId: a.id, characterId })));
 
   const random = mulberry32(0x44524654);
-  const db = (ds.driver as unknown as { databaseConnection: Database.Database }).databaseConnection;
-  const insert = db.prepare(
+  const insert = db().prepare(
     `INSERT INTO "reading" ("accessionId", "characterId", "siteId", "observerId", "observedAt", "method", "l", "a", "b", "hex", "inGamut", "setId", "bestChipCode", "bestChipName", "bestChipHex", "deltaE00", "light", "season", "seasonYear", "status")
      VALUES (?, ?, ?, ?, ?, 'instrument', ?, ?, ?, ?, ?, 'v1', 'F-001', 'bench chip', '#808080', 1.0, 'open-shade', ?, ?, 'submitted')`,
   );
   // Every pair: a base colour; a third of the pairs also shift with the season (real drift), the rest hold steady.
   const base = pairs.map((_, i) => ({ l: 30 + random() * 40, a: -30 + random() * 60, b: -20 + random() * 60, drifts: i % 3 === 0 }));
-  db.transaction(() => {
+  db().transaction(() => {
     for (let n = 0; n < READINGS; n++) {
       const p = n % pairs.length;
       const pair = pairs[p]!;
@@ -120,6 +126,25 @@ const full = await time(async () => {
   return { comparisons, drifting, permutations };
 });
 
+// The overview of the whole collection (issue 14): cold in this thread, cold with worker threads,
+// asked again with nothing changed, and after one new reading (only that pair is analysed again).
+const single = new DriftOverview(ds, null);
+const coldSingle = await time(() => single.answer());
+const pool = new DriftPool();
+const pooled = new DriftOverview(ds, pool);
+await pooled.answer(); // starts the workers (module loading), then forget what it computed
+pooled.clear();
+const coldPooled = await time(() => pooled.answer());
+const warm = await time(() => pooled.answer());
+const lastPair = pairs[0]!;
+const row = db().prepare('SELECT * FROM "reading" WHERE "accessionId" = ? AND "characterId" = ? ORDER BY "id" DESC LIMIT 1').get(lastPair.accessionId, lastPair.characterId) as Record<string, unknown>;
+delete row['id'];
+const columns = Object.keys(row);
+db().prepare(`INSERT INTO "reading" (${columns.map((c) => `"${c}"`).join(', ')}) VALUES (${columns.map(() => '?').join(', ')})`).run(...columns.map((c) => row[c]));
+const oneNew = await time(() => pooled.answer());
+await pool.close();
+const agree = JSON.stringify(coldSingle.value.items.map((i) => [i.accessionId, i.characterId, i.flags.length])) === JSON.stringify(coldPooled.value.items.map((i) => [i.accessionId, i.characterId, i.flags.length]));
+
 // Breakdown: the SQL fetch alone; then group means and spreads alone; then the whole analysis over fetched rows.
 const fetched = await time(async () => {
   const all = [];
@@ -150,7 +175,13 @@ console.log('| step | time | × floor |');
 console.log('|---|---|---|');
 console.log(`| floor: bare better-sqlite3 GROUP BY (count, mean L*a*b*), median of 9 | ${ms(floor.ms)} | 1.0× |`);
 console.log(`| drift analysis of every pair (driftAnswer: lookups, SQL, groups, spreads, permutation tests, answer) | ${ms(full.ms)} | ${(full.ms / floor.ms).toFixed(1)}× |`);
-reportRatio(`drift analysis, ${READINGS} readings`, full.ms / floor.ms, 'a bare better-sqlite3 GROUP BY', '≤ 3×');
+reportRatio(`drift analysis, ${READINGS} readings, every pair through driftAnswer in turn (before issue 14: 212×)`, full.ms / floor.ms, 'a bare better-sqlite3 GROUP BY', '< 10×');
+console.log(`| drift overview, cold, this thread (${coldSingle.value.pairs} pairs, ${coldSingle.value.items.length} flagged) | ${ms(coldSingle.ms)} | ${(coldSingle.ms / floor.ms).toFixed(1)}× |`);
+console.log(`| drift overview, cold, worker threads (${coldPooled.value.recomputed} pairs analysed; same flags as this thread: ${agree ? 'yes' : 'NO'}) | ${ms(coldPooled.ms)} | ${(coldPooled.ms / floor.ms).toFixed(1)}× |`);
+console.log(`| drift overview, asked again, nothing changed (${warm.value.recomputed} pairs analysed) | ${ms(warm.ms)} | ${(warm.ms / floor.ms).toFixed(1)}× |`);
+console.log(`| drift overview after one new reading (${oneNew.value.recomputed} pair analysed again) | ${ms(oneNew.ms)} | ${(oneNew.ms / floor.ms).toFixed(1)}× |`);
+reportRatio(`drift overview, ${READINGS} readings, cold, worker threads`, coldPooled.ms / floor.ms, 'a bare better-sqlite3 GROUP BY', '< 10×');
+reportRatio(`drift overview, ${READINGS} readings, after one new reading`, oneNew.ms / floor.ms, 'a bare better-sqlite3 GROUP BY', '< 10×');
 console.log(`| one drift answer, mean over the pairs (${(READINGS / pairs.length).toFixed(0)} readings each) | ${(full.ms / pairs.length).toFixed(1)} ms | |`);
 console.log(`| … of which the readings query alone (driftRows, every pair) | ${ms(fetched.ms)} | ${(fetched.ms / floor.ms).toFixed(1)}× |`);
 console.log(`| … of which group means and spreads alone | ${ms(stats.ms)} | ${(stats.ms / floor.ms).toFixed(1)}× |`);

@@ -106,7 +106,7 @@ export function analyseDrift(readings: readonly DriftInput[], rules: Partial<Dri
 }
 
 function compare(g: { key: GroupKey; labs: Lab[] }, h: { key: GroupKey; labs: Lab[] }, kind: ComparisonKind, r: DriftRules): DriftComparison {
-  const test = permutationTest(g.labs, h.labs, { seed: seedFor(r.seed, g.key, h.key) });
+  const test = permutationTest(g.labs, h.labs, { seed: seedFor(r.seed, g.key, h.key), alpha: r.alpha });
   const big = g.labs.length >= r.minGroupSize && h.labs.length >= r.minGroupSize;
   const large = test.statistic >= r.threshold;
   const unlikely = test.pValue < r.alpha;

@@ -46,7 +46,7 @@ export function siteDifferencesWithinSeasons(readings: readonly SiteSeasonInput[
   for (const g of groups.values()) {
     const siteIds = [...new Set(g.items.map((x) => x.siteId))].sort((p, q) => p - q);
     if (siteIds.length < 2) continue;
-    const cmp = compareSites(g.items, siteIds);
+    const cmp = compareSites(g.items, siteIds, r.alpha);
     for (let i = 0; i < cmp.sites.length; i++) {
       for (let j = i + 1; j < cmp.sites.length; j++) {
         const a = cmp.sites[i]!;

@@ -37,7 +37,7 @@ export const SITE_SEED = 0x73697465;
  * grown at several sites. Each pair gets its own seed from its two site ids, so the matrix does
  * not change when a third site gains readings, and (i, j) and (j, i) are one test.
  */
-export function compareSites(readings: readonly SiteInput[], siteOrder: readonly number[]): SiteComparison {
+export function compareSites(readings: readonly SiteInput[], siteOrder: readonly number[], alpha = 0.05): SiteComparison {
   const bySite = new Map<number, Lab[]>();
   for (const r of readings) {
     let labs = bySite.get(r.siteId);
@@ -56,7 +56,7 @@ export function compareSites(readings: readonly SiteInput[], siteOrder: readonly
   for (let i = 0; i < n; i++) {
     for (let j = i + 1; j < n; j++) {
       const [lo, hi] = ids[i]! < ids[j]! ? [ids[i]!, ids[j]!] : [ids[j]!, ids[i]!];
-      const test = permutationTest(bySite.get(lo)!, bySite.get(hi)!, { seed: pairSeed(lo, hi) });
+      const test = permutationTest(bySite.get(lo)!, bySite.get(hi)!, { seed: pairSeed(lo, hi), alpha });
       de[i]![j] = de[j]![i] = deltaE00(sites[i]!.meanLab, sites[j]!.meanLab);
       p[i]![j] = p[j]![i] = test.pValue;
     }

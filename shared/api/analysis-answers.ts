@@ -33,9 +33,9 @@ export interface DriftComparison {
   kind: ComparisonKind;
   /** ΔE00 between the two groups' CIELAB means. */
   deltaE00: number;
-  /** Permutation test of that ΔE00 (seeded; exact for small groups, else random). */
+  /** Permutation test of that ΔE00 (seeded; exact for small groups, else random, stopped early by Besag & Clifford's sequential rule when plainly chance). */
   pValue: number;
-  test: 'exact' | 'random';
+  test: 'exact' | 'random' | 'sequential';
   permutations: number;
   /** ΔE00 ≥ threshold, p < alpha, and both groups have at least minGroupSize readings. */
   drift: boolean;
@@ -91,4 +91,44 @@ export interface SiteComparisonAnswer {
   /** pValue[i][j]: permutation test of that difference (1 on the diagonal). */
   pValue: number[][];
   threshold: number;
+}
+
+/** One flag of the drift overview: season drift between two season groups, or two sites apart within one season group. */
+export interface DriftOverviewFlag {
+  kind: 'season-drift' | 'site-difference';
+  /** "Dry 2025 → Wet 2025", or "RDP ↔ HTG in Wet 2025". */
+  label: string;
+  deltaE00: number;
+  pValue: number;
+  reason: string;
+  /** Site differences: the season group compared. */
+  season: string | null;
+  seasonYear: number | null;
+}
+
+/** One accession × character with at least one flag. */
+export interface DriftOverviewItem {
+  accessionId: number;
+  accessionNumber: string;
+  accessionName: string;
+  characterId: number;
+  characterCode: string;
+  characterLabel: string;
+  /** Readings in force of the pair. */
+  n: number;
+  /** The largest flagged ΔE00 (the sort key). */
+  deltaE00: number;
+  flags: DriftOverviewFlag[];
+}
+
+/** `GET /api/analysis/overview`: every flagged accession × character of the collection, largest ΔE00 first. */
+export interface DriftOverviewAnswer {
+  items: DriftOverviewItem[];
+  /** Accession × character pairs with readings, and readings in force, analysed. */
+  pairs: number;
+  readings: number;
+  /** Pairs analysed afresh for this answer (the rest were unchanged since the last one). */
+  recomputed: number;
+  /** ISO 8601. */
+  computedAt: string;
 }

@@ -26,3 +26,6 @@ export const siteComparisonQuery = z
   })
   .strict();
 export type SiteComparisonQuery = z.infer<typeof siteComparisonQuery>;
+
+/** `GET /api/analysis/overview`: no parameters (the whole collection); anything else is refused. */
+export const driftOverviewQuery = z.object({}).strict();

@@ -160,6 +160,7 @@ const ROUTES: readonly RouteCase[] = [
   { method: 'GET', path: '/api/reviews/queue', access: REVIEWERS, ok: 200 },
   { method: 'GET', path: '/api/notifications', access: EVERYONE, ok: 200 },
   { method: 'POST', path: '/api/notifications/:id/read', access: EVERYONE, ok: 204, url: (f, role) => `/api/notifications/${f.noticeOf(role)}/read` },
+  { method: 'GET', path: '/api/analysis/overview', access: EVERYONE, ok: 200 },
   { method: 'GET', path: '/api/analysis/drift', access: EVERYONE, ok: 200, url: (f) => `/api/analysis/drift?accessionId=${f.accessionId}&characterId=${f.characterId}` },
   { method: 'GET', path: '/api/analysis/sites', access: EVERYONE, ok: 200, url: (f) => `/api/analysis/sites?accessionId=${f.accessionId}&characterId=${f.characterId}` },
   { method: 'GET', path: '/api/api-tokens', access: ADMIN, ok: 200 },

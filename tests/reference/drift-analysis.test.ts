@@ -5,7 +5,9 @@ import assert from 'node:assert/strict';
 import Color from 'colorjs.io';
 import { analyseDrift, type DriftInput } from '../../server/analysis/drift.js';
 import { meanLab, spreadDeltaE00 } from '../../server/analysis/lab-stats.js';
-import { binomial, permutationTest } from '../../server/analysis/permutation-test.js';
+import fc from 'fast-check';
+import { binomial, binomialLowerTail, deltaE00UpperBound, permutationTest, SEQUENTIAL_EXCEEDANCES_DEFAULT } from '../../server/analysis/permutation-test.js';
+import { deltaE00 } from '../../shared/colour/delta-e.js';
 import type { Lab } from '../../shared/colour/lab.js';
 import { mulberry32 } from '../../shared/random/mulberry32.js';
 
@@ -96,12 +98,86 @@ describe('the permutation test', () => {
   const b = cloud(lab(45, 30, -10), 40, 2);
   const far = cloud(lab(52, 24, -2), 40, 2);
 
-  test('is deterministic for a seed, and uses at least 2,000 random permutations when exact is too large', () => {
-    const one = permutationTest(a, b, { seed: 11 });
-    const two = permutationTest(a, b, { seed: 11 });
+  test('is deterministic for a seed, and uses at least 2,000 random permutations when exact is too large and it is not settled early', () => {
+    const one = permutationTest(a, b, { seed: 11, exceedances: Infinity, resamplingRisk: 0 });
+    const two = permutationTest(a, b, { seed: 11, exceedances: Infinity, resamplingRisk: 0 });
     assert.deepEqual(one, two);
     assert.equal(one.method, 'random');
     assert.ok(one.permutations >= 2000);
+    const sep = permutationTest(a, far, { seed: 11, exceedances: Infinity, resamplingRisk: 0 });
+    assert.deepEqual([sep.method, sep.permutations], ['random', 4999], 'with both sequential rules off, every permutation is drawn');
+  });
+
+  test('settles a plain difference early once p < alpha is all but certain (binomial lower tail below risk/looks)', () => {
+    const sep = permutationTest(a, far, { seed: 11 });
+    assert.equal(sep.method, 'sequential');
+    // 49 looks share a risk of 0.001; (1 − 0.05)^m ≤ 0.001/49 first holds at m = 210, so the look at 300 decides (0 extreme so far).
+    assert.ok(Math.pow(0.95, 200) > 0.001 / 49 && Math.pow(0.95, 300) <= 0.001 / 49);
+    assert.deepEqual([sep.permutations, sep.pValue], [300, 1 / 301]);
+    const full = permutationTest(a, far, { seed: 11, exceedances: Infinity, resamplingRisk: 0 });
+    assert.ok(full.pValue < 0.05, 'the full run decides the same');
+  });
+
+  test('computes the binomial lower tail (checked by hand: Bin(10, 0.5), P(X ≤ 2) = 56/1024)', () => {
+    close(binomialLowerTail(2, 10, 0.5), 56 / 1024, 1e-15);
+    close(binomialLowerTail(0, 300, 0.05), Math.pow(0.95, 300), 1e-18);
+  });
+
+  test('stops at the h-th extreme permutation with p = h/l (Besag & Clifford 1991, Biometrika 78:301–304)', () => {
+    const seq = permutationTest(a, b, { seed: 11 });
+    assert.equal(seq.method, 'sequential');
+    assert.ok(seq.permutations < 4999);
+    close(seq.pValue, SEQUENTIAL_EXCEEDANCES_DEFAULT / seq.permutations, 1e-15, 'p = h/l');
+    // The same draws without stopping: the h-th extreme one is the l-th draw, so the full count
+    // from the first l draws is h and the full test agrees the difference is chance.
+    const upTo = permutationTest(a, b, { seed: 11, exceedances: Infinity, resamplingRisk: 0, randomPermutations: seq.permutations });
+    close(upTo.pValue, (1 + SEQUENTIAL_EXCEEDANCES_DEFAULT) / (1 + seq.permutations), 1e-15, 'h extreme among the first l draws');
+    const full = permutationTest(a, b, { seed: 11, exceedances: Infinity, resamplingRisk: 0 });
+    assert.equal(seq.pValue >= 0.05, full.pValue >= 0.05, 'the same decision at alpha 0.05');
+  });
+
+  test('counts exactly what it would count without the ΔE00 upper bound (a plain loop over the same draws with culori)', () => {
+    for (const [x, y, seed] of [[a, b, 21], [a, far, 22], [b.slice(0, 12), far.slice(0, 9), 23]] as const) {
+      const got = permutationTest(x, y, { seed, exceedances: Infinity, resamplingRisk: 0, randomPermutations: 999, exactLimit: 0 });
+      // The reference: partial Fisher–Yates with the same generator, ΔE00 of every split by culori.
+      const pooled = [...x, ...y];
+      const k = Math.min(x.length, y.length);
+      const mean = (xs: Lab[]) => lab(xs.reduce((s, q) => s + q.l, 0) / xs.length, xs.reduce((s, q) => s + q.a, 0) / xs.length, xs.reduce((s, q) => s + q.b, 0) / xs.length);
+      const small = x.length <= y.length ? x : y;
+      const big = x.length <= y.length ? y : x;
+      const observed = deltaE00(mean(small), mean(big));
+      const random = mulberry32(seed);
+      const order = pooled.map((_, i) => i);
+      let extreme = 0;
+      for (let r = 0; r < 999; r++) {
+        for (let i = 0; i < k; i++) {
+          const j = i + Math.floor(random() * (pooled.length - i));
+          [order[i], order[j]] = [order[j]!, order[i]!];
+        }
+        const inside = new Set(order.slice(0, k));
+        const stat = deltaE00(mean(pooled.filter((_, i) => inside.has(i))), mean(pooled.filter((_, i) => !inside.has(i))));
+        if (stat >= observed - 1e-9 * Math.max(1, observed)) extreme++;
+      }
+      close(got.pValue, (1 + extreme) / 1000, 1e-12, `seed ${seed}`);
+    }
+  });
+
+  test('bounds ΔE00 from above: √(ΔL² + 4.5Δa² + 2Δb²) ≥ culori ΔE00 on Sharma, Wu & Dalal (2005) Table 1 pairs 9–12, 17 and random pairs', () => {
+    // Pairs 9–12 straddle the a* axis at low chroma, where G is largest; 17 is a large difference.
+    const pairs: [number, number, number, number, number, number][] = [
+      [50, 2.49, -0.001, 50, -2.49, 0.0009], [50, 2.49, -0.001, 50, -2.49, 0.001], [50, 2.49, -0.001, 50, -2.49, 0.0011],
+      [50, 2.49, -0.001, 50, -2.49, 0.0012], [50, 2.5, 0, 73, 25, -18],
+    ];
+    for (const [l1, a1, b1, l2, a2, b2] of pairs) assert.ok(deltaE00UpperBound(l1 - l2, a1 - a2, b1 - b2) >= deltaE00(lab(l1, a1, b1), lab(l2, a2, b2)));
+    const channel = (min: number, max: number) => fc.double({ min, max, noNaN: true });
+    fc.assert(
+      fc.property(channel(0, 100), channel(-128, 128), channel(-128, 128), channel(-3, 3), channel(-3, 3), channel(-3, 3), (l, a1, b1, dl, da, db) => {
+        const p = lab(l, a1, b1);
+        const q = lab(Math.min(100, Math.max(0, l + dl)), a1 + da, b1 + db);
+        return deltaE00UpperBound(p.l - q.l, p.a - q.a, p.b - q.b) >= deltaE00(p, q);
+      }),
+      { numRuns: 5_000, seed: 14 },
+    );
   });
 
   test('gives p = 1 for identical groups, exact or random', () => {
@@ -121,7 +197,7 @@ describe('the permutation test', () => {
     const x = [lab(50, 0, 0), lab(51, 0, 1), lab(49, 1, 0), lab(52, 0, 0), lab(50.5, 0.5, 0.5)];
     const y = [lab(51, 0, 0), lab(53, 1, 0), lab(52, 0, 1), lab(52.5, 0, 0), lab(51.5, 0.5, 0.5)];
     const exact = permutationTest(x, y, { seed: 5 });
-    const sampled = permutationTest(x, y, { seed: 5, exactLimit: 0, randomPermutations: 20_000 });
+    const sampled = permutationTest(x, y, { seed: 5, exactLimit: 0, randomPermutations: 20_000, exceedances: Infinity, resamplingRisk: 0 });
     assert.equal(exact.method, 'exact');
     assert.equal(sampled.method, 'random');
     close(sampled.pValue, exact.pValue, 0.01, 'random vs exact');

@@ -87,7 +87,7 @@ export class ComparisonList {
         kind: kindWords(c.kind),
         deltaE: deltaEText(c.deltaE00),
         p: pValueText(c.pValue),
-        test: c.test === 'exact' ? `exact, ${c.permutations} arrangements` : `${c.permutations} random permutations`,
+        test: c.test === 'exact' ? `exact, ${c.permutations} arrangements` : c.test === 'sequential' ? `sequential, settled after ${c.permutations} random permutations` : `${c.permutations} random permutations`,
         reason: c.reason,
       };
     });
