@@ -100,7 +100,8 @@ export async function driftAnswer(ds: DataSource, q: DriftQuery): Promise<DriftA
 /** `GET /api/analysis/sites`: per-site groups of the readings in force, sites in code order, and the ΔE00 and p-value matrices. */
 export async function siteComparisonAnswer(ds: DataSource, q: SiteComparisonQuery): Promise<SiteComparisonAnswer> {
   const character = await subjects(ds, q.accessionId, q.characterId);
-  const rows = await driftRows(ds, q.accessionId, q.characterId);
+  const all = await driftRows(ds, q.accessionId, q.characterId);
+  const rows = q.season === undefined ? all : all.filter((r) => r.season === q.season && r.seasonYear === q.seasonYear);
   const siteIds = [...new Set(rows.map((r) => r.siteId))];
   const sites = siteIds.length ? await ds.getRepository(Site).find({ where: siteIds.map((id) => ({ id })), order: { code: 'ASC' } }) : [];
   const result = compareSites(
@@ -111,6 +112,8 @@ export async function siteComparisonAnswer(ds: DataSource, q: SiteComparisonQuer
   return {
     accessionId: q.accessionId,
     characterId: q.characterId,
+    season: q.season ?? null,
+    seasonYear: q.seasonYear ?? null,
     sites: result.sites.map((g) => {
       const site = byId.get(g.siteId)!;
       return { siteId: g.siteId, siteCode: site.code, siteName: site.name, n: g.n, meanLab: labToTuple(g.meanLab), meanHex: displayHex(g.meanLab).hex, spreadDeltaE00: g.spreadDeltaE00 };

@@ -85,6 +85,9 @@ export interface SiteGroup {
 export interface SiteComparisonAnswer {
   accessionId: number;
   characterId: number;
+  /** The season group compared, when asked for one; null: every season together. */
+  season: string | null;
+  seasonYear: number | null;
   sites: SiteGroup[];
   /** deltaE00[i][j]: ΔE00 between the means of sites[i] and sites[j] (0 on the diagonal). */
   deltaE00: number[][];

@@ -59,6 +59,15 @@ describe('the drift overview', () => {
     assert.match(item.flags[0]!.reason, /p = 0\.029/);
   });
 
+  test('should compare sites within the season group the overview names', async () => {
+    const q = `accessionId=${ids.accession}&characterId=${ids.character}`;
+    const within = (await reviewer.get(`/api/analysis/sites?${q}&season=Dry&seasonYear=2025`).expect(200)).body;
+    assert.deepEqual([within.season, within.seasonYear, within.sites.map((s: { siteCode: string; n: number }) => `${s.siteCode} ${s.n}`)], ['Dry', 2025, ['OVN 4', 'OVS 4']]);
+    assert.deepEqual((await reviewer.get(`/api/analysis/sites?${q}&season=Wet&seasonYear=2025`).expect(200)).body.sites, []);
+    assertInvalidFields(await reviewer.get(`/api/analysis/sites?${q}&season=Dry`), 'seasonYear');
+    assertInvalidFields(await reviewer.get(`/api/analysis/sites?${q}&season=Dry&seasonYear=twenty`), 'seasonYear');
+  });
+
   test('should not call a season change a site difference', async () => {
     // South read again in Wet 2025, much lighter: a season change; north has no Wet 2025 readings,
     // so north and south never share that season group and nothing new is flagged between the sites.

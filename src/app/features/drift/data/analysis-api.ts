@@ -2,7 +2,7 @@ import { HttpClient, HttpParams } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
 import type { Observable } from 'rxjs';
 
-import type { DriftAnswer, SiteComparisonAnswer } from '../../../../../shared/api/analysis-answers.js';
+import type { DriftAnswer, DriftOverviewAnswer, SiteComparisonAnswer } from '../../../../../shared/api/analysis-answers.js';
 
 /** What the drift view is asked about; the site is optional (all sites when left out). */
 export interface DriftSubject {
@@ -23,9 +23,15 @@ export class AnalysisApi {
     return this.http.get<DriftAnswer>('/api/analysis/drift', { params });
   }
 
-  /** Per-site groups and the ΔE00 between every pair of site means. */
-  sites(subject: Omit<DriftSubject, 'siteId'>): Observable<SiteComparisonAnswer> {
-    const params = new HttpParams().set('accessionId', subject.accessionId).set('characterId', subject.characterId);
+  /** Per-site groups and the ΔE00 between every pair of site means; within one season group when one is given. */
+  sites(subject: Omit<DriftSubject, 'siteId'>, season?: { season: string; seasonYear: number } | null): Observable<SiteComparisonAnswer> {
+    let params = new HttpParams().set('accessionId', subject.accessionId).set('characterId', subject.characterId);
+    if (season) params = params.set('season', season.season).set('seasonYear', season.seasonYear);
     return this.http.get<SiteComparisonAnswer>('/api/analysis/sites', { params });
+  }
+
+  /** Every flagged accession × character of the collection, largest ΔE00 first. */
+  overview(): Observable<DriftOverviewAnswer> {
+    return this.http.get<DriftOverviewAnswer>('/api/analysis/overview');
   }
 }

@@ -8,6 +8,7 @@ import { ActivatedRoute, Router, RouterLink } from '@angular/router';
 import { CollectionApi } from '../../collection/data/collection-api';
 import { AbPlane } from '../components/ab-plane';
 import { ComparisonList } from '../components/comparison-list';
+import { DriftOverviewList } from '../components/drift-overview-list';
 import { DriftPicker } from '../components/drift-picker';
 import { DriftTabs } from '../components/drift-tabs';
 import { GroupsTable } from '../components/groups-table';
@@ -25,7 +26,7 @@ import { emptyReason, groupLabel, summaryWords, tooSmall } from '../data/drift-w
  */
 @Component({
   selector: 'hl-drift-page',
-  imports: [AbPlane, ComparisonList, DriftPicker, DriftTabs, GroupsTable, MatButtonModule, MatIconModule, MatProgressBarModule, MeanSwatches, RouterLink, TimeCharts],
+  imports: [AbPlane, ComparisonList, DriftOverviewList, DriftPicker, DriftTabs, GroupsTable, MatButtonModule, MatIconModule, MatProgressBarModule, MeanSwatches, RouterLink, TimeCharts],
   templateUrl: './drift-page.html',
   styleUrl: './drift-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -54,8 +54,13 @@ import { markedPairs } from '../data/site-matrix';
               <span>{{ marked() }} of {{ pairs() }} site {{ pairs() === 1 ? 'pair differs' : 'pairs differ' }} by ΔE00 {{ a.threshold }} or more.</span>
             }
           </p>
+          @if (season(); as s) {
+            <p class="hl-muted">Within {{ s.season }} {{ s.seasonYear }} only, so a season change cannot pass for a site difference. <a [routerLink]="[]" [queryParams]="{ season: null, seasonYear: null }" queryParamsHandling="merge">Show every season together</a></p>
+          } @else {
+            <p class="hl-muted">Every season together: a site read mostly in one season may differ by season rather than by site. The <a routerLink="/drift">Drift overview</a> compares sites within one season.</p>
+          }
           <h2>Site means</h2>
-          <hl-mean-swatches [swatches]="swatches()" caption="Mean colour at each site, all seasons together" />
+          <hl-mean-swatches [swatches]="swatches()" [caption]="season() ? 'Mean colour at each site in ' + season()!.season + ' ' + season()!.seasonYear : 'Mean colour at each site, all seasons together'" />
           @if (a.sites.length > 1) {
             <h2>Site by site</h2>
             <hl-site-matrix-table [answer]="a" />
@@ -90,9 +95,18 @@ export class SitesPage {
 
   protected readonly accessions = rxResource({ stream: () => this.collection.accessions() });
   protected readonly characters = rxResource({ stream: () => this.collection.characters() });
+  /** One season group from the URL (the overview's site differences open with it), else every season together. */
+  protected readonly season = computed(() => {
+    const p = this.params();
+    const year = Number(p['seasonYear']);
+    return typeof p['season'] === 'string' && p['season'] && Number.isInteger(year) ? { season: p['season'] as string, seasonYear: year } : null;
+  });
   protected readonly comparison = rxResource({
-    params: () => subjectOf(this.choice()) ?? undefined,
-    stream: ({ params }) => this.api.sites({ accessionId: params.accessionId, characterId: params.characterId }),
+    params: () => {
+      const subject = subjectOf(this.choice());
+      return subject ? { subject, season: this.season() } : undefined;
+    },
+    stream: ({ params }) => this.api.sites({ accessionId: params.subject.accessionId, characterId: params.subject.characterId }, params.season),
   });
 
   protected readonly answer = computed(() => (this.comparison.hasValue() ? this.comparison.value() : null));
@@ -107,6 +121,6 @@ export class SitesPage {
   });
 
   protected choose(change: Partial<DriftChoice>): void {
-    void this.router.navigate([], { relativeTo: this.route, queryParams: paramsFromChoice({ ...this.choice(), ...change, siteId: null }) });
+    void this.router.navigate([], { relativeTo: this.route, queryParams: { ...paramsFromChoice({ ...this.choice(), ...change, siteId: null }), season: null, seasonYear: null } });
   }
 }
