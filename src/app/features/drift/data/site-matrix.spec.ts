@@ -8,6 +8,8 @@ function site(siteId: number, siteCode: string) {
 const answer: SiteComparisonAnswer = {
   accessionId: 1,
   characterId: 1,
+  season: null,
+  seasonYear: null,
   sites: [site(1, 'NORTH'), site(2, 'RIVER'), site(3, 'HILL')],
   deltaE00: [
     [0, 1.8, 0.6],
