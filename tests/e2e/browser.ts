@@ -167,14 +167,23 @@ export async function choose(page: Page, label: string, option: string | RegExp)
  * Waits until a field shows `expected`: the app redraws after an event in its own time (zoneless
  * change detection), so a value read at once after a click may still be the old one.
  */
-export async function waitForValue(field: Locator, expected: string): Promise<void> {
+export async function waitForValue(field: Locator, expected: string | RegExp): Promise<void> {
   const element = await field.elementHandle();
+  const wanted = typeof expected === 'string' ? { exact: expected } : { source: expected.source, flags: expected.flags };
   const shown = await field
     .page()
-    .waitForFunction(([el, value]) => (el as HTMLInputElement).value === value, [element, expected] as const)
+    .waitForFunction(
+      ([el, w]) => {
+        const value = (el as HTMLInputElement).value;
+        return 'exact' in w ? value === w.exact : new RegExp(w.source, w.flags).test(value);
+      },
+      [element, wanted] as const,
+    )
     .then(() => true)
     .catch(() => false);
-  if (!shown) assert.equal(await field.inputValue(), expected, 'the field shows the expected value');
+  if (shown) return;
+  if (typeof expected === 'string') assert.equal(await field.inputValue(), expected, 'the field shows the expected value');
+  else assert.match(await field.inputValue(), expected, 'the field shows the expected value');
 }
 
 /** Saves a full-page screenshot under tests/e2e/screenshots/NAME.png. */

@@ -145,7 +145,8 @@ describe('a trainer runs a calibration session with three observers', () => {
     await trainer.getByRole('button', { name: /New session/ }).click();
     await trainer.getByLabel('Title').fill(TITLE);
     await trainer.getByLabel('Group agreement κ at least').fill(String(KAPPA_THRESHOLD));
-    assert.match(await trainer.locator('hl-session-form').innerText(), /Landis & Koch \(1977\) call agreement "substantial"[\s\S]*Paravina et al\. \(2015\)/);
+    // The words under the field follow the typed value: wait for them rather than read at once.
+    await trainer.locator('hl-session-form').filter({ hasText: /Landis & Koch \(1977\) call agreement "substantial"[\s\S]*Paravina et al\. \(2015\)/ }).waitFor();
     await trainer.getByRole('button', { name: 'Create session' }).click();
     await trainer.waitForURL(/\/calibration\/sessions\/\d+$/);
     sessionUrl = trainer.url();
@@ -268,7 +269,7 @@ describe('a trainer runs a calibration session with three observers', () => {
   test('should offer practice with ΔE00 and a verdict in words, and say it is no certification', async () => {
     const { page } = observers[0];
     await page.goto(`${app.url}/calibration/practice?seed=2026`);
-    assert.match(await page.locator('.hl-page').innerText(), /Practice on screen is not a certification/);
+    await page.locator('.hl-page').filter({ hasText: /Practice on screen is not a certification/ }).waitFor();
     await page.locator('hl-chip-chooser hl-swatch-grid [data-code]').first().click();
     await page.getByText('Step 2 of 2').waitFor();
     await page.getByRole('button', { name: 'Check my pick' }).click();

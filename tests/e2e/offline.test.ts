@@ -229,8 +229,7 @@ describe('offline on a phone: a photo reading kept on the phone, measured again 
     await page.getByRole('button', { name: 'Save reading' }).click();
     await page.getByText('Saved — waiting to send.').waitFor();
     await page.getByRole('link', { name: '1 reading waiting to send' }).click();
-    assert.match(await page.locator('hl-queued-reading').innerText(), /Provisional colour/);
-    assert.match(await page.locator('hl-queued-reading').innerText(), /Photo region/);
+    await page.locator('hl-queued-reading').filter({ hasText: /Provisional colour/ }).filter({ hasText: /Photo region/ }).waitFor();
     await screenshot(page, 'offline-photo-queue');
 
     await browser.setOffline(false);

@@ -6,7 +6,7 @@ import { readFileSync } from 'node:fs';
 import { after, before, describe, test } from 'node:test';
 import type { BrowserContext, Page } from 'playwright-core';
 import sharp from 'sharp';
-import { screenshot, signIn, navigateTo, choose, useApp } from './browser.js';
+import { choose, navigateTo, screenshot, signIn, useApp, waitForValue } from './browser.js';
 
 const app = useApp();
 
@@ -102,8 +102,9 @@ describe('readings on a phone: each method, the table, the detail and the export
 
   test('should keep accession, character and light for the next plant and record a chip picked by eye', async () => {
     await page.getByRole('button', { name: 'Next plant' }).click();
-    assert.match(await page.getByLabel('Accession').inputValue(), /HL-0001/, 'the accession is kept');
-    assert.equal(await page.getByRole('radio', { name: 'Open shade' }).getAttribute('aria-checked'), 'true', 'the light is kept');
+    // The form is redrawn for the next plant in the app's own time: wait for the kept values.
+    await waitForValue(page.getByLabel('Accession'), /HL-0001/);
+    await page.getByRole('radio', { name: 'Open shade', checked: true }).waitFor();
     await page.getByRole('radio', { name: /Chip by eye/ }).click();
     // A purple field chip (anthocyanin petioles), then one of its fine chips.
     const field = page.locator('hl-chip-picker .families hl-swatch-grid button.chip[aria-label*="purple"]').first();
@@ -123,7 +124,7 @@ describe('readings on a phone: each method, the table, the detail and the export
     await page.getByRole('radio', { name: /On-screen swatch/ }).click();
     await page.locator('form').getByText(/Screens are approximate/).waitFor();
     await page.getByLabel('Device colour picker').fill('#6a3a5e');
-    assert.match(await page.locator('hl-swatch-picker .hex').innerText(), /#6[0-9a-f]3[0-9a-f]5[0-9a-f]/);
+    await page.locator('hl-swatch-picker .hex').filter({ hasText: /#6[0-9a-f]3[0-9a-f]5[0-9a-f]/ }).waitFor();
     await screenshot(page, 'readings-form-swatch');
     ids['swatch'] = await saveReading(page);
   });
