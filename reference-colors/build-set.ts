@@ -1,11 +1,11 @@
 import { createChipIndex } from '../shared/colour/chip-index.js';
-import { colourName, HUE_FAMILY_ORDER, hueFamilyOfLch } from '../shared/colour/colour-name.js';
 import { OBSERVER_NAME, WHITE_NAME } from '../shared/colour/constants.js';
 import { displayHex } from '../shared/colour/display-hex.js';
 import { labFromTuple, labToLch, type Lab, type LabTuple } from '../shared/colour/lab.js';
 import type { ReferenceChip, ReferenceSetFile } from '../shared/colour/reference-set.js';
 import { fieldChipPositions } from './field-chips.js';
 import { fineLatticeChips } from './fine-lattice.js';
+import { v1HueFamilyOfLch, V1_HUE_FAMILY_ORDER, v1StoredName } from './v1-names.js';
 
 /** Identity of the set this generator writes. A new version is a new id and file, never an edit. */
 export const SET_IDENTITY = {
@@ -29,14 +29,14 @@ function roundLab(lab: Lab): LabTuple {
 }
 
 /**
- * Card order: hue family (HUE_FAMILY_ORDER), then lightness from light to dark, then chroma from
+ * Card order: v1's hue family (V1_HUE_FAMILY_ORDER), then lightness from light to dark, then chroma from
  * vivid to grey, then hue angle, then the raw numbers so that no two chips tie.
  */
 function cardOrder(p: LabTuple, q: LabTuple): number {
   const lp = labToLch(labFromTuple(p));
   const lq = labToLch(labFromTuple(q));
   return (
-    HUE_FAMILY_ORDER.indexOf(hueFamilyOfLch(lp)) - HUE_FAMILY_ORDER.indexOf(hueFamilyOfLch(lq)) ||
+    V1_HUE_FAMILY_ORDER.indexOf(v1HueFamilyOfLch(lp)) - V1_HUE_FAMILY_ORDER.indexOf(v1HueFamilyOfLch(lq)) ||
     q[0] - p[0] ||
     lq.c - lp.c ||
     lp.h - lq.h ||
@@ -52,7 +52,7 @@ function pad3(n: number): string {
 
 function chip(code: string, parent: string | null, lab: LabTuple): ReferenceChip {
   const display = displayHex(labFromTuple(lab));
-  return { code, parent, name: colourName(labFromTuple(lab)), lab, hex: display.hex, inGamut: display.inGamut };
+  return { code, parent, name: v1StoredName(labFromTuple(lab)), lab, hex: display.hex, inGamut: display.inGamut };
 }
 
 /** Removes repeats of the same rounded CIELAB, keeping the first. */

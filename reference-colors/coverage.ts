@@ -1,5 +1,7 @@
 import type { ChipIndex } from '../shared/colour/chip-index.js';
+import { isInSrgbGamut } from '../shared/colour/display-hex.js';
 import type { Lab } from '../shared/colour/lab.js';
+import { mulberry32 } from '../shared/random/mulberry32.js';
 import type { TissueRegion } from '../shared/colour/tissue-regions.js';
 
 /** How the coverage of a region is measured (our own sample size and seed). */
@@ -16,6 +18,34 @@ export interface CoverageStats {
   p50: number;
   p99: number;
   max: number;
+}
+
+/**
+ * The CIELAB box that holds the whole sRGB gamut (D65): L* 0–100, a* −90…100, b* −110…100 (sRGB
+ * reaches about a* −86…98, b* −108…95; computed with culori from the cube's corners and edges).
+ */
+const GAMUT_BOX = { a: [-90, 100], b: [-110, 100] } as const;
+
+/**
+ * A seeded sample uniform in CIELAB volume over the whole sRGB gamut: points drawn uniformly in
+ * the box around the gamut, kept when inside sRGB.
+ */
+export function sampleGamut(count: number, seed: number): Lab[] {
+  const random = mulberry32(seed);
+  const samples: Lab[] = [];
+  const [a0, a1] = GAMUT_BOX.a;
+  const [b0, b1] = GAMUT_BOX.b;
+  while (samples.length < count) {
+    const lab = { l: 100 * random(), a: a0 + random() * (a1 - a0), b: b0 + random() * (b1 - b0) };
+    if (isInSrgbGamut(lab)) samples.push(lab);
+  }
+  return samples;
+}
+
+/** Nearest-chip ΔE00 over any sample, summarised under `id`. */
+export function coverageOfSample(index: ChipIndex, id: string, samples: readonly Lab[]): CoverageStats {
+  const distances = samples.map((lab) => index.nearest(lab, 1)[0].deltaE).sort((x, y) => x - y);
+  return { regionId: id, samples: distances.length, p50: percentile(distances, 0.5), p99: percentile(distances, 0.99), max: distances[distances.length - 1] };
 }
 
 /** Nearest-rank percentile of sorted values: the ⌈p·n⌉-th smallest. */

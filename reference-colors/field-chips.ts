@@ -4,7 +4,7 @@ import { lowerBoundRaw } from '../shared/colour/delta-e-bound.js';
 import { deltaE00 } from '../shared/colour/delta-e.js';
 import { fromCulori, labToLch, type Lab } from '../shared/colour/lab.js';
 import { mulberry32 } from '../shared/random/mulberry32.js';
-import { inTissueRegion, TISSUE_REGIONS } from '../shared/colour/tissue-regions.js';
+import { inTissueRegion, TISSUE_REGIONS, type TissueRegion } from '../shared/colour/tissue-regions.js';
 
 /*
  * Field chips by seeded dart throwing (Poisson-disk sampling, Cook 1986): candidates are random
@@ -24,16 +24,24 @@ export const FIELD_CHIPS = {
   otherSpacing: 10.2,
 } as const;
 
+/** Settings of a dart-throwing run: seed, candidate count and the two spacings. */
+export interface FieldChipSettings {
+  seed: number;
+  candidates: number;
+  tissueSpacing: number;
+  otherSpacing: number;
+}
+
 const toLab65 = converter(LAB_MODE);
 
 /** Field-chip positions (CIELAB D65, unrounded), all inside the sRGB gamut, in acceptance order. */
-export function fieldChipPositions(settings = FIELD_CHIPS): Lab[] {
+export function fieldChipPositions(settings: FieldChipSettings = FIELD_CHIPS, regions: readonly TissueRegion[] = TISSUE_REGIONS): Lab[] {
   const random = mulberry32(settings.seed);
   const kept: { lab: Lab; c: number }[] = [];
   for (let n = 0; n < settings.candidates; n++) {
     // Three draws per candidate, in a fixed order, keep the sequence reproducible.
     const lab = fromCulori(toLab65({ mode: 'rgb', r: random(), g: random(), b: random() }));
-    const tissue = TISSUE_REGIONS.some((region) => inTissueRegion(labToLch(lab), region));
+    const tissue = regions.some((region) => inTissueRegion(labToLch(lab), region));
     const spacing = tissue ? settings.tissueSpacing : settings.otherSpacing;
     const c = Math.hypot(lab.a, lab.b);
     const clear = kept.every(

@@ -75,57 +75,27 @@ export const CHIP_INDEX_LEAF_SIZE = 8;
  */
 export const CHIP_INDEX_BOUND_SLACK = 1e-9;
 
-/** Below this C*ab a colour is named as a grey and belongs to no hue family (our own). */
+/** Below this C*ab a colour is named "ash" and belongs to no hue sector (our own). */
 export const NEUTRAL_CHROMA = 5;
 
 /**
- * Hue families by h°ab (CIELAB D65), in the order the field card lists them; each runs from its
- * `from` angle up to the next family's. Boundaries are our own, placed from where sRGB primaries
- * and everyday colour words fall in CIELAB (e.g. sRGB red at 40°, yellow at 102°, green at 136°,
- * blue at 306°, magenta at 328°).
+ * Hue sectors by h°ab (CIELAB D65), named with words from plants, in the order the field card
+ * lists them; each runs from its `from` angle up to the next sector's, and the last wraps past
+ * 360° to the first. Words and boundaries are our own (reference-colors/README.md gives the
+ * reasoning), placed from where tissue colours and sRGB primaries fall: sRGB red at 40°, orange
+ * at 60°, yellow at 103°, green at 136°, cyan at 196°, blue at 306°, magenta at 328° (culori).
  */
-export const HUE_FAMILIES = [
-  { id: 'red', from: 5 },
-  { id: 'orange', from: 42 },
-  { id: 'yellow-orange', from: 70 },
-  { id: 'yellow', from: 85 },
-  { id: 'yellow-green', from: 105 },
-  { id: 'green', from: 128 },
-  { id: 'blue-green', from: 165 },
-  { id: 'blue', from: 215 },
-  { id: 'purple', from: 305 },
-  { id: 'red-purple', from: 335 },
+export const HUE_SECTORS = [
+  { id: 'wine', from: 350 },
+  { id: 'chilli', from: 30 },
+  { id: 'rust', from: 50 },
+  { id: 'straw', from: 72 },
+  { id: 'lemon', from: 95 },
+  { id: 'lime', from: 112 },
+  { id: 'leaf', from: 130 },
+  { id: 'agave', from: 160 },
+  { id: 'flax', from: 215 },
+  { id: 'indigo', from: 270 },
+  { id: 'violet', from: 300 },
+  { id: 'plum', from: 322 },
 ] as const;
-
-/** Lightness words by L* upper bound (exclusive), darkest first (our own). */
-export const LIGHTNESS_WORDS = [
-  { below: 20, word: 'very deep' },
-  { below: 35, word: 'deep' },
-  { below: 50, word: 'mid' },
-  { below: 65, word: 'light' },
-  { below: 80, word: 'pale' },
-  { below: Infinity, word: 'very pale' },
-] as const;
-
-/** Chroma words by C*ab upper bound (exclusive), from `NEUTRAL_CHROMA` up (our own). */
-export const CHROMA_WORDS = [
-  { below: 15, word: 'greyish' },
-  { below: 30, word: 'muted' },
-  { below: 50, word: 'moderate' },
-  { below: 70, word: 'strong' },
-  { below: Infinity, word: 'vivid' },
-] as const;
-
-/**
- * Everyday words for dark hues (our own): an orange or yellow-orange darker than L* 50 and below
- * C*ab 50 is called "brown", a yellow darker than L* 50 "olive" — the words a recorder uses for
- * corm skins and scars and for old leaves.
- */
-export const DARK_HUE_WORDS = [
-  { families: ['orange', 'yellow-orange'], lightnessBelow: 50, chromaBelow: 50, word: 'brown' },
-  { families: ['yellow'], lightnessBelow: 50, chromaBelow: 50, word: 'olive' },
-] as const;
-
-/** Greys darker than this L* are "near-black", lighter than `NEAR_WHITE_L` "near-white" (our own). */
-export const NEAR_BLACK_L = 10;
-export const NEAR_WHITE_L = 96;

@@ -28,6 +28,19 @@ export const TISSUE_REGIONS: readonly TissueRegion[] = [
   { id: 'skin-scar', label: 'browns of skins and scars', l: [15, 60], c: [5, 45], h: [35, 80] },
 ];
 
+/**
+ * Version 2's tissue regions: v1's, widened where an independent sample of tissue colours fell
+ * outside them — near-neutral whites and greys of corm flesh and roots (C*ab below 5, L* 55–98),
+ * leaf greens up to C*ab 70, and anthocyanin violets from h°ab 275. Our own definitions.
+ */
+export const TISSUE_REGIONS_V2: readonly TissueRegion[] = [
+  { id: 'near-neutral', label: 'near-neutral whites and greys of corm flesh and roots', l: [55, 98], c: [0, 5], h: [0, 360] },
+  { id: 'chlorophyll', label: 'chlorophyll greens and lime greens', l: [15, 80], c: [5, 70], h: [95, 155] },
+  { id: 'anthocyanin', label: 'anthocyanin pinks, reds, plums, purples and violets', l: [10, 85], c: [5, 60], h: [275, 45] },
+  { id: 'corm-flesh', label: 'creams and yellows of corm flesh', l: [65, 97], c: [3, 50], h: [65, 105] },
+  { id: 'skin-scar', label: 'browns of skins and scars', l: [15, 60], c: [5, 45], h: [35, 80] },
+];
+
 /** Whether hue `h` lies on the arc [from, to), wrapping through 0° when to < from. */
 export function onHueArc(h: number, [from, to]: readonly [number, number]): boolean {
   const x = ((h % 360) + 360) % 360;
