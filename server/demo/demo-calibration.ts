@@ -30,7 +30,7 @@ const CLOSED_SPECIMENS: readonly { label: string; lab: Lab }[] = [
 
 const OPEN_SPECIMENS: readonly { label: string; lab: Lab }[] = [
   { label: '1 — leaf blade, lower surface, pale green', lab: { l: 62, a: -14, b: 24 } },
-  { label: '2 — petiole stripe, red-purple', lab: { l: 38, a: 30, b: -2 } },
+  { label: '2 — petiole stripe, plum', lab: { l: 38, a: 30, b: -2 } },
   { label: '3 — sap, milky white', lab: { l: 90, a: 0, b: 6 } },
 ];
 

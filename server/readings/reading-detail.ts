@@ -8,6 +8,7 @@ import { AppError } from '../core/app-error.js';
 import type { ReferenceSets } from '../reference-sets/reference-sets.js';
 import { toReadingDto } from './reading-list.js';
 import { Reading } from './reading.entity.js';
+import { nameBestChips } from '../reference-sets/chip-names.js';
 
 /** How many chips the detail lists (the same strip of five a photo sample shows). */
 const DETAIL_MATCHES = 5;
@@ -68,6 +69,7 @@ export async function getReadingDetail(deps: { ds: DataSource; referenceSets: Re
   const referenceSets = deps.referenceSets;
   const r = await m.findOne(Reading, { where: { id }, relations: { accession: true, plant: true, character: true, site: true, observer: true, photo: true } });
   if (!r) throw AppError.notFound(`There is no reading ${id}.`);
+  await nameBestChips(deps.ds, [r]);
   const match = await referenceSets.match({ l: r.l, a: r.a, b: r.b }, DETAIL_MATCHES, r.setId);
   return { ...toReadingDto(r), matches: match.matches, between: match.between, provenance: provenanceOf(r), versions: await chainOf(m, r), history: await historyOf(m, id) };
 }

@@ -10,6 +10,7 @@ import { labToLch } from '../../shared/colour/lab.js';
 import { spreadsheetSafe } from '../core/spreadsheet-safe.js';
 import type { Reading } from './reading.entity.js';
 import { readingsQuery } from './reading-list.js';
+import { nameBestChips } from '../reference-sets/chip-names.js';
 
 /** Rows read per query while exporting: bounded memory whatever the filters select. */
 const BATCH = 500;
@@ -88,7 +89,7 @@ const HEX_COLUMN = EXPORT_COLUMNS.findIndex((c) => c.header === 'hex');
 async function* selectedReadings(ds: DataSource, q: ListReadingsQuery): AsyncGenerator<Reading> {
   for (let offset = 0; ; offset += BATCH) {
     const rows = await readingsQuery(ds, q).offset(offset).limit(BATCH).getMany();
-    yield* rows;
+    yield* await nameBestChips(ds, rows);
     if (rows.length < BATCH) return;
   }
 }

@@ -6,6 +6,7 @@ import type { ListReadingsQuery } from '../../shared/api/readings.js';
 import { labToLch } from '../../shared/colour/lab.js';
 import { verdictFor } from '../../shared/colour/verdict.js';
 import { Reading } from './reading.entity.js';
+import { nameBestChips } from '../reference-sets/chip-names.js';
 
 /** The filters of a list query (the exports take these without page and page size). */
 export type ReadingFilters = Omit<ListReadingsQuery, 'page' | 'pageSize'>;
@@ -66,7 +67,7 @@ export async function listReadings(ds: DataSource, q: ListReadingsQuery): Promis
   const qb = readingsQuery(ds, q);
   // Every join is to-one, so plain OFFSET/LIMIT pages correctly (no DISTINCT sub-query needed).
   const [rows, total] = await Promise.all([qb.clone().offset((q.page - 1) * q.pageSize).limit(q.pageSize).getMany(), qb.clone().getCount()]);
-  return { items: rows.map(toReadingDto), total };
+  return { items: (await nameBestChips(ds, rows)).map(toReadingDto), total };
 }
 
 /** The API shape of a reading (relations accession, plant, character, site and observer loaded). */

@@ -1,7 +1,7 @@
 import PDFDocument from 'pdfkit';
-import type { HueFamily } from '../../shared/colour/colour-name.js';
+import { sectorLabel, type HueSector } from '../../shared/colour/chip-name.js';
 import { displayHex } from '../../shared/colour/display-hex.js';
-import { fieldChipsByFamily } from '../../shared/colour/field-groups.js';
+import { fieldChipsBySector } from '../../shared/colour/field-groups.js';
 import type { ChipDto } from '../../shared/api/reference-set-answers.js';
 import type { LoadedSet } from './reference-sets.js';
 
@@ -13,14 +13,15 @@ export const PRINT_CAUTION =
 /** Card geometry in PDF points (1/72 in); A4 is 595.28 × 841.89. Our own layout. */
 const LAYOUT = {
   margin: 28,
-  /** Width of the hue-family column left of each group. */
-  familyColumn: 64,
+  /** Width of the hue-sector column left of each group. */
+  familyColumn: 58,
   /** Each chip's cell: swatch plus its code below. */
-  cell: { width: 26, height: 32 },
-  swatch: 22,
-  codeSize: 5.4,
-  /** Space between hue-family groups. */
-  groupGap: 5,
+  cell: { width: 26, height: 31 },
+  swatch: 21,
+  /** Codes print at 7 pt at least, the smallest size read at arm's length in the field (common practice, no source). */
+  codeSize: 7,
+  /** Space between hue-sector groups. */
+  groupGap: 4,
   /** Height kept free at the foot of the page for the patches and the caution. */
   footer: 104,
 } as const;
@@ -60,7 +61,7 @@ export function renderFieldCard(set: LoadedSet): Promise<Buffer> {
     doc.on('end', () => resolve(Buffer.concat(parts)));
     doc.on('error', reject);
   });
-  const groups = fieldChipsByFamily(set.chips);
+  const groups = fieldChipsBySector(set.chips);
   let y = drawHeader(doc, set, groups.reduce((n, g) => n + g.chips.length, 0));
   for (const group of groups) y = drawGroup(doc, group.family, group.chips, y);
   drawFooter(doc, summary.id, y);
@@ -86,7 +87,7 @@ function drawHeader(doc: PDFKit.PDFDocument, set: LoadedSet, fieldCount: number)
   return doc.y + 8;
 }
 
-function drawGroup(doc: PDFKit.PDFDocument, family: HueFamily, chips: ChipDto[], top: number): number {
+function drawGroup(doc: PDFKit.PDFDocument, sector: HueSector, chips: ChipDto[], top: number): number {
   const { margin, familyColumn, cell, swatch, codeSize, groupGap, footer } = LAYOUT;
   const gridLeft = margin + familyColumn;
   const perRow = Math.floor((doc.page.width - margin - gridLeft) / cell.width);
@@ -96,12 +97,12 @@ function drawGroup(doc: PDFKit.PDFDocument, family: HueFamily, chips: ChipDto[],
     doc.addPage();
     y = margin;
   }
-  doc.font('Helvetica-Bold').fontSize(8).fillColor('#000000').text(family === 'neutral' ? 'greys' : family, margin, y + swatch / 2 - 4, { width: familyColumn - 6 });
+  doc.font('Helvetica-Bold').fontSize(8).fillColor('#000000').text(sectorLabel(sector), margin, y + 2, { width: familyColumn - 6 });
   chips.forEach((chip, i) => {
     const x = gridLeft + (i % perRow) * cell.width;
     const rowTop = y + Math.floor(i / perRow) * cell.height;
     doc.lineWidth(0.4).rect(x, rowTop, swatch, swatch).fillAndStroke(chip.hex, OUTLINE);
-    doc.font('Helvetica').fontSize(codeSize).fillColor('#000000').text(chip.code, x - 2, rowTop + swatch + 1.5, { width: swatch + 4, align: 'center', lineBreak: false });
+    doc.font('Helvetica').fontSize(codeSize).fillColor('#000000').text(chip.code, x - 3, rowTop + swatch + 1, { width: swatch + 6, align: 'center', lineBreak: false });
   });
   return y + rows * cell.height + groupGap;
 }

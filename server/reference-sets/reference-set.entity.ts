@@ -46,3 +46,21 @@ export class Chip {
   @Column('boolean') inGamut: boolean;
   @Column('varchar', { length: 5 }) kind: ChipKind;
 }
+
+/**
+ * One admin's choice of the set new readings are matched against. Choices are only added, never
+ * changed: the latest is the current set, and the rows are the history of which set was current
+ * when. With no choice made, the first set loaded stays current, so a new set file never changes
+ * matching under recorders' feet.
+ */
+@Entity('reference_set_choice')
+export class ReferenceSetChoice {
+  @PrimaryGeneratedColumn('increment') id: number;
+  @ManyToOne(() => ReferenceSet, { nullable: false, onDelete: 'RESTRICT' })
+  @JoinColumn({ name: 'setId' })
+  set: ReferenceSet;
+  @Column('varchar', { length: 20 }) setId: string;
+  @Column('datetime') chosenAt: Date;
+  /** The admin who chose it. */
+  @Column('integer', { nullable: true }) chosenById: number | null;
+}

@@ -1,8 +1,8 @@
 import { Router, type Response } from 'express';
-import { MATCH_K_DEFAULT, matchBody, REFERENCE_SET_ID_PATTERN } from '../../shared/api/reference-sets.js';
+import { chooseCurrentSetBody, MATCH_K_DEFAULT, matchBody, REFERENCE_SET_ID_PATTERN } from '../../shared/api/reference-sets.js';
 import { labFromTuple } from '../../shared/colour/lab.js';
 import { parseHex } from '../../shared/colour/parse.js';
-import { signedIn } from '../core/access.js';
+import { actorOf, allow, signedIn } from '../core/access.js';
 import { AppError } from '../core/app-error.js';
 import type { AppContext } from '../core/context.js';
 import { parse } from '../core/validate.js';
@@ -26,6 +26,14 @@ export function referenceSetRoutes(ctx: AppContext): Router {
   const router = Router();
 
   router.get('/reference-sets', signedIn, async (_req, res) => {
+    res.json(await ctx.referenceSets.list());
+  });
+
+  // Which set is current is an admin's decision, taken once for the whole collection: switching
+  // mid-season splits readings across two sets, so it is never automatic.
+  router.put('/reference-sets/current', allow('admin'), async (req, res) => {
+    const body = parse(chooseCurrentSetBody, req.body);
+    await ctx.referenceSets.choose(body.setId, actorOf(req));
     res.json(await ctx.referenceSets.list());
   });
 

@@ -3,21 +3,24 @@ import type { ChipDto, MatchAnswer, ReferenceSetSummary } from '../../shared/api
 import type { Lab } from '../../shared/colour/lab.js';
 import { createMatcher, type Matcher } from '../../shared/colour/matcher.js';
 import { matchAnswer } from '../../shared/api/match-answer.js';
+import { chipNames } from '../../shared/colour/chip-name.js';
+import { recordAudit, type Actor } from '../audit/audit.js';
 import { AppError } from '../core/app-error.js';
-import { Chip, ReferenceSet } from './reference-set.entity.js';
+import { Chip, ReferenceSet, ReferenceSetChoice } from './reference-set.entity.js';
 
 /** A stored set with all its chips in code order and its index, ready to match. */
 export interface LoadedSet {
   /** The set's summary; whether it is current is asked of `ReferenceSets.list()`, as a newer set may arrive. */
   summary: Omit<ReferenceSetSummary, 'current'>;
   chips: readonly ChipDto[];
+  /** The chips by code. */
+  byCode: ReadonlyMap<string, ChipDto>;
   matcher: Matcher<ChipDto>;
 }
 
 interface ChipRow {
   code: string;
   parent: string | null;
-  name: string;
   l: number;
   a: number;
   b: number;
@@ -34,7 +37,28 @@ export class ReferenceSets {
 
   constructor(private readonly ds: DataSource) {}
 
-  /** Every stored set, newest version first; the newest is `current`. */
+  /**
+   * The id of the set new readings are matched against: the latest admin choice, or, while no
+   * one has chosen, the first set loaded (lowest version); null when no set is stored.
+   */
+  async currentId(): Promise<string | null> {
+    const [choice] = await this.ds.getRepository(ReferenceSetChoice).find({ order: { id: 'DESC' }, take: 1 });
+    if (choice) return choice.setId;
+    const [first] = await this.ds.getRepository(ReferenceSet).find({ order: { version: 'ASC' }, take: 1 });
+    return first?.id ?? null;
+  }
+
+  /** Makes a stored set the current one (added as a new choice, audited); 404 when there is no such set. */
+  async choose(setId: string, actor: Actor): Promise<void> {
+    await this.ds.transaction(async (m) => {
+      if (!(await m.findOneBy(ReferenceSet, { id: setId }))) throw AppError.notFound(`There is no reference set ${setId}.`);
+      const before = await m.find(ReferenceSetChoice, { order: { id: 'DESC' }, take: 1 });
+      await m.insert(ReferenceSetChoice, { setId, chosenAt: new Date(), chosenById: actor.id });
+      await recordAudit(m, actor, 'reference-set.current', setId, { before: before[0]?.setId ?? null });
+    });
+  }
+
+  /** Every stored set, newest version first, with the current one marked (`currentId`). */
   async list(): Promise<ReferenceSetSummary[]> {
     const sets = await this.ds.getRepository(ReferenceSet).find({ order: { version: 'DESC' } });
     const counts: { setId: string; kind: string; n: number }[] = await this.ds
@@ -45,7 +69,8 @@ export class ReferenceSets {
       .addGroupBy('chip.kind')
       .getRawMany();
     const count = (setId: string, kind: string) => Number(counts.find((c) => c.setId === setId && c.kind === kind)?.n ?? 0);
-    return sets.map((s, i) => ({
+    const currentId = await this.currentId();
+    return sets.map((s) => ({
       id: s.id,
       name: s.name,
       version: s.version,
@@ -53,7 +78,7 @@ export class ReferenceSets {
       observer: s.observer,
       fieldChips: count(s.id, 'field'),
       fineChips: count(s.id, 'fine'),
-      current: i === 0,
+      current: s.id === currentId,
     }));
   }
 
@@ -69,11 +94,11 @@ export class ReferenceSets {
     return set;
   }
 
-  /** The set new readings are matched against: the newest version. */
+  /** The set new readings are matched against (`currentId`). */
   async current(): Promise<LoadedSet> {
-    const newest = await this.ds.getRepository(ReferenceSet).find({ order: { version: 'DESC' }, take: 1 });
-    if (!newest[0]) throw new AppError(503, 'No reference set', 'No reference set is loaded; the server loads reference-colors/ at start-up.', undefined, 'no-reference-set');
-    return this.get(newest[0].id);
+    const id = await this.currentId();
+    if (id === null) throw new AppError(503, 'No reference set', 'No reference set is loaded; the server loads reference-colors/ at start-up.', undefined, 'no-reference-set');
+    return this.get(id);
   }
 
   /** The `k` chips nearest a CIELAB colour and where it falls between the two nearest, in the set given or the current one. */
@@ -90,11 +115,14 @@ export class ReferenceSets {
     const rows: ChipRow[] = await this.ds
       .getRepository(Chip)
       .createQueryBuilder('chip')
-      .select(['chip.code AS code', 'chip.parent AS parent', 'chip.name AS name', 'chip.l AS l', 'chip.a AS a', 'chip.b AS b', 'chip.hex AS hex', 'chip.inGamut AS inGamut'])
+      .select(['chip.code AS code', 'chip.parent AS parent', 'chip.l AS l', 'chip.a AS a', 'chip.b AS b', 'chip.hex AS hex', 'chip.inGamut AS inGamut'])
       .where('chip.setId = :id', { id })
       .orderBy('chip.code', 'ASC')
       .getRawMany();
-    const chips: ChipDto[] = rows.map((r) => ({ code: r.code, parent: r.parent, name: r.name, lab: [r.l, r.a, r.b], hex: r.hex, inGamut: Boolean(r.inGamut) }));
-    return { summary, chips, matcher: createMatcher(chips) };
+    // A name is derived data: every set's chips are named by today's scheme from their CIELAB and
+    // their parent's, whatever words the file stored (v1's file keeps its own, never shown).
+    const names = chipNames(rows.map((r) => ({ code: r.code, parent: r.parent, lab: [r.l, r.a, r.b] as const })));
+    const chips: ChipDto[] = rows.map((r, i) => ({ code: r.code, parent: r.parent, name: names[i]!, lab: [r.l, r.a, r.b], hex: r.hex, inGamut: Boolean(r.inGamut) }));
+    return { summary, chips, byCode: new Map(chips.map((c) => [c.code, c])), matcher: createMatcher(chips) };
   }
 }

@@ -16,6 +16,7 @@ import { Reading } from '../readings/reading.entity.js';
 import { listReadings } from '../readings/readings.js';
 import { noticeKindOf, noticeMessage, reviewNoticeMail, type ReviewedReading } from './review-mail.js';
 import { Notification, Review } from './review.entity.js';
+import { nameBestChips } from '../reference-sets/chip-names.js';
 
 /** The status each decision puts a reading in. */
 export const STATUS_AFTER: Readonly<Record<ReviewDecision, ReadingStatus>> = {
@@ -70,6 +71,8 @@ export async function reviewReading(deps: ReviewDeps, actor: Actor, reviewer: Us
       deps.logError(err);
     }
   }
+  // After the transaction: the derived chip name is set in memory only, never saved.
+  await nameBestChips(deps.ds, [reading]);
   return { review: toReviewDto(review, reviewer.name), reading: toReadingDto(reading), mailed };
 }
 

@@ -42,3 +42,9 @@ export const matchBody = z
     ctx.addIssue({ code: 'custom', path: ['lab'], message });
   });
 export type MatchBody = z.infer<typeof matchBody>;
+
+/** `PUT /api/reference-sets/current`: which stored set new readings are matched against. */
+export const chooseCurrentSetBody = z.object({
+  setId: z.string({ message: 'must be a reference-set id like v2' }).regex(REFERENCE_SET_ID_PATTERN, { message: 'must be a reference-set id like v2' }),
+});
+export type ChooseCurrentSetBody = z.infer<typeof chooseCurrentSetBody>;

@@ -12,6 +12,14 @@ export function readSetV1(): ReferenceSetFile {
   return JSON.parse(readFileSync(SET_V1_FILE, 'utf8')) as ReferenceSetFile;
 }
 
+/** The committed set v2. */
+export const SET_V2_FILE = path.join(REFERENCE_COLORS_DIR, 'reference-set-v2.json');
+
+/** The committed set v2 as parsed JSON (a fresh copy each call). */
+export function readSetV2(): ReferenceSetFile {
+  return JSON.parse(readFileSync(SET_V2_FILE, 'utf8')) as ReferenceSetFile;
+}
+
 /** A supertest parser that keeps the body as bytes (PDFs). */
 export function bytes(res: Response, done: (err: Error | null, body: Buffer) => void): void {
   const parts: Buffer[] = [];

@@ -39,16 +39,16 @@ describe('loading reference sets from reference-colors/', () => {
     const warnings: string[] = [];
     const report = await loadReferenceSets(h.ds, { ...quiet, warn: (m) => warnings.push(m) });
     assert.deepEqual(report.added, []);
-    assert.deepEqual(report.unchanged, ['v1']);
+    assert.deepEqual(report.unchanged, ['v1', 'v2']);
     assert.deepEqual(warnings, []);
     assert.deepEqual(await rowCounts(h.ds), before);
   });
 
   test('should record the file hash and an audit event for the set it loaded', async () => {
-    const [set] = await h.ds.getRepository(ReferenceSet).find();
-    assert.match(set!.fileSha256, /^[0-9a-f]{64}$/);
-    const events = await h.ds.query(`SELECT subject FROM audit_event WHERE action = 'reference-set.loaded'`);
-    assert.deepEqual(events, [{ subject: 'v1' }]);
+    const sets = await h.ds.getRepository(ReferenceSet).find();
+    assert.ok(sets.every((set) => /^[0-9a-f]{64}$/.test(set.fileSha256)));
+    const events = await h.ds.query(`SELECT subject FROM audit_event WHERE action = 'reference-set.loaded' ORDER BY id`);
+    assert.deepEqual(events, [{ subject: 'v1' }, { subject: 'v2' }]);
   });
 
   test('should never rewrite a stored set when its file changes: the stored chips stay, with a warning', async () => {
@@ -72,23 +72,28 @@ describe('loading reference sets from reference-colors/', () => {
     rmSync(path.join(scratch, 'reference-set-v1.json'));
   });
 
-  test('should add a new version as a new set beside the old one, and make it current', async () => {
+  test('should add a new version as a new set beside the old ones, current once an admin chooses it', async () => {
     const v1 = readSetV1();
     const field = v1.chips.filter((c) => c.parent === null).slice(0, 3);
     const fine = v1.chips.filter((c) => c.parent === field[0]!.code).slice(0, 2);
-    writeSet('reference-set-v2test.json', { ...v1, id: 'v2test', version: 2, name: 'A test set, version 2', chips: [field[0], ...fine, field[1], field[2]] });
+    writeSet('reference-set-v3test.json', { ...v1, id: 'v3test', version: 3, name: 'A test set, version 3', chips: [field[0], ...fine, field[1], field[2]] });
     const v1Before = await storedChips(h, 'v1');
 
     const report = await loadReferenceSets(h.ds, { ...quiet, dir: scratch });
 
-    assert.deepEqual(report.added, ['v2test']);
-    assert.equal(await h.ds.getRepository(Chip).countBy({ setId: 'v2test' }), 5);
+    assert.deepEqual(report.added, ['v3test']);
+    assert.equal(await h.ds.getRepository(Chip).countBy({ setId: 'v3test' }), 5);
     assert.equal(await storedChips(h, 'v1'), v1Before);
     const recorder = await signedInAs(h, 'recorder');
-    const sets = (await recorder.get('/api/reference-sets').expect(200)).body as ReferenceSetSummary[];
-    assert.deepEqual(sets.map((s) => [s.id, s.current, s.fieldChips, s.fineChips]), [['v2test', true, 3, 2], ['v1', false, 189, 11530]]);
+    const listed = async () => ((await recorder.get('/api/reference-sets').expect(200)).body as ReferenceSetSummary[]).map((s) => [s.id, s.current, s.fieldChips, s.fineChips]);
+    const v2 = await h.ds.getRepository(Chip).countBy({ setId: 'v2', kind: 'field' });
+    const v2Fine = await h.ds.getRepository(Chip).countBy({ setId: 'v2', kind: 'fine' });
+    // A new file does not change matching by itself: v1 stays current until an admin chooses.
+    assert.deepEqual(await listed(), [['v3test', false, 3, 2], ['v2', false, v2, v2Fine], ['v1', true, 189, 11530]]);
+    await (await signedInAs(h, 'admin')).put('/api/reference-sets/current', { setId: 'v3test' }).expect(200);
+    assert.deepEqual(await listed(), [['v3test', true, 3, 2], ['v2', false, v2, v2Fine], ['v1', false, 189, 11530]]);
     const answer = (await recorder.post('/api/match', { lab: fine[0]!.lab }).expect(200)).body as { setId: string; matches: { code: string }[] };
-    assert.equal(answer.setId, 'v2test', 'matching uses the current set');
+    assert.equal(answer.setId, 'v3test', 'matching uses the current set');
     assert.equal(answer.matches[0]!.code, fine[0]!.code);
     assert.equal(answer.matches.length, 5);
     const againstV1 = (await recorder.post('/api/match', { lab: fine[0]!.lab, setId: 'v1' }).expect(200)).body as { setId: string };

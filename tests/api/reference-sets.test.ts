@@ -3,28 +3,34 @@ import assert from 'node:assert/strict';
 import { ROLES } from '../../shared/api/roles.js';
 import type { ChipDto, ReferenceSetSummary } from '../../shared/api/reference-set-answers.js';
 import type { ReferenceSetFile } from '../../shared/colour/reference-set.js';
+import { chipNames } from '../../shared/colour/chip-name.js';
+import { AuditEvent } from '../../server/audit/audit-event.entity.js';
 import { PRINT_CAUTION } from '../../server/reference-sets/field-card.js';
-import { Chip } from '../../server/reference-sets/reference-set.entity.js';
+import { Chip, ReferenceSetChoice } from '../../server/reference-sets/reference-set.entity.js';
 import { assertProblem } from './assert-problem.js';
 import { Client, signedInAs, startHarness, type Harness } from './harness.js';
-import { bytes, readSetV1 } from './reference-set-file.js';
+import { bytes, readSetV1, readSetV2 } from './reference-set-file.js';
 
 describe('reference sets: list, chips and the printable card', () => {
   let h: Harness;
   let recorder: Client;
   let file: ReferenceSetFile;
+  let fileV2: ReferenceSetFile;
 
   before(async () => {
     h = await startHarness();
     recorder = await signedInAs(h, 'recorder');
     file = readSetV1();
+    fileV2 = readSetV2();
   });
   after(() => h.close());
 
-  test('should list set v1 as the current set with its field and fine chip counts from the file', async () => {
+  test('should list both sets, newest first, with v1 current while no admin has chosen, and counts from the files', async () => {
     const sets = (await recorder.get('/api/reference-sets').expect(200)).body as ReferenceSetSummary[];
     const fieldChips = file.chips.filter((c) => c.parent === null).length;
+    const fieldChipsV2 = fileV2.chips.filter((c) => c.parent === null).length;
     assert.deepEqual(sets, [
+      { id: 'v2', name: fileV2.name, version: 2, white: 'D65', observer: '2°', fieldChips: fieldChipsV2, fineChips: fileV2.chips.length - fieldChipsV2, current: false },
       { id: 'v1', name: file.name, version: 1, white: 'D65', observer: '2°', fieldChips, fineChips: file.chips.length - fieldChips, current: true },
     ]);
   });
@@ -36,11 +42,38 @@ describe('reference sets: list, chips and the printable card', () => {
     assert.equal(stored.kind, 'fine');
   });
 
-  test('should send all chips of the set in one answer, exactly as the file has them', async () => {
+  test('should send all chips of the set in one answer as the file has them, named by today\'s scheme', async () => {
     const res = await recorder.get('/api/reference-sets/v1/chips').expect(200);
     const chips = res.body as ChipDto[];
     assert.equal(chips.length, file.chips.length);
-    assert.deepEqual(chips, file.chips);
+    const names = chipNames(file.chips);
+    assert.deepEqual(chips, file.chips.map((c, i) => ({ ...c, name: names[i] })));
+    // The v1 file keeps the words it was published with; none of them reaches a client.
+    assert.ok(file.chips.some((c) => /greyish|moderate/.test(c.name)), 'the v1 file still holds its stored names');
+    assert.ok(chips.every((c) => !/very pale|greyish|moderate|strong|vivid|deep|-/.test(c.name)), 'an old word reached the answer');
+    const v2 = (await recorder.get('/api/reference-sets/v2/chips').expect(200)).body as ChipDto[];
+    assert.deepEqual(v2, fileV2.chips, 'v2 is served exactly as its file has it');
+  });
+
+  test('should let an admin choose the current set, audited, and match against it; others are refused', async () => {
+    const admin = await signedInAs(h, 'admin');
+    assertProblem(await recorder.put('/api/reference-sets/current', { setId: 'v2' }), 403);
+    const bad = await admin.put('/api/reference-sets/current', { setId: 'v 2' });
+    assertProblem(bad, 400);
+    assert.match(JSON.stringify(bad.body), /setId/);
+    assertProblem(await admin.put('/api/reference-sets/current', { setId: 'v9' }), 404);
+    assert.equal(await h.ds.getRepository(ReferenceSetChoice).count(), 0, 'a refused choice wrote nothing');
+    const sets = (await admin.put('/api/reference-sets/current', { setId: 'v2' }).expect(200)).body as ReferenceSetSummary[];
+    assert.deepEqual(sets.map((s) => [s.id, s.current]), [['v2', true], ['v1', false]]);
+    const match = await recorder.post('/api/match', { lab: [50, -20, 30] }).expect(200);
+    assert.equal(match.body.setId, 'v2');
+    assert.ok(Number(match.body.matches[0].code.slice(2, 5)) > 189, 'a v2 code');
+    const v1Match = await recorder.post('/api/match', { lab: [50, -20, 30], setId: 'v1' }).expect(200);
+    assert.equal(v1Match.body.setId, 'v1');
+    const events = await h.ds.getRepository(AuditEvent).findBy({ action: 'reference-set.current' });
+    assert.deepEqual(events.map((e) => [e.subject, e.detail]), [['v2', { before: null }]]);
+    await admin.put('/api/reference-sets/current', { setId: 'v1' }).expect(200);
+    assert.equal((await recorder.post('/api/match', { lab: [50, -20, 30] }).expect(200)).body.setId, 'v1');
   });
 
   test('should make the chips cacheable: a strong ETag, private for a day, 304 when the tag matches', async () => {

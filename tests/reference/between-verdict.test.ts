@@ -3,7 +3,6 @@ import assert from 'node:assert/strict';
 import { between, segmentPosition } from '../../shared/colour/between.js';
 import { createChipIndex } from '../../shared/colour/chip-index.js';
 import { ACCEPTABILITY_THRESHOLD_DE00, PERCEPTIBILITY_THRESHOLD_DE00 } from '../../shared/colour/constants.js';
-import { colourName, hueFamily } from '../../shared/colour/colour-name.js';
 import type { Lab } from '../../shared/colour/lab.js';
 import { createMatcher } from '../../shared/colour/matcher.js';
 import { verdictFor } from '../../shared/colour/verdict.js';
@@ -75,17 +74,4 @@ test('matches carry their verdict', () => {
   assert.equal(first.verdict, verdictFor(first.deltaE));
   assert.equal(first.verdict, 'indistinguishable');
   assert.equal(second.verdict, 'clearly different');
-});
-
-test('chip names: hue word with lightness and chroma words, greys, browns (our own scheme)', () => {
-  assert.equal(colourName({ l: 30, a: 25, b: -8 }), 'deep muted red-purple');
-  assert.equal(colourName({ l: 55, a: 0.5, b: 1 }), 'light grey');
-  assert.equal(colourName({ l: 5, a: 0, b: 0 }), 'near-black');
-  assert.equal(colourName({ l: 98, a: 0, b: 1 }), 'near-white');
-  assert.equal(colourName({ l: 40, a: 12, b: 30 }), 'mid moderate brown');
-  assert.equal(colourName({ l: 45, a: -25, b: 30 }), 'mid moderate green');
-  assert.equal(hueFamily({ l: 45, a: -25, b: 30 }), 'green');
-  assert.equal(hueFamily({ l: 50, a: 40, b: 2 }), 'red-purple');
-  assert.equal(hueFamily({ l: 50, a: 40, b: 10 }), 'red');
-  assert.equal(hueFamily({ l: 50, a: 1, b: 1 }), 'neutral');
 });

@@ -33,7 +33,7 @@ const ROW: ReadingDto = {
   deltaE00: 1.23,
   verdict: 'close',
   eyeChipCode: 'F-150.004',
-  bestChipName: 'deep moderate red-purple',
+  bestChipName: 'plum L30 C40',
   bestChipHex: '#7a4c6b',
   eyeDeltaE00: 0,
   setId: 'v1',

@@ -23,7 +23,7 @@ describe('SwatchGrid', () => {
 
   it('should show every chip as a button with its code beneath', () => {
     expect(buttons().map((b) => b.querySelector('.code')?.textContent?.trim())).toEqual(TEST_CHIPS.map((c) => c.code));
-    expect(buttons()[0].getAttribute('aria-label')).toBe('F-001, mid moderate red');
+    expect(buttons()[0].getAttribute('aria-label')).toBe('F-001, wine L45 C45');
   });
 
   it('should mark the chosen chip as pressed, not by colour alone', () => {

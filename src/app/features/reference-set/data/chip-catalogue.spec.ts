@@ -31,12 +31,12 @@ describe('ChipCatalogue', () => {
     expect(catalogue.set()?.summary.id).toBe('v2');
   });
 
-  it('should group field chips by hue family and list each field chip’s fine chips', () => {
+  it('should group field chips by hue sector and list each field chip’s fine chips, light to dark', () => {
     loadTestSet();
     const set = catalogue.set()!;
     expect(set.fieldGroups.map((g) => [g.family, g.chips.map((c) => c.code)])).toEqual([
-      ['red', ['F-001']],
-      ['green', ['F-002']],
+      ['wine', ['F-001']],
+      ['leaf', ['F-002']],
     ]);
     expect(set.finesOf('F-001').map((c) => c.code)).toEqual(['F-001.001', 'F-001.002']);
   });

@@ -3,7 +3,8 @@ import { map, switchMap } from 'rxjs';
 
 import { matchAnswer } from '../../../../../shared/api/match-answer.js';
 import type { ChipDto, MatchAnswer, ReferenceSetSummary } from '../../../../../shared/api/reference-set-answers.js';
-import { fieldChipsByFamily, type HueFamilyGroup } from '../../../../../shared/colour/field-groups.js';
+import { pickerOrder } from '../../../../../shared/colour/chip-name.js';
+import { fieldChipsBySector, type HueSectorGroup } from '../../../../../shared/colour/field-groups.js';
 import { labFromTuple, type Lab } from '../../../../../shared/colour/lab.js';
 import { createMatcher, type Matcher } from '../../../../../shared/colour/matcher.js';
 import type { ChipMatch } from '../../../../../shared/colour/nearest.js';
@@ -12,7 +13,7 @@ import { ReferenceSetApi } from './reference-set-api';
 /** The current reference set held in the browser, indexed for lookups and instant matching. */
 export class ChipSet {
   readonly matcher: Matcher<ChipDto>;
-  readonly fieldGroups: HueFamilyGroup<ChipDto>[];
+  readonly fieldGroups: HueSectorGroup<ChipDto>[];
   private readonly byCode = new Map<string, ChipDto>();
   private readonly finesByParent = new Map<string, ChipDto[]>();
 
@@ -21,7 +22,7 @@ export class ChipSet {
     readonly chips: readonly ChipDto[],
   ) {
     this.matcher = createMatcher(chips);
-    this.fieldGroups = fieldChipsByFamily(chips);
+    this.fieldGroups = fieldChipsBySector(chips);
     for (const chip of chips) {
       this.byCode.set(chip.code, chip);
       if (chip.parent !== null) {
@@ -30,6 +31,7 @@ export class ChipSet {
         this.finesByParent.set(chip.parent, fines);
       }
     }
+    for (const fines of this.finesByParent.values()) fines.sort((p, q) => pickerOrder(p.lab, q.lab));
   }
 
   /** The chip with this exact code. */
@@ -37,7 +39,7 @@ export class ChipSet {
     return this.byCode.get(code);
   }
 
-  /** The fine chips that refine a field chip, in code order. */
+  /** The fine chips that refine a field chip, in picker order: by sector, light to dark, strongest to greyest. */
   finesOf(fieldCode: string): readonly ChipDto[] {
     return this.finesByParent.get(fieldCode) ?? [];
   }

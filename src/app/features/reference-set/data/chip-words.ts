@@ -1,5 +1,5 @@
 import type { MatchBetween } from '../../../../../shared/api/reference-set-answers.js';
-import type { HueFamily } from '../../../../../shared/colour/colour-name.js';
+import { sectorLabel, type HueSector } from '../../../../../shared/colour/chip-name.js';
 import { ACCEPTABILITY_THRESHOLD_DE00, PERCEPTIBILITY_THRESHOLD_DE00 } from '../../../../../shared/colour/constants.js';
 import type { Verdict } from '../../../../../shared/colour/verdict.js';
 
@@ -52,9 +52,9 @@ export function betweenWords(between: MatchBetween): string {
   return `between ${between.a} and ${between.b}, nearer ${between.t < 0.5 ? between.a : between.b}`;
 }
 
-/** The heading of a hue family on the browse page. */
-export function familyLabel(family: HueFamily): string {
-  return family === 'neutral' ? 'greys' : family;
+/** The heading of a hue sector on the browse page and pickers, with its range: "leaf h° 130–160". */
+export function familyLabel(sector: HueSector): string {
+  return sectorLabel(sector);
 }
 
 /**

@@ -46,8 +46,8 @@ describe('MatchPage', () => {
     const serverAnswer: MatchAnswer = {
       input: { lab: [45, 40, 20], lch: [45, 44.72, 26.57], hex: '#ad4c4b', inGamut: true },
       matches: [
-        { code: 'F-001.002', parent: 'F-001', name: 'mid moderate red', hex: '#a44a4a', lab: [44, 38, 18], deltaE00: 1.2, verdict: 'close' },
-        { code: 'F-001', parent: null, name: 'mid moderate red', hex: '#ad4c4b', lab: [45, 40, 20], deltaE00: 2.5, verdict: 'clearly different' },
+        { code: 'F-001.002', parent: 'F-001', name: 'wine L44 C42', hex: '#a44a4a', lab: [44, 38, 18], deltaE00: 1.2, verdict: 'close' },
+        { code: 'F-001', parent: null, name: 'wine L45 C45', hex: '#ad4c4b', lab: [45, 40, 20], deltaE00: 2.5, verdict: 'clearly different' },
       ],
       between: { a: 'F-001.002', b: 'F-001', t: 0.3 },
       setId: 'v2',

@@ -25,7 +25,7 @@ function detail(id: number): ReadingDetail {
     hex: '#7a4a68',
     inGamut: true,
     bestChip: 'F-101.004',
-    bestChipName: 'dark moderate purple',
+    bestChipName: 'violet L30 C40',
     bestChipHex: '#7b4a69',
     deltaE00: 0.6,
     verdict: 'indistinguishable',
