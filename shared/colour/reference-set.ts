@@ -6,7 +6,7 @@ export interface ReferenceChip {
   code: string;
   /** The field chip whose cell a fine chip lies in; `null` for a field chip. */
   parent: string | null;
-  /** Plain-words name of our own (`colourName`). */
+  /** The name written into the file; shown names are derived (`chipName` in chip-name.ts). */
   name: string;
   /** CIELAB D65, 2° observer, two decimals. */
   lab: LabTuple;
