@@ -1,6 +1,5 @@
 // Observations: every current reading as four observations (L*, a*, b*, chip code) and every
-// current descriptor value as one. Superseded rows are never served. One SQL query pages the union
-// of both, so a page costs the same however many readings the collection holds.
+// current descriptor value as one. Superseded rows are never served.
 import { In, type DataSource } from 'typeorm';
 import { Observation } from '../collection/observation.entity.js';
 import { Reading } from '../readings/reading.entity.js';
@@ -38,73 +37,111 @@ function parseObservationDbId(dbId: string): { kind: 'r'; id: number; part: Colo
 /** TypeORM keeps SQLite datetimes as UTC text "YYYY-MM-DD HH:MM:SS.SSS". */
 const sqlTime = (d: Date) => d.toISOString().replace('T', ' ').replace('Z', '');
 
-const PARTS_SQL = COLOUR_PARTS.map((p, i) => `SELECT '${p}' AS part, ${i} AS partOrder`).join(' UNION ALL ');
+/** A filter as SQL over each source: readings (`r`) and descriptor values (`o`); null when that source can match nothing. */
+interface Plan {
+  readings: { where: string[]; params: unknown[]; parts: readonly ColourPart[] } | null;
+  values: { where: string[]; params: unknown[] } | null;
+}
 
-/** The WHERE clause and parameters for a filter; null when the filter can match nothing. */
-function whereOf(f: ObservationFilter): { sql: string; params: unknown[] } | null {
-  const clauses: string[] = [];
-  const params: unknown[] = [];
-  const add = (sql: string, ...values: unknown[]) => {
-    clauses.push(sql);
-    params.push(...values);
+/** Splits a filter into a query per source; a filter naming something that cannot be ours empties both. */
+function planOf(f: ObservationFilter): Plan {
+  const none: Plan = { readings: null, values: null };
+  const r = { where: ['r."supersededById" IS NULL'], params: [] as unknown[], parts: COLOUR_PARTS as readonly ColourPart[] };
+  const o = { where: ['o."supersededById" IS NULL', `d."kind" != 'ratio'`], params: [] as unknown[] };
+  let readings = true;
+  let values = true;
+  const both = (rSql: string, oSql: string, value: unknown) => {
+    r.where.push(rSql);
+    r.params.push(value);
+    o.where.push(oSql);
+    o.params.push(value);
   };
-  for (const [value, column] of [[f.germplasmDbId, 'accessionId'], [f.observationUnitDbId, 'plantId'], [f.locationDbId, 'siteId']] as const) {
+  const ids: [string | undefined, string, string][] = [
+    [f.germplasmDbId, 'r."accessionId" = ?', 'o."accessionId" = ?'],
+    [f.observationUnitDbId, 'r."plantId" = ?', 'o."plantId" = ?'],
+    [f.locationDbId, 'r."siteId" = ?', 'COALESCE(pl."siteId", a."siteId") = ?'],
+  ];
+  for (const [value, rSql, oSql] of ids) {
     const id = numericId(value);
-    if (id === null) return null;
-    if (id !== undefined) add(`x.${column} = ?`, id);
+    if (id === null) return none;
+    if (id !== undefined) both(rSql, oSql, id);
   }
   if (f.observationVariableDbId !== undefined) {
     const v = parseVariableDbId(f.observationVariableDbId);
-    if (!v) return null;
-    if (v.kind === 'colour') add(`x.kind = 'r' AND x.varId = ? AND x.part = ?`, v.characterId, v.part);
-    else add(`x.kind = 'o' AND x.varId = ?`, v.descriptorId);
+    if (!v) return none;
+    if (v.kind === 'colour') {
+      values = false;
+      r.where.push('r."characterId" = ?');
+      r.params.push(v.characterId);
+      r.parts = r.parts.filter((p) => p === v.part);
+    } else {
+      readings = false;
+      o.where.push('o."descriptorId" = ?');
+      o.params.push(v.descriptorId);
+    }
   }
   if (f.observationDbId !== undefined) {
-    const o = parseObservationDbId(f.observationDbId);
-    if (!o) return null;
-    if (o.kind === 'r') add(`x.kind = 'r' AND x.rowId = ? AND x.part = ?`, o.id, o.part);
-    else add(`x.kind = 'o' AND x.rowId = ?`, o.id);
+    const id = parseObservationDbId(f.observationDbId);
+    if (!id) return none;
+    if (id.kind === 'r') {
+      values = false;
+      r.where.push('r."id" = ?');
+      r.params.push(id.id);
+      r.parts = r.parts.filter((p) => p === id.part);
+    } else {
+      readings = false;
+      o.where.push('o."id" = ?');
+      o.params.push(id.id);
+    }
   }
   if (f.seasonDbId !== undefined) {
-    const s = parseSeasonDbId(f.seasonDbId);
-    if (!s) return null;
-    add(`x.season = ? AND x.seasonYear = ?`, s.name, s.year);
+    const season = parseSeasonDbId(f.seasonDbId);
+    if (!season) return none;
+    // Seasons are derived for readings only; a descriptor value has none.
+    values = false;
+    r.where.push('r."season" = ?', 'r."seasonYear" = ?');
+    r.params.push(season.name, season.year);
   }
-  if (f.observationTimeStampRangeStart) add(`x.observedAt >= ?`, sqlTime(f.observationTimeStampRangeStart));
-  if (f.observationTimeStampRangeEnd) add(`x.observedAt <= ?`, sqlTime(f.observationTimeStampRangeEnd));
-  return { sql: clauses.length ? `WHERE ${clauses.join(' AND ')}` : '', params };
+  if (f.observationTimeStampRangeStart) both('r."observedAt" >= ?', 'o."observedAt" >= ?', sqlTime(f.observationTimeStampRangeStart));
+  if (f.observationTimeStampRangeEnd) both('r."observedAt" <= ?', 'o."observedAt" <= ?', sqlTime(f.observationTimeStampRangeEnd));
+  return { readings: readings && r.parts.length ? r : null, values: values ? o : null };
 }
 
+const VALUES_FROM = `FROM "observation" o JOIN "descriptor" d ON d."id" = o."descriptorId" JOIN "accession" a ON a."id" = o."accessionId" LEFT JOIN "plant" pl ON pl."id" = o."plantId"`;
+
+type Key = { kind: 'r'; rowId: number; part: ColourPart } | { kind: 'o'; rowId: number };
+
 /**
- * Current readings (one row per coordinate and the chip) and current, stored descriptor values
- * (ratios are computed, never stored). A descriptor value's site is its plant's, else its
- * accession's; it has no season (seasons are derived for readings only).
+ * One page of observations and how many match. The order is fixed and cheap to page: readings by
+ * id, each as L*, a*, b*, chip; then descriptor values by id. Each source is paged by its primary
+ * key with LIMIT/OFFSET in rows of its own table, so a page never sorts the whole collection
+ * (see bench/brapi.bench.ts).
  */
-const UNION_SQL = `
-  SELECT 'r' AS kind, r."id" AS rowId, p.part AS part, p.partOrder AS partOrder, r."accessionId" AS accessionId, r."plantId" AS plantId,
-         r."siteId" AS siteId, r."characterId" AS varId, r."observedAt" AS observedAt, r."season" AS season, r."seasonYear" AS seasonYear
-    FROM "reading" r CROSS JOIN (${PARTS_SQL}) p
-   WHERE r."supersededById" IS NULL
-  UNION ALL
-  SELECT 'o', o."id", NULL, 0, o."accessionId", o."plantId", COALESCE(pl."siteId", a."siteId"), o."descriptorId", o."observedAt", NULL, NULL
-    FROM "observation" o
-    JOIN "descriptor" d ON d."id" = o."descriptorId"
-    JOIN "accession" a ON a."id" = o."accessionId"
-    LEFT JOIN "plant" pl ON pl."id" = o."plantId"
-   WHERE o."supersededById" IS NULL AND d."kind" != 'ratio'`;
-
-type Key = { kind: 'r' | 'o'; rowId: number; part: ColourPart | null };
-
-/** One page of observations in time order (then reading before descriptor value, then id, then L*, a*, b*, chip), and how many match. */
 export async function findObservations(ds: DataSource, f: ObservationFilter, page: PageRequest): Promise<{ data: Record<string, unknown>[]; totalCount: number }> {
-  const where = whereOf(f);
-  if (!where) return { data: [], totalCount: 0 };
-  const [{ n }] = (await ds.query(`SELECT COUNT(*) AS n FROM (${UNION_SQL}) x ${where.sql}`, where.params)) as [{ n: number }];
-  const keys = (await ds.query(
-    `SELECT x.kind, x.rowId, x.part FROM (${UNION_SQL}) x ${where.sql} ORDER BY x.observedAt, x.kind, x.rowId, x.partOrder LIMIT ? OFFSET ?`,
-    [...where.params, page.pageSize, page.page * page.pageSize],
-  )) as Key[];
-  return { data: await materialise(ds, keys), totalCount: n };
+  const plan = planOf(f);
+  const count = async (sql: string, params: unknown[]) => ((await ds.query(sql, params)) as [{ n: number }])[0].n;
+  const nReadings = plan.readings ? await count(`SELECT COUNT(*) AS n FROM "reading" r WHERE ${plan.readings.where.join(' AND ')}`, plan.readings.params) : 0;
+  const nValues = plan.values ? await count(`SELECT COUNT(*) AS n ${VALUES_FROM} WHERE ${plan.values.where.join(' AND ')}`, plan.values.params) : 0;
+  const perReading = plan.readings?.parts.length ?? 0;
+  const readingRows = nReadings * perReading;
+  const totalCount = readingRows + nValues;
+  const start = page.page * page.pageSize;
+  const end = Math.min(start + page.pageSize, totalCount);
+  const keys: Key[] = [];
+  if (plan.readings && start < readingRows) {
+    const first = Math.floor(start / perReading);
+    const last = Math.ceil(Math.min(end, readingRows) / perReading);
+    const ids = (await ds.query(`SELECT r."id" AS id FROM "reading" r WHERE ${plan.readings.where.join(' AND ')} ORDER BY r."id" LIMIT ? OFFSET ?`, [...plan.readings.params, last - first, first])) as { id: number }[];
+    const parts = plan.readings.parts;
+    const expanded = ids.flatMap(({ id }) => parts.map((part): Key => ({ kind: 'r', rowId: id, part })));
+    keys.push(...expanded.slice(start - first * perReading, Math.min(end, readingRows) - first * perReading));
+  }
+  if (plan.values && end > readingRows) {
+    const from = Math.max(0, start - readingRows);
+    const ids = (await ds.query(`SELECT o."id" AS id ${VALUES_FROM} WHERE ${plan.values.where.join(' AND ')} ORDER BY o."id" LIMIT ? OFFSET ?`, [...plan.values.params, end - readingRows - from, from])) as { id: number }[];
+    keys.push(...ids.map(({ id }): Key => ({ kind: 'o', rowId: id })));
+  }
+  return { data: await materialise(ds, keys), totalCount };
 }
 
 async function materialise(ds: DataSource, keys: Key[]): Promise<Record<string, unknown>[]> {
@@ -116,7 +153,7 @@ async function materialise(ds: DataSource, keys: Key[]): Promise<Record<string, 
   const observations = new Map(
     (observationIds.length ? await ds.getRepository(Observation).find({ where: { id: In(observationIds) }, relations: { accession: true, plant: true, descriptor: true, observer: true } }) : []).map((o) => [o.id, o]),
   );
-  return keys.map((k) => (k.kind === 'r' ? fromReading(readings.get(k.rowId)!, k.part!) : fromDescriptorValue(observations.get(k.rowId)!)));
+  return keys.map((k) => (k.kind === 'r' ? fromReading(readings.get(k.rowId)!, k.part) : fromDescriptorValue(observations.get(k.rowId)!)));
 }
 
 function fromReading(r: Reading, part: ColourPart): Record<string, unknown> {
