@@ -9,6 +9,7 @@ import { User } from '../auth/user.entity.js';
 import { Accession } from '../collection/accession.entity.js';
 import { Descriptor } from '../collection/descriptor.entity.js';
 import { Observation } from '../collection/observation.entity.js';
+import { DEMO_DUPLICATE } from './demo-scenario.js';
 
 /** Who took the demo measurements: the demo recorder. */
 const DEMO_OBSERVER_EMAIL = 'recorder@demo.test';
@@ -56,11 +57,17 @@ export async function seedDemoObservations(m: EntityManager): Promise<number> {
   const now = Date.now();
   let n = 0;
   let added = 0;
+  const firstMeasure = new Map<string, number>();
   for (const accession of accessions) {
+    // The planted duplicate measures as its twin does: the same variety under another number.
+    const twin = accession.accessionNumber === DEMO_DUPLICATE.accessionNumber ? firstMeasure.get(DEMO_DUPLICATE.sameAs) : undefined;
+    firstMeasure.set(accession.accessionNumber, n);
+    let k = twin ?? n;
     const plants = [...accession.plants].sort((a, b) => a.label.localeCompare(b.label, 'en', { numeric: true })).slice(0, 2);
     for (const plant of plants) {
       const observedAt = new Date(Date.parse(`${plant.plantedOn}T10:00:00Z`) + DAYS_AFTER_PLANTING * 86_400_000);
-      const measures = measuresOf(n++);
+      const measures = measuresOf(k++);
+      n++;
       if (observedAt.getTime() > now) continue;
       for (const measure of measures) {
         const descriptor = descriptors.get(measure.code);

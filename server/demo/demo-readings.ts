@@ -23,6 +23,7 @@ import { ReferenceSets } from '../reference-sets/reference-sets.js';
 import { prepareReading, type ColourSources } from '../readings/reading-input.js';
 import { insertReading } from '../readings/readings.js';
 import { Reading } from '../readings/reading.entity.js';
+import { DEMO_DUPLICATE } from './demo-scenario.js';
 
 type Lab3 = [number, number, number];
 
@@ -124,6 +125,8 @@ export async function seedDemoReadings(m: EntityManager): Promise<number> {
   }
 
   // Everyday readings: each accession visited every eight weeks once its first plant is two months in the ground.
+  const colourIndex = (i: number) =>
+    accessions[i]!.accessionNumber === DEMO_DUPLICATE.accessionNumber ? accessions.findIndex((a) => a.accessionNumber === DEMO_DUPLICATE.sameAs) : i;
   for (const [i, accession] of accessions.entries()) {
     const plants = [...accession.plants].sort((a, b) => a.label.localeCompare(b.label, 'en', { numeric: true }));
     const firstPlanted = Date.parse(`${plants[0]!.plantedOn}T00:00:00Z`);
@@ -138,7 +141,8 @@ export async function seedDemoReadings(m: EntityManager): Promise<number> {
           plantId: plant.id,
           characterId: character.id,
           observedAt: new Date(t + (7 + Math.floor(random() * 8)) * 3_600_000).toISOString(),
-          ...(await colourFields(jitter(ch.base(i), 1.5))),
+          // The planted duplicate takes its twin's colours: the same variety under another number.
+          ...(await colourFields(jitter(ch.base(colourIndex(i)), 1.5))),
           light: pick(LIGHTS),
           secondsSinceCut: ch.cut ? 10 + Math.floor(random() * 80) : undefined,
           leafPosition: ch.code.startsWith('leaf') ? pick(LEAVES) : undefined,

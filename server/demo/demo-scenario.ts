@@ -356,4 +356,27 @@ export const DEMO_ACCESSIONS: readonly DemoAccession[] = [
       { label: 'P2', plantedOn: '2025-12-05', siteCode: 'RDP' },
     ],
   },
+  {
+    // The planted duplicate: the same invented variety as HL-0004 "Copper Vein", received again
+    // under a donor's own name. Its readings and measurements follow HL-0004's, so the look-alike
+    // page can find it (see DEMO_DUPLICATE).
+    accessionNumber: 'HL-0013',
+    name: 'Ember Thread',
+    otherNames: [],
+    instituteCode: DEMO_NURSERY,
+    originCountry: 'THA',
+    collectingSite: 'Kitchen garden below the Pinewater terraces',
+    acquisitionDate: '20250305',
+    sampleStatus: 300,
+    donorName: 'Linnet Oakhollow',
+    remarks: 'Donor\'s own name for it; not yet compared with the rest of the collection.',
+    siteCode: 'HTG',
+    plants: [
+      { label: 'P1', plantedOn: '2025-04-22' },
+      { label: 'P2', plantedOn: '2025-04-22' },
+    ],
+  },
 ];
+
+/** Two accession numbers of one invented variety, for the look-alike accessions to find. */
+export const DEMO_DUPLICATE = { accessionNumber: 'HL-0013', sameAs: 'HL-0004' } as const;

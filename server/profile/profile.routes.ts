@@ -1,9 +1,10 @@
 import { Router } from 'express';
-import { profileQuery } from '../../shared/api/profile.js';
+import { duplicatesQuery, profileQuery, similarQuery } from '../../shared/api/profile.js';
 import { signedIn } from '../core/access.js';
 import type { AppContext } from '../core/context.js';
 import { idParam, parse } from '../core/validate.js';
 import { accessionProfile } from './profile.js';
+import { possibleDuplicates, similarAccessions } from './similar.js';
 
 /**
  * The characterisation of accessions (issue 14): every signed-in role reads a record, since
@@ -17,6 +18,17 @@ export function profileRoutes(ctx: AppContext): Router {
     const id = idParam(req.params['id']);
     const q = parse(profileQuery, req.query, 'query');
     res.json(await accessionProfile(ctx, id, q.setId));
+  });
+
+  router.get('/accessions/duplicates', signedIn, async (req, res) => {
+    const q = parse(duplicatesQuery, req.query, 'query');
+    res.json(await possibleDuplicates(ctx.ds, q.minShared));
+  });
+
+  router.get('/accessions/:id/similar', signedIn, async (req, res) => {
+    const id = idParam(req.params['id']);
+    const q = parse(similarQuery, req.query, 'query');
+    res.json(await similarAccessions(ctx.ds, id, q.limit, q.minShared));
   });
 
   return router;

@@ -115,6 +115,8 @@ const ROUTES: readonly RouteCase[] = [
   { method: 'PATCH', path: '/api/plants/:id', access: ADMIN, ok: 200, url: (f) => `/api/plants/${f.plantId}`, body: (f) => ({ plantedOn: `2025-01-${String(10 + (f.next() % 18)).padStart(2, '0')}` }) },
   { method: 'GET', path: '/api/accessions/:id/descriptors', access: EVERYONE, ok: 200, url: (f) => `/api/accessions/${f.accessionId}/descriptors` },
   { method: 'GET', path: '/api/accessions/:id/profile', access: EVERYONE, ok: 200, url: (f) => `/api/accessions/${f.accessionId}/profile` },
+  { method: 'GET', path: '/api/accessions/:id/similar', access: EVERYONE, ok: 200, url: (f) => `/api/accessions/${f.accessionId}/similar` },
+  { method: 'GET', path: '/api/accessions/duplicates', access: EVERYONE, ok: 200 },
   { method: 'GET', path: '/api/descriptors', access: EVERYONE, ok: 200 },
   { method: 'POST', path: '/api/descriptors', access: ADMIN, ok: 201, body: (f) => ({ code: `matrix.length${f.next()}`, label: 'Matrix length', object: 'matrix part', kind: 'length', howToMeasure: 'Measure it the way the matrix test says.' }) },
   { method: 'PATCH', path: '/api/descriptors/:id', access: ADMIN, ok: 200, url: (f) => `/api/descriptors/${f.descriptorId}`, body: (f) => ({ object: `matrix part ${f.next()}` }) },

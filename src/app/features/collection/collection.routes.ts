@@ -14,6 +14,11 @@ export const COLLECTION_ROUTES: Routes = [
     loadComponent: () => import('./pages/site-page').then((m) => m.SitePage),
   },
   {
+    path: 'accessions/:id/similar',
+    title: 'Look-alike accessions · Hueledger',
+    loadComponent: () => import('./pages/similar-page').then((m) => m.SimilarPage),
+  },
+  {
     path: 'accessions/:id',
     title: 'Accession · Hueledger',
     loadComponent: () => import('./pages/accession-page').then((m) => m.AccessionPage),
