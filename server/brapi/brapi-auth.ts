@@ -3,10 +3,24 @@ import type { DataSource } from 'typeorm';
 import { userOfApiToken } from './api-tokens.js';
 import { BrapiError } from './brapi-envelope.js';
 
+/**
+ * Lets BrAPI web tools on other origins read with a token (CORS, Fetch Standard §3.2). The origin
+ * is "*", which browsers never combine with credentials: a page elsewhere cannot ride on a signed-in
+ * person's session cookie, only send a token it was given.
+ */
+export const crossOrigin: RequestHandler = (req, res, next) => {
+  res.setHeader('Access-Control-Allow-Origin', '*');
+  if (req.method !== 'OPTIONS') return next();
+  res.setHeader('Access-Control-Allow-Methods', 'GET, HEAD');
+  res.setHeader('Access-Control-Allow-Headers', 'Authorization, Accept');
+  res.setHeader('Access-Control-Max-Age', '600');
+  res.status(204).end();
+};
+
 /** The interface is read-only: anything but GET (and HEAD, which Express answers from GET) is refused before it is read. */
 export const readOnly: RequestHandler = (req, res, next) => {
   if (req.method === 'GET' || req.method === 'HEAD') return next();
-  res.setHeader('Allow', 'GET, HEAD');
+  res.setHeader('Allow', 'GET, HEAD, OPTIONS');
   next(new BrapiError(405, `Method ${req.method} is not allowed: this BrAPI interface is read-only`));
 };
 

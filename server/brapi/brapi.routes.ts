@@ -3,7 +3,7 @@ import { signedIn } from '../core/access.js';
 import type { AppContext } from '../core/context.js';
 import { photoFile } from '../photos/photos.js';
 import { APP_VERSION } from '../version.js';
-import { bearerAuth, readOnly } from './brapi-auth.js';
+import { bearerAuth, crossOrigin, readOnly } from './brapi-auth.js';
 import { commonCropNames, findGermplasm, findLocations, findObservationUnits, findSeasons, getGermplasm, numericId } from './brapi-collection.js';
 import { BRAPI_VERSION, BrapiError, brapiErrorHandler, listAnswer, oneParam, pageOf, pageRequest, singleAnswer, timeParam } from './brapi-envelope.js';
 import { findImages } from './brapi-images.js';
@@ -155,11 +155,12 @@ function calls(ctx: AppContext): Call[] {
 
 /**
  * /brapi/v2: the read-only BrAPI interface. Every call admits any signed-in role, by session or
- * by an API token; anything but GET is refused; every refusal is BrAPI's error answer.
+ * by an API token; other origins may read with a token (CORS); anything but GET is refused; every
+ * refusal is BrAPI's error answer.
  */
 export function brapiRoutes(ctx: AppContext): Router {
   const router = Router();
-  router.use(readOnly, bearerAuth(ctx.ds));
+  router.use(crossOrigin, readOnly, bearerAuth(ctx.ds));
   for (const call of calls(ctx)) {
     router.get(`/${call.service.replace(/\{(\w+)\}/g, ':$1')}`, signedIn, call.handle);
   }
@@ -171,7 +172,7 @@ export function brapiRoutes(ctx: AppContext): Router {
 /** Anything else under /brapi (another version, a typo): BrAPI's 404, or 405 for a write. */
 export function brapiFallback(logError: (err: unknown) => void): Router {
   const router = Router();
-  router.use(readOnly);
+  router.use(crossOrigin, readOnly);
   router.use((req, _res, next) => next(new BrapiError(404, `No BrAPI call ${req.method} ${req.originalUrl.split('?')[0]!.slice(0, 80)} here; this server speaks BrAPI v${BRAPI_VERSION} under /brapi/v2`)));
   router.use(brapiErrorHandler(logError));
   return router;

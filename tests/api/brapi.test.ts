@@ -348,12 +348,26 @@ describe('BrAPI v2.1 interface', () => {
         for (const url of ['/brapi/v2/germplasm', '/brapi/v2/observations', '/brapi/v2/images/1/imagecontent', '/brapi/v2/search/germplasm', '/brapi/v1/germplasm']) {
           const byToken = await request(h.app)[method](url).set('Authorization', `Bearer ${token}`).send([{ germplasmName: 'Injected' }]);
           assert.match(assertBrapiError(byToken, 405), /read-only/);
-          assert.equal(byToken.headers['allow'], 'GET, HEAD');
+          assert.equal(byToken.headers['allow'], 'GET, HEAD, OPTIONS');
           const bySession = await admin.agent[method](url).set('X-XSRF-TOKEN', admin.csrfToken).send([{ germplasmName: 'Injected' }]);
           assertBrapiError(bySession, 405);
         }
       }
       assert.equal(JSON.stringify(await rowCounts(h.ds)), before);
+    });
+  });
+
+  describe('other origins', () => {
+    test('should let a web tool on another origin read with a token (CORS, no credentials), preflight included', async () => {
+      const preflight = await request(h.app).options('/brapi/v2/observations').set('Origin', 'https://tools.example').set('Access-Control-Request-Method', 'GET').set('Access-Control-Request-Headers', 'authorization');
+      assert.equal(preflight.status, 204);
+      assert.equal(preflight.headers['access-control-allow-origin'], '*');
+      assert.match(String(preflight.headers['access-control-allow-headers']), /Authorization/);
+      assert.equal(preflight.headers['access-control-allow-methods'], 'GET, HEAD');
+      const res = await request(h.app).get('/brapi/v2/seasons').set('Authorization', `Bearer ${token}`).set('Origin', 'https://tools.example');
+      assert.equal(res.status, 200);
+      assert.equal(res.headers['access-control-allow-origin'], '*');
+      assert.equal(res.headers['access-control-allow-credentials'], undefined, 'a session cookie is never honoured across origins');
     });
   });
 
