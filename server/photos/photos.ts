@@ -3,7 +3,7 @@
 import { createHash } from 'node:crypto';
 import { existsSync } from 'node:fs';
 import type { DataSource } from 'typeorm';
-import type { PhotoDto, PhotoSample, PixelUse, SampleCorrection } from '../../shared/api/photo-answers.js';
+import type { PhotoDto, PhotoSample, PixelUse, RegionCluster, SampleCorrection } from '../../shared/api/photo-answers.js';
 import type { SampleBody } from '../../shared/api/photos.js';
 import type { MatchAnswer } from '../../shared/api/reference-set-answers.js';
 import { labFromTuple, labToTuple, type Lab } from '../../shared/colour/lab.js';
@@ -17,6 +17,7 @@ import { inspectUpload, writeDerivatives } from './normalise.js';
 import { PHOTO_FILES, PhotoFiles } from './photo-files.js';
 import { Photo, toPhotoDto } from './photo.entity.js';
 import { tallyFromFile } from './region-reader.js';
+import { colourClusters } from './colour-clusters.js';
 
 /** Matches a CIELAB colour against the current reference set (the app's `ReferenceSets.match`). */
 export type MatchColour = (lab: Lab, k: number) => Promise<MatchAnswer>;
@@ -107,6 +108,7 @@ export async function samplePhoto(ds: DataSource, files: PhotoFiles, match: Matc
   const lab = linearToLab(mean);
   const spread = regionSpread(tally, lab, matrix);
   const matched = await match(lab, body.k ?? SAMPLE_K_DEFAULT);
+  const clusters = spread.uniform ? [] : await clustersOf(tally, matrix, match);
   return {
     photoId: photo.id,
     region: body.region,
@@ -116,12 +118,23 @@ export async function samplePhoto(ds: DataSource, files: PhotoFiles, match: Matc
     inGamut: matched.input.inGamut,
     ...pixelUse(tally),
     ...spread,
+    clusters,
     correction,
     matches: matched.matches,
     between: matched.between,
     setId: matched.setId,
     pipeline: PHOTO_PIPELINE_VERSION,
   };
+}
+
+/** The colours of a region that is not uniform, each matched to its nearest chip (`colourClusters`). */
+async function clustersOf(tally: RegionTally, matrix: Matrix3 | null, match: MatchColour): Promise<RegionCluster[]> {
+  const answers: RegionCluster[] = [];
+  for (const c of colourClusters(tally, matrix)) {
+    const matched = await match(c.lab, 1);
+    answers.push({ ...matched.input, share: c.share, spreadDeltaE00: c.spreadDeltaE00, chip: matched.matches[0]! });
+  }
+  return answers;
 }
 
 async function correctionFor(body: SampleBody, read: (region: Region, field: string) => Promise<RegionTally>): Promise<{ matrix: Matrix3 | null; correction: SampleCorrection }> {

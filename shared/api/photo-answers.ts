@@ -90,6 +90,21 @@ export interface PatchResidual {
   deltaE00: number;
 }
 
+/** One colour of a region that is not uniform (a stripe and its ground, the patches of a mottle). */
+export interface RegionCluster {
+  /** The cluster's pixels averaged in linear light, corrected like the region's mean. */
+  lab: LabTuple;
+  lch: LchTuple;
+  hex: string;
+  inGamut: boolean;
+  /** Share of the region's kept pixels, 0–1 (over the pixels the spread was computed on). */
+  share: number;
+  /** Mean ΔE00 of the cluster's pixels from its colour. */
+  spreadDeltaE00: number;
+  /** The nearest chip of the set matched against. */
+  chip: MatchedChip;
+}
+
 /** `POST /api/photos/:id/sample` answer. */
 export interface PhotoSample extends PixelUse {
   photoId: number;
@@ -104,6 +119,12 @@ export interface PhotoSample extends PixelUse {
   spreadPixels: number;
   /** Whether the spread is at most `UNIFORM_SPREAD_MAX_DE00`. */
   uniform: boolean;
+  /**
+   * When the region is not uniform: its two or three colours (k-means in CIELAB), largest share
+   * first; empty when it is uniform or its pixels hold no separate colours. The region's `lab` is
+   * their mixture, a colour that may not be on the plant.
+   */
+  clusters: RegionCluster[];
   correction: SampleCorrection;
   matches: MatchedChip[];
   between: MatchBetween | null;

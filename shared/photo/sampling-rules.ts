@@ -80,3 +80,29 @@ export const PATCHES_MIN = 4;
 export const PATCHES_MAX = 30;
 /** Most vertices of a polygon region (our own). */
 export const POLYGON_POINTS_MAX = 200;
+
+/**
+ * A region that is not uniform is split into this many colour clusters at most (our own): a
+ * petiole stripe on its ground, or a variegated or mottled blade, holds two or three colours.
+ */
+export const CLUSTER_COUNTS = [2, 3] as const;
+
+/** Seed of the k-means++ start, so the same region always splits the same way (our own). */
+export const CLUSTER_SEED = 0x43_4c_55_53;
+
+/**
+ * Three clusters are kept instead of two only when they bring the pixels' mean ΔE00 from their
+ * cluster's colour down to at most this fraction of what two give (our own): a third colour must
+ * explain much of what two leave over, not just split JPEG noise.
+ */
+export const THIRD_CLUSTER_GAIN = 0.7;
+
+/**
+ * Every two clusters kept must be at least this far apart in ΔE00 (our own: the spread above which
+ * a region counts as not uniform). Closer clusters are one colour split by noise or shading, and
+ * the split with one cluster fewer is answered.
+ */
+export const CLUSTER_MIN_SEPARATION_DE00 = UNIFORM_SPREAD_MAX_DE00;
+
+/** A cluster holding less than this share of the kept pixels is not answered as a colour (our own: edge pixels between stripes). */
+export const CLUSTER_MIN_SHARE = 0.05;

@@ -18,10 +18,11 @@ function sample(overrides: Partial<PhotoSample> = {}): PhotoSample {
     spreadDeltaE00: 1.2,
     spreadPixels: 5000,
     uniform: true,
+    clusters: [],
     correction: { kind: 'none' },
     matches: [
-      { code: 'F-150.004', parent: 'F-150', name: 'deep purple', hex: '#6a2e5b', lab: [32, 30, -12], deltaE00: 0.4, verdict: 'indistinguishable' },
-      { code: 'F-150.005', parent: 'F-150', name: 'deep purple', hex: '#6e2c5e', lab: [33, 32, -12], deltaE00: 2.3, verdict: 'clearly different' },
+      { code: 'F-150.004', parent: 'F-150', name: 'plum L32 C32', hex: '#6a2e5b', lab: [32, 30, -12], deltaE00: 0.4, verdict: 'indistinguishable' },
+      { code: 'F-150.005', parent: 'F-150', name: 'plum L32 C32', hex: '#6e2c5e', lab: [33, 32, -12], deltaE00: 2.3, verdict: 'clearly different' },
     ],
     between: { a: 'F-150.004', b: 'F-150.005', t: 0.2 },
     setId: 'v1',
