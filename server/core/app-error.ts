@@ -1,8 +1,6 @@
-/** A field-level validation message carried in a 400 problem. */
-export interface FieldError {
-  field: string;
-  message: string;
-}
+import type { FieldError } from '../../shared/api/problem.js';
+
+export type { FieldError };
 
 /** An error that becomes an RFC 9457 problem+json answer. */
 export class AppError extends Error {

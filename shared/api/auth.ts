@@ -3,6 +3,7 @@ import { z } from 'zod';
 import { PASSWORD_MIN_LENGTH, ROLES, type Role } from './roles.js';
 
 export { PASSWORD_MIN_LENGTH, ROLES, type Role };
+export type { FieldError, Problem } from './problem.js';
 
 /** An address has at most 254 characters (RFC 5321 §4.5.3.1.3: a 256-octet path less its angle brackets). */
 const EMAIL_MAX_LENGTH = 254;
@@ -109,13 +110,3 @@ export interface Page<T> {
   total: number;
 }
 
-/** An RFC 9457 problem document as the API sends it. */
-export interface Problem {
-  type: string;
-  title: string;
-  status: number;
-  detail?: string;
-  instance?: string;
-  /** For validation failures: which field and why. */
-  errors?: { field: string; message: string }[];
-}

@@ -1,5 +1,7 @@
 // Answer and request types of the calibration routes (`/api/calibration/…`). No zod here, so the
 // client can import them cheaply; the request schemas are in calibration.ts.
+import type { z } from 'zod';
+import type { CreateResponseBody, CreateScreeningBody, createSessionBody, CreateSpecimenBody, InviteParticipantsBody } from './calibration.js';
 import type { LabTuple } from '../colour/lab.js';
 import type { Region } from '../photo/region.js';
 import type { KappaInterval } from '../stats/kappa-interval.js';
@@ -55,46 +57,19 @@ export interface CalibrationThresholds {
 }
 
 /** `POST /api/calibration/sessions` body (trainer, admin) → `CreatedId`. */
-export interface CreateCalibrationSessionRequest {
-  title: string;
-  /** "YYYY-MM-DD"; default today (server's date, UTC). */
-  heldOn?: string;
-  /** Default: the current reference set. */
-  referenceSetId?: string;
-  /** Whether only invited observers may answer; default false (any signed-in user). */
-  restricted?: boolean;
-  /** Either or both; the missing one takes its default. */
-  thresholds?: Partial<CalibrationThresholds>;
-}
+export type CreateCalibrationSessionRequest = z.input<typeof createSessionBody>;
 
 /** `POST /api/calibration/sessions/:id/specimens` body (trainer, admin; 409 when closed) → `CreatedId`. Exactly one colour source. */
-export type CreateSpecimenRequest =
-  | { label: string; lab: LabTuple }
-  | { label: string; photoId: number; region: Region }
-  | { label: string; chipCode: string };
+export type CreateSpecimenRequest = CreateSpecimenBody;
 
 /** `POST /api/calibration/sessions/:id/responses` body: the signed-in observer's pick for one specimen. */
-export interface CreateResponseRequest {
-  specimenId: number;
-  /** A field (`F-087`) or fine (`F-087.014`) chip of the session's reference set. */
-  chipCode: string;
-}
+export type CreateResponseRequest = CreateResponseBody;
 
 /** `POST /api/calibration/sessions/:id/participants` body (trainer, admin; 409 when closed). */
-export interface InviteParticipantsRequest {
-  userIds: number[];
-}
+export type InviteParticipantsRequest = InviteParticipantsBody;
 
 /** `POST /api/calibration/screenings` body: an observer records their own; trainers and admins anyone's. */
-export interface CreateScreeningRequest {
-  /** Default: the caller. */
-  userId?: number;
-  /** "YYYY-MM-DD", not in the future. */
-  screenedOn: string;
-  method: ScreeningMethod;
-  result: ScreeningResult;
-  notes?: string;
-}
+export type CreateScreeningRequest = CreateScreeningBody;
 
 /** Answer of the create routes. */
 export interface CreatedId {

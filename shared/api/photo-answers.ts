@@ -1,5 +1,6 @@
 // Answer types and limits of the photo routes. No zod here, so the client can import them
 // cheaply; the request schemas are in photos.ts.
+import type { SampleBody } from './photos.js';
 import type { LabTuple } from '../colour/lab.js';
 import type { Matrix3 } from '../photo/region-stats.js';
 import type { Region } from '../photo/region.js';
@@ -135,12 +136,7 @@ export interface PhotoSample extends PixelUse {
 }
 
 /** `POST /api/photos/:id/sample` body as the client sends it. */
-export interface SampleRequest {
-  region: Region;
-  neutral?: { region: Region; lab?: LabTuple };
-  patches?: { region: Region; lab: LabTuple }[];
-  k?: number;
-}
+export type SampleRequest = SampleBody;
 
 /** Where a photo's display copy and thumbnail are served. */
 export function photoImageUrl(id: number): string {

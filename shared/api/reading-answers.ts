@@ -1,6 +1,8 @@
 // The readings API's types and constants, without zod so the client may import
 // them; the request schemas are in readings.ts.
+import type { CreateReadingBody, ListReadingsQuery, SupersedeReadingBody } from './readings.js';
 import type { LabTuple } from '../colour/lab.js';
+import type { FieldError } from './problem.js';
 import type { Region } from '../photo/region.js';
 import type { LchTuple, MatchBetween, MatchedChip } from './reference-set-answers.js';
 import type { SampleCorrection } from './photo-answers.js';
@@ -45,37 +47,10 @@ export interface ReadingPhotoSource {
 }
 
 /** `POST /api/readings` body. Which colour field is needed depends on `method`. */
-export interface CreateReadingRequest {
-  accessionId: number;
-  plantId?: number | null;
-  characterId: number;
-  /** Default: the plant's site, else the accession's. */
-  siteId?: number | null;
-  /** ISO 8601 with offset; default now. */
-  observedAt?: string;
-  method: ReadingMethod;
-  /** instrument: the instrument's CIELAB D65. */
-  lab?: LabTuple;
-  /** swatch: the on-screen colour chosen. */
-  hex?: string;
-  /** chip: the chip picked by eye (its CIELAB is the reading). */
-  chipCode?: string;
-  /** photo and instrument: the chip also picked by eye, to compare later. */
-  eyeChipCode?: string | null;
-  /** photo: the region sampled. */
-  photo?: ReadingPhotoSource;
-  /** instrument: its make or name, for provenance. */
-  instrument?: string | null;
-  light: Light;
-  secondsSinceCut?: number | null;
-  leafPosition?: string | null;
-  notes?: string | null;
-}
+export type CreateReadingRequest = CreateReadingBody;
 
 /** `POST /api/readings/:id/supersede` body: the corrected reading and why. */
-export interface SupersedeReadingRequest extends CreateReadingRequest {
-  reason: string;
-}
+export type SupersedeReadingRequest = SupersedeReadingBody;
 
 /** A reading as listed. */
 export interface ReadingDto {
@@ -175,24 +150,7 @@ export const READING_SORTS = ['observedAt', 'accession', 'character', 'site', 'o
 export type ReadingSort = (typeof READING_SORTS)[number];
 
 /** `GET /api/readings` (and the exports) query. */
-export interface ReadingListQuery {
-  accessionId?: number;
-  characterId?: number;
-  siteId?: number;
-  season?: string;
-  seasonYear?: number;
-  observerId?: number;
-  method?: ReadingMethod;
-  status?: ReadingStatus;
-  /** YYYY-MM-DD, inclusive, UTC. */
-  from?: string;
-  to?: string;
-  includeSuperseded?: boolean;
-  sort?: ReadingSort;
-  dir?: 'asc' | 'desc';
-  page?: number;
-  pageSize?: number;
-}
+export type ReadingListQuery = Partial<ListReadingsQuery>;
 
 export interface ReadingList {
   items: ReadingDto[];
@@ -207,7 +165,7 @@ export const IMPORT_ROWS_MAX = 5000;
 export interface ImportRowReport {
   row: number;
   ok: boolean;
-  errors: { field: string; message: string }[];
+  errors: FieldError[];
 }
 
 /** `POST /api/readings/import`: 201 with every row imported, or 422 problem+json whose `rows` lists every bad row (nothing imported). */

@@ -1,5 +1,6 @@
 // Answer types and limits of the reference-set routes. No zod here, so the client can import the
 // values cheaply; the request schemas are in reference-sets.ts.
+import type { MatchBody } from './reference-sets.js';
 import { MAX_NEIGHBOURS } from '../colour/constants.js';
 import type { LabTuple } from '../colour/lab.js';
 import type { ReferenceChip } from '../colour/reference-set.js';
@@ -70,12 +71,7 @@ export interface MatchAnswer {
 }
 
 /** `POST /api/match` body, as the client sends it. */
-export interface MatchRequest {
-  hex?: string;
-  lab?: LabTuple;
-  k?: number;
-  setId?: string;
-}
+export type MatchRequest = MatchBody;
 
 /** How many matches `POST /api/match` gives when `k` is not sent (our own choice). */
 export const MATCH_K_DEFAULT = 5;

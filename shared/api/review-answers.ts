@@ -1,5 +1,6 @@
 // The reviewers' workflow (issue 6): decisions on submitted readings, the queue, and the in-app
 // notices a recorder gets. Without zod so the client may import it; schemas are in reviews.ts.
+import type { ReviewBody } from './reviews.js';
 import type { ReadingDto, ReadingListQuery } from './reading-answers.js';
 
 /** What a reviewer decides: approve, flag with a reason, or ask the recorder to read again. */
@@ -16,10 +17,7 @@ export const REVIEW_DECISION_LABELS: Readonly<Record<ReviewDecision, string>> = 
 export const REVIEW_COMMENT_MAX = 1000;
 
 /** `POST /api/readings/:id/review` (reviewer, admin): a comment is required to flag or ask for a re-read. */
-export interface ReviewRequest {
-  decision: ReviewDecision;
-  comment?: string | null;
-}
+export type ReviewRequest = ReviewBody;
 
 /** One review of a reading, newest last in a reading's history. */
 export interface ReviewDto {

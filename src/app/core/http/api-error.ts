@@ -1,12 +1,8 @@
 import { HttpErrorResponse } from '@angular/common/http';
 
-import type { Problem } from '../../../../shared/api/auth.js';
+import type { FieldError, Problem } from '../../../../shared/api/problem.js';
 
-/** One field the server refused, and why. */
-export interface FieldError {
-  field: string;
-  message: string;
-}
+export type { FieldError } from '../../../../shared/api/problem.js';
 
 /** Titles for answers that carry no problem document (proxy errors, network failures). */
 const FALLBACK_TITLES: Record<number, string> = {

@@ -8,11 +8,12 @@ import {
   MatSnackBarLabel,
   MatSnackBarRef,
 } from '@angular/material/snack-bar';
+import type { FieldError } from '../../../../shared/api/problem.js';
 
 /** What the error snack bar shows: a readable message and any refused fields. */
 export interface ErrorSnackData {
   message: string;
-  fields: readonly { field: string; message: string }[];
+  fields: readonly FieldError[];
 }
 
 /** Snack bar content for an error: an icon and words, with the refused fields listed. */

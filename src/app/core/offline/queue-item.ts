@@ -4,6 +4,7 @@ import type { Region } from '../../../../shared/photo/region.js';
 import type { LabTuple } from '../../../../shared/colour/lab.js';
 import type { PhotoDto } from '../../../../shared/api/photo-answers.js';
 import type { CreateReadingRequest } from '../../../../shared/api/reading-answers.js';
+import type { FieldError } from '../../../../shared/api/problem.js';
 
 /** Where an item stands: waiting (to be sent on the next run), being sent, or refused and waiting for the recorder. */
 export type QueueState = 'waiting' | 'sending' | 'needs-attention';
@@ -14,7 +15,7 @@ export interface QueueError {
   status: number;
   title: string;
   detail: string | null;
-  fieldErrors: readonly { field: string; message: string }[];
+  fieldErrors: readonly FieldError[];
 }
 
 /** What every queued item carries. */

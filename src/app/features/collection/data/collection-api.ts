@@ -2,31 +2,25 @@ import { HttpClient } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
 import { Observable, map, switchMap } from 'rxjs';
 
-import type { Accession, Character, Organ, Plant, SavedSite, Site } from '../../../../../shared/api/collection-answers.js';
-import type { NewSiteBody, SiteFields } from './site-body';
+import type {
+  Accession,
+  Character,
+  CreateAccessionBody,
+  CreateCharacterBody,
+  CreatePlantBody,
+  CreateSiteBody,
+  Plant,
+  SavedSite,
+  Site,
+  UpdateAccessionBody,
+  UpdateCharacterBody,
+  UpdatePlantBody,
+  UpdateSiteBody,
+} from '../../../../../shared/api/collection.js';
 
 /** Where the MCPD passport CSV of every accession is downloaded (`GET /api/accessions/mcpd.csv`). */
 export const PASSPORT_CSV_URL = '/api/accessions/mcpd.csv';
 
-/** Passport fields an admin sets on an accession; null clears an optional one. */
-export type AccessionFields = Omit<Accession, 'id' | 'plants'>;
-
-/** What an admin sets on a new character; code and organ never change afterwards. */
-export interface NewCharacter {
-  code: string;
-  organ: Organ;
-  label: string;
-  howToRead: string;
-  caution: string | null;
-  colour: boolean;
-  driftThreshold: number;
-}
-
-/** What an admin may change on a character. */
-export type CharacterChanges = Partial<Pick<Character, 'label' | 'howToRead' | 'caution' | 'active' | 'driftThreshold'>>;
-
-/** A plant as an admin adds or edits it; the site defaults to the accession's. */
-export type PlantFields = Pick<Plant, 'label' | 'plantedOn'> & { siteId?: number };
 
 /** The collection: sites with their seasons, the character catalogue, accessions and plants; writes are admin-only on the server. */
 @Injectable({ providedIn: 'root' })
@@ -43,15 +37,15 @@ export class CollectionApi {
   }
 
   /** Creates a site with its season scheme; the answer carries the scheme's warnings (uncovered days). */
-  createSite(body: NewSiteBody): Observable<SavedSite> {
+  createSite(body: CreateSiteBody): Observable<SavedSite> {
     return this.http.post<SavedSite>('/api/sites', body);
   }
 
   /** Saves a site's fields, then replaces its whole season scheme. */
-  updateSite(id: number, body: NewSiteBody): Observable<SavedSite> {
+  updateSite(id: number, body: CreateSiteBody): Observable<SavedSite> {
     const { seasons, ...fields } = body;
     return this.http
-      .patch<Site>(`/api/sites/${id}`, fields satisfies SiteFields)
+      .patch<Site>(`/api/sites/${id}`, fields satisfies UpdateSiteBody)
       .pipe(switchMap(() => this.http.put<SavedSite>(`/api/sites/${id}/seasons`, { seasons })));
   }
 
@@ -59,11 +53,11 @@ export class CollectionApi {
     return this.http.get<Character[]>('/api/characters');
   }
 
-  createCharacter(body: NewCharacter): Observable<Character> {
+  createCharacter(body: CreateCharacterBody): Observable<Character> {
     return this.http.post<Character>('/api/characters', body);
   }
 
-  updateCharacter(id: number, changes: CharacterChanges): Observable<Character> {
+  updateCharacter(id: number, changes: UpdateCharacterBody): Observable<Character> {
     return this.http.patch<Character>(`/api/characters/${id}`, changes);
   }
 
@@ -77,19 +71,19 @@ export class CollectionApi {
   }
 
   /** Creates an accession; genus, species and crop default to taro on the server. */
-  createAccession(body: Omit<AccessionFields, 'genus' | 'species' | 'speciesAuthor' | 'cropName'>): Observable<Accession> {
+  createAccession(body: CreateAccessionBody): Observable<Accession> {
     return this.http.post<Accession>('/api/accessions', body);
   }
 
-  updateAccession(id: number, changes: Partial<AccessionFields>): Observable<Accession> {
+  updateAccession(id: number, changes: UpdateAccessionBody): Observable<Accession> {
     return this.http.patch<Accession>(`/api/accessions/${id}`, changes);
   }
 
-  addPlant(accessionId: number, body: PlantFields): Observable<Plant> {
+  addPlant(accessionId: number, body: CreatePlantBody): Observable<Plant> {
     return this.http.post<Plant>(`/api/accessions/${accessionId}/plants`, body);
   }
 
-  updatePlant(id: number, changes: Partial<PlantFields>): Observable<Plant> {
+  updatePlant(id: number, changes: UpdatePlantBody): Observable<Plant> {
     return this.http.patch<Plant>(`/api/plants/${id}`, changes);
   }
 }

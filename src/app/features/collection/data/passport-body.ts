@@ -1,4 +1,4 @@
-import type { AccessionFields } from './collection-api';
+import type { CreateAccessionBody } from '../../../../../shared/api/collection.js';
 
 /** The passport form as typed: text everywhere except the site and status. */
 export interface PassportForm {
@@ -16,7 +16,7 @@ export interface PassportForm {
 }
 
 /** The passport fields the server takes; genus, species and crop stay as the server holds them (taro by default). */
-export type PassportBody = Omit<AccessionFields, 'genus' | 'species' | 'speciesAuthor' | 'cropName'>;
+export type PassportBody = Omit<CreateAccessionBody, 'plants'>;
 
 /** The form as the server takes it: text trimmed, empty optional text as null, other names split on ";" (MCPD's separator). */
 export function passportBody(form: PassportForm): PassportBody {

@@ -1,13 +1,5 @@
-import type { Site } from '../../../../../shared/api/collection-answers.js';
+import type { CreateSiteBody } from '../../../../../shared/api/collection.js';
 import type { SeasonDraft } from './season-form';
-
-/** A site's own fields as `PATCH /api/sites/:id` takes them (seasons go separately). */
-export type SiteFields = Pick<Site, 'code' | 'name' | 'timezone' | 'latitude' | 'longitude' | 'elevationM'>;
-
-/** What `POST /api/sites` takes: the site's fields and its whole season scheme. */
-export interface NewSiteBody extends SiteFields {
-  seasons: SeasonDraft[];
-}
 
 /** The site form's value as the server takes it: text trimmed, empty numbers as null. */
 export function siteBody(value: {
@@ -18,7 +10,7 @@ export function siteBody(value: {
   longitude: number | null;
   elevationM: number | null;
   seasons: SeasonDraft[];
-}): NewSiteBody {
+}): CreateSiteBody {
   return {
     code: value.code.trim(),
     name: value.name.trim(),

@@ -5,39 +5,19 @@ import { Observable } from 'rxjs';
 import type {
   AccessionDescriptors,
   Descriptor,
-  DescriptorCategory,
-  DescriptorKind,
   Observation,
   ObservationPage,
-  Unit,
 } from '../../../../../shared/api/descriptor-answers.js';
+import type { CreateDescriptorBody, CreateObservationBody, UpdateDescriptorBody } from '../../../../../shared/api/descriptors.js';
 
 /** What an admin sets on a new descriptor; code, kind and ratio parts never change afterwards. */
-export interface NewDescriptor {
-  code: string;
-  label: string;
-  object: string;
-  kind: DescriptorKind;
-  categories?: DescriptorCategory[];
-  numeratorCode?: string;
-  denominatorCode?: string;
-  howToMeasure: string;
-  caution: string | null;
-}
+export type NewDescriptor = CreateDescriptorBody;
 
 /** What an admin may change on a descriptor (categories may be relabelled or added, never removed). */
-export type DescriptorChanges = Partial<Pick<Descriptor, 'label' | 'object' | 'howToMeasure' | 'caution' | 'active' | 'categories'>>;
+export type DescriptorChanges = UpdateDescriptorBody;
 
 /** One value as a recorder enters it: a number in its unit, or a category id. */
-export interface NewObservation {
-  accessionId: number;
-  plantId: number | null;
-  descriptorId: number;
-  value?: number;
-  unit?: Unit;
-  category?: string;
-  notes?: string | null;
-}
+export type NewObservation = CreateObservationBody;
 
 /** The descriptor catalogue and observations against it. */
 @Injectable({ providedIn: 'root' })
