@@ -64,8 +64,13 @@ class TinyBrapiClient {
     private readonly token: string,
   ) {}
 
+  /** One call; every JSON answer it gets is validated against the specification's schema for that call (or its error answer). */
   async get(call: string, query: Record<string, string | number> = {}): Promise<Response> {
-    return request(this.h.app).get(`/brapi/v2/${call}`).query(query).set('Authorization', `Bearer ${this.token}`);
+    const res = await request(this.h.app).get(`/brapi/v2/${call}`).query(query).set('Authorization', `Bearer ${this.token}`);
+    const service = call.replace(/^germplasm\/[^/]+$/, 'germplasm/{germplasmDbId}').replace(/^images\/[^/]+$/, 'images/{imageDbId}');
+    if (res.status === 200 && RESPONSE_OF[service]) assertValid(res.body, RESPONSE_OF[service]);
+    if (res.status >= 400) assertValid(res.body, 'brapi-core.json#/definitions/ErrorAnswer');
+    return res;
   }
 
   /** Every item of a list call, following `totalPages`. */
@@ -394,6 +399,20 @@ describe('BrAPI v2.1 interface', () => {
       assert.ok(!now.some((o) => o.additionalInfo['readingId'] === String(old.id)));
       const mine = now.filter((o) => o.additionalInfo['readingId'] === String(fixed.body.id));
       assert.deepEqual(mine.map((o) => o.value).slice(0, 3), ['51.23', '11.11', '22.22']);
+    });
+
+    test('should serve a corrected descriptor value and never the value it superseded', async () => {
+      const [{ id: descriptorId }] = (await h.ds.query(`SELECT "id" FROM "descriptor" WHERE "code" = 'petiole.length'`)) as [{ id: number }];
+      const accession = (await recorder.get('/api/accessions').expect(200)).body[0] as { id: number; plants: { id: number }[] };
+      const first = await recorder.post('/api/observations', { accessionId: accession.id, plantId: accession.plants[0]!.id, descriptorId, value: 40, unit: 'in' });
+      assert.equal(first.status, 201, first.text);
+      const seen = async (id: number) => (await brapi.get('observations', { observationDbId: `o${id}` })).body.result.data as Obs[];
+      assert.equal((await seen(first.body.id))[0]!.value, '1.016', '40 in is 1.016 m (NIST SP 811: 1 in = 0.0254 m exactly)');
+      const fixed = await recorder.post(`/api/observations/${first.body.id}/supersede`, { value: 101.6, unit: 'cm' });
+      assert.equal(fixed.status, 201, fixed.text);
+      assert.deepEqual(await seen(first.body.id), []);
+      assert.equal((await seen(fixed.body.id))[0]!.value, '1.016');
+      assert.equal((await seen(fixed.body.id))[0]!.observationVariableDbId, `d${descriptorId}`);
     });
 
     test('should answer the same ids and values after a restart', async () => {
