@@ -1,6 +1,7 @@
 import { Routes } from '@angular/router';
 
 import { authGuard } from './core/auth/auth-guard';
+import { homeGuard } from './core/auth/home-guard';
 import { roleGuard } from './core/auth/role-guard';
 
 /** Public pages first, then the signed-in shell; each section's roles match its entry in nav-items.ts. */
@@ -30,7 +31,8 @@ export const routes: Routes = [
     canActivate: [authGuard],
     loadComponent: () => import('./core/layout/shell').then((m) => m.Shell),
     children: [
-      { path: '', pathMatch: 'full', redirectTo: 'collection' },
+      // Each role starts on its own section; the guard runs after authGuard, so the account is known.
+      { path: '', pathMatch: 'full', canActivate: [homeGuard], children: [] },
       {
         path: 'collection',
         loadChildren: () => import('./features/collection/collection.routes').then((m) => m.COLLECTION_ROUTES),
@@ -83,7 +85,7 @@ export const routes: Routes = [
         canActivate: [roleGuard('admin')],
         loadChildren: () => import('./features/admin/admin.routes').then((m) => m.ADMIN_ROUTES),
       },
-      { path: '**', redirectTo: 'collection' },
+      { path: '**', redirectTo: '' },
     ],
   },
 ];

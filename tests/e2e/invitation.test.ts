@@ -47,7 +47,8 @@ test('should let an admin invite a trainer who follows the mailed link, sets a p
   await invitee.getByLabel('Repeat it').fill('a-long-trainer-passphrase');
   await screenshot(invitee, 'invitation-accept');
   await invitee.getByRole('button', { name: 'Accept and sign in' }).click();
-  await invitee.waitForURL((u) => u.pathname.startsWith('/collection'));
+  // A trainer starts on Calibration.
+  await invitee.waitForURL((u) => u.pathname.startsWith('/calibration'));
   // The toolbar names the new person once their account has loaded: wait for that, then read it.
   await invitee.locator('mat-toolbar', { hasText: 'trainer' }).waitFor();
   const me = (await invitee.evaluate(() => fetch('/api/auth/me').then((r) => r.json()))) as { user: { email: string; role: string } };

@@ -14,6 +14,14 @@ const EXPECTED_NAV: Record<Role, { shows: string[]; hides: string[] }> = {
   recorder: { shows: ['Collection', 'Account'], hides: ['Users', 'Outbox', 'BrAPI tokens', 'Audit'] },
 };
 
+/** Where each role lands after signing in, and the heading it sees there. */
+const LANDING = {
+  admin: { path: '/collection', heading: 'Collection' },
+  trainer: { path: '/calibration', heading: 'Calibration' },
+  reviewer: { path: '/review', heading: 'Review' },
+  recorder: { path: '/record', heading: 'New reading' },
+} as const;
+
 describe('signing in as each demo role in Chromium', () => {
   let browser: BrowserContext;
 
@@ -28,8 +36,11 @@ describe('signing in as each demo role in Chromium', () => {
     test(`should show the ${role} their own navigation, name and role, then sign out`, async () => {
       const page = await browser.newPage();
       await signIn(page, app.url, `${role}@demo.test`, DEMO_PASSWORD);
-      await page.getByRole('heading', { name: 'Collection' }).waitFor();
+      // Each role starts on its own section.
+      await page.waitForURL((u) => u.pathname === LANDING[role].path);
+      await page.getByRole('heading', { name: LANDING[role].heading, exact: true }).waitFor();
       await page.locator('mat-toolbar', { hasText: role }).waitFor();
+      if (role !== 'admin') await page.goto(`${app.url}/collection`);
       const nav = (await page.locator('mat-sidenav a').allInnerTexts()).join(' | ');
       for (const label of EXPECTED_NAV[role].shows) assert.match(nav, new RegExp(`\\b${label}\\b`), `${role} should see ${label}`);
       for (const label of EXPECTED_NAV[role].hides) assert.doesNotMatch(nav, new RegExp(`\\b${label}\\b`), `${role} should not see ${label}`);
@@ -62,7 +73,7 @@ describe('signing in as each demo role in Chromium', () => {
     const page = await browser.newPage();
     await signIn(page, app.url, 'recorder@demo.test', DEMO_PASSWORD);
     await page.goto(`${app.url}/admin/users`);
-    await page.getByRole('heading', { name: 'Collection' }).waitFor();
+    await page.getByRole('heading', { name: 'New reading' }).waitFor();
     assert.ok(!new URL(page.url()).pathname.startsWith('/admin'));
     await page.close();
   });
@@ -87,6 +98,9 @@ describe('a recorder on a phone', () => {
     await page.goto(`${app.url}/sign-in`);
     await screenshot(page, 'sign-in-phone');
     await signIn(page, app.url, 'recorder@demo.test', DEMO_PASSWORD);
+    await page.waitForURL((u) => u.pathname === '/record');
+    await page.getByRole('heading', { name: 'New reading' }).waitFor();
+    await page.goto(`${app.url}/collection`);
     await page.getByRole('heading', { name: 'Collection' }).waitFor();
     await page.locator('text=HL-0001').first().waitFor();
     await screenshot(page, 'collection-recorder-phone');

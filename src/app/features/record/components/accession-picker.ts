@@ -26,7 +26,7 @@ export function accessionText(accession: Accession | null | undefined): string {
   imports: [MatAutocompleteModule, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, ReactiveFormsModule],
   changeDetection: ChangeDetectionStrategy.OnPush,
   template: `
-    <mat-form-field class="wide">
+    <mat-form-field class="wide" [class.hl-invalid]="invalidShown()">
       <mat-label>Accession</mat-label>
       <mat-icon matPrefix aria-hidden="true">potted_plant</mat-icon>
       <input
@@ -39,6 +39,9 @@ export function accessionText(accession: Accession | null | undefined): string {
         autocapitalize="characters"
         spellcheck="false"
         placeholder="Number or name"
+        required
+        [attr.aria-invalid]="invalidShown()"
+        aria-describedby="accession-problem"
       />
       <mat-autocomplete #auto="matAutocomplete" (optionSelected)="picked($event)" [hideSingleSelectionIndicator]="true">
         @for (a of options(); track a.id) {
@@ -52,12 +55,10 @@ export function accessionText(accession: Accession | null | undefined): string {
           <mat-option disabled>No accession matches.</mat-option>
         }
       </mat-autocomplete>
-      @if (control().hasError('server')) {
-        <mat-error>{{ control().getError('server') }}</mat-error>
-      } @else if (control().invalid) {
-        <mat-error>Choose the accession.</mat-error>
-      }
     </mat-form-field>
+    @if (invalidShown()) {
+      <p class="field-error" id="accession-problem" role="alert">{{ control().getError('server') ?? 'Choose the accession (required).' }}</p>
+    }
 
     <details class="label-box" [open]="labelOpen()">
       <summary (click)="$event.preventDefault(); labelOpen.set(!labelOpen())"><mat-icon aria-hidden="true">qr_code_scanner</mat-icon> Read its label text</summary>
@@ -77,6 +78,16 @@ export function accessionText(accession: Accession | null | undefined): string {
     }
     .wide {
       width: 100%;
+    }
+    .field-error {
+      margin: -12px 0 12px;
+      color: var(--mat-sys-error);
+      font: var(--mat-sys-body-small);
+    }
+    .hl-invalid {
+      --mat-form-field-outlined-outline-color: var(--mat-sys-error);
+      --mat-form-field-filled-active-indicator-color: var(--mat-sys-error);
+      --mat-form-field-filled-label-text-color: var(--mat-sys-error);
     }
     .label-box summary {
       display: flex;
@@ -106,6 +117,8 @@ export class AccessionPicker {
   protected readonly labelProblem = signal<string | null>(null);
   protected readonly options = computed(() => filterAccessions(this.query(), this.accessions()));
 
+  /** Whether the missing or refused accession is shown as an error. */
+  protected readonly invalidShown = signal(false);
   private readonly chosenId = signal<number | null>(null);
   private readonly chosen = computed(() => this.accessions().find((a) => a.id === this.chosenId()) ?? null);
 
@@ -118,7 +131,14 @@ export class AccessionPicker {
       };
       follow(control.value);
       const subscription = control.valueChanges.subscribe(follow);
-      onCleanup(() => subscription.unsubscribe());
+      // The input is not bound to the control, so its touched/invalid state is followed by hand.
+      const status = () => this.invalidShown.set(control.invalid && control.touched);
+      status();
+      const events = control.events.subscribe(status);
+      onCleanup(() => {
+        subscription.unsubscribe();
+        events.unsubscribe();
+      });
     });
     // The list may arrive after the remembered id: show its words once it does.
     effect(() => {

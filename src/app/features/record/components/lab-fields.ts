@@ -1,11 +1,13 @@
 import { ChangeDetectionStrategy, Component, computed, effect, input, signal } from '@angular/core';
 import { FormControl, FormGroup, ReactiveFormsModule } from '@angular/forms';
 import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatButtonModule } from '@angular/material/button';
 import { MatInputModule } from '@angular/material/input';
 
 import { LAB_INPUT_LIMITS } from '../../../../../shared/api/reference-set-answers.js';
 import { displayHex } from '../../../../../shared/colour/display-hex.js';
 import { labQuery } from '../../reference-set/data/colour-query';
+import { SignedNumberInput } from './signed-number-input';
 
 /** The three CIELAB fields of an instrument reading. */
 export type LabGroup = FormGroup<{ l: FormControl<number | null>; a: FormControl<number | null>; b: FormControl<number | null> }>;
@@ -13,21 +15,26 @@ export type LabGroup = FormGroup<{ l: FormControl<number | null>; a: FormControl
 /** An instrument's L*, a*, b* typed in, with range hints and the colour previewed on the grey surround as it is typed. */
 @Component({
   selector: 'hl-lab-fields',
-  imports: [MatFormFieldModule, MatInputModule, ReactiveFormsModule],
+  imports: [MatButtonModule, MatFormFieldModule, MatInputModule, ReactiveFormsModule, SignedNumberInput],
   changeDetection: ChangeDetectionStrategy.OnPush,
   template: `
     <p class="hl-muted hint">From an instrument set to D65 and the 2° observer (specular component as your protocol says).</p>
     <div class="row" [formGroup]="group()">
       <div class="fields">
         @for (f of fields; track f.name) {
-          <mat-form-field hideRequiredMarker>
+          <mat-form-field>
             <mat-label>{{ f.label }}</mat-label>
-            <input matInput type="number" inputmode="decimal" step="any" [formControlName]="f.name" [attr.min]="f.min" [attr.max]="f.max" />
+            <input matInput hlSignedNumber inputmode="decimal" [formControlName]="f.name" />
+            @if (f.name !== 'l') {
+              <button matSuffix mat-icon-button type="button" class="sign" (click)="flipSign(f.name)" [attr.aria-label]="'Change the sign of ' + f.label">±</button>
+            }
             <mat-hint>{{ f.hint }}</mat-hint>
             @if (group().controls[f.name].hasError('server')) {
               <mat-error>{{ group().controls[f.name].getError('server') }}</mat-error>
             } @else if (group().controls[f.name].hasError('required')) {
               <mat-error>Enter {{ f.label }}.</mat-error>
+            } @else if (group().controls[f.name].hasError('number')) {
+              <mat-error>{{ f.label }} must be a number, like -12.5.</mat-error>
             } @else if (group().controls[f.name].invalid) {
               <mat-error>{{ f.label }} from {{ f.hint }}.</mat-error>
             }
@@ -84,6 +91,9 @@ export type LabGroup = FormGroup<{ l: FormControl<number | null>; a: FormControl
     .swatch.empty {
       background: repeating-linear-gradient(45deg, #777777, #777777 6px, #6b6b6b 6px, #6b6b6b 12px);
     }
+    .sign {
+      font-size: 22px;
+    }
     .code,
     .note {
       font-size: 12px;
@@ -105,6 +115,14 @@ export class LabFields {
     const query = labQuery(this.values());
     return query ? displayHex(query.lab) : null;
   });
+
+  /** The ± key: phones' decimal keypads often lack a minus sign. */
+  protected flipSign(name: 'a' | 'b'): void {
+    const control = this.group().controls[name];
+    const value = control.value;
+    if (value !== null && Number.isFinite(value)) control.setValue(value === 0 ? 0 : -value);
+    control.markAsTouched();
+  }
 
   constructor() {
     effect((onCleanup) => {

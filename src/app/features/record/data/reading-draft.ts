@@ -37,6 +37,11 @@ const { lMin, lMax, abMax } = LAB_INPUT_LIMITS;
 /** The server's limit on the instrument's name (shared/api/readings.ts has it inline, not as a constant). */
 const INSTRUMENT_MAX = 80;
 
+/** Refuses what a text field could not read as a number (NaN from `parseSignedNumber`). */
+function finiteNumber(control: AbstractControl<number | null>): ValidationErrors | null {
+  return control.value === null || Number.isFinite(control.value) ? null : { number: true };
+}
+
 function hexValidator(control: AbstractControl<string | null>): ValidationErrors | null {
   return !control.value || isHex(control.value) ? null : { hex: true };
 }
@@ -50,9 +55,9 @@ export function buildReadingForm() {
     siteId: new FormControl<number | null>(null, Validators.required),
     method: new FormControl<ReadingMethod | null>(null, Validators.required),
     lab: new FormGroup({
-      l: new FormControl<number | null>(null, [Validators.min(lMin), Validators.max(lMax)]),
-      a: new FormControl<number | null>(null, [Validators.min(-abMax), Validators.max(abMax)]),
-      b: new FormControl<number | null>(null, [Validators.min(-abMax), Validators.max(abMax)]),
+      l: new FormControl<number | null>(null, [finiteNumber, Validators.min(lMin), Validators.max(lMax)]),
+      a: new FormControl<number | null>(null, [finiteNumber, Validators.min(-abMax), Validators.max(abMax)]),
+      b: new FormControl<number | null>(null, [finiteNumber, Validators.min(-abMax), Validators.max(abMax)]),
     }),
     chipCode: new FormControl<string | null>(null),
     hex: new FormControl<string | null>(null, hexValidator),

@@ -85,6 +85,63 @@ describe('ReadingForm', () => {
     expect(el.textContent).toContain('Choose the light you read in.');
   });
 
+  it('should mark the missing accession, and put the cursor in it, the first field with a problem', async () => {
+    const { fixture, el } = await open();
+    const input = el.querySelector('hl-accession-picker input') as HTMLInputElement;
+    expect(input.required).toBe(true);
+    click(el, 'Save reading');
+    fixture.detectChanges();
+    await fixture.whenStable();
+    expect(el.querySelector('hl-accession-picker .field-error')?.textContent).toContain('Choose the accession');
+    expect(input.getAttribute('aria-invalid')).toBe('true');
+    expect(document.activeElement).toBe(input);
+  });
+
+  it('should take a negative a* typed as text, and flip b* with the ± key', async () => {
+    localStorage.setItem(READING_MEMORY_KEY, JSON.stringify({ accessionId: 1, characterId: 5, light: 'overcast' }));
+    const { fixture, el } = await open();
+    click(el, 'Instrument L*a*b*');
+    fixture.detectChanges();
+    const inputs = [...el.querySelectorAll('hl-lab-fields input')] as HTMLInputElement[];
+    expect(inputs.map((i) => i.type)).toEqual(['text', 'text', 'text']);
+    const type = (input: HTMLInputElement, text: string) => {
+      input.value = text;
+      input.dispatchEvent(new Event('input'));
+    };
+    type(inputs[0]!, '41,5');
+    type(inputs[1]!, '\u221212.5');
+    type(inputs[2]!, '8');
+    (el.querySelector('button[aria-label="Change the sign of b*"]') as HTMLButtonElement).click();
+    fixture.detectChanges();
+    expect(form(fixture).controls.lab.getRawValue()).toEqual({ l: 41.5, a: -12.5, b: -8 });
+    expect(inputs[2]!.value).toBe('-8');
+    type(inputs[1]!, '12-');
+    fixture.detectChanges();
+    expect(form(fixture).controls.lab.controls.a.hasError('number')).toBe(true);
+  });
+
+  it('should open on the plant and character of the sheet, and offer the next character on that plant after saving', async () => {
+    localStorage.setItem(READING_MEMORY_KEY, JSON.stringify({ accessionId: 2, characterId: 7, light: 'overcast', method: 'instrument', instrument: 'Bench spectro A' }));
+    const { fixture, el } = await open({ sheet: '11', character: '5' });
+    const f = form(fixture);
+    expect(f.getRawValue()).toMatchObject({ accessionId: 1, plantId: 11, characterId: 5, method: 'instrument', light: 'overcast', instrument: 'Bench spectro A', siteId: 1 });
+    f.controls.lab.setValue({ l: 40, a: 10, b: 5 });
+    click(el, 'Save reading');
+    await settle();
+    http.expectOne('/api/readings').flush(savedReading());
+    await settle();
+    fixture.detectChanges();
+    expect(el.textContent).not.toContain('Next plant');
+    click(el, 'Next character on this plant');
+    const sheet = http.expectOne('/api/plants/11/sheet');
+    const row = (id: number, status: string) => ({ key: `c${id}`, sortOrder: id, colour: { characterId: id, code: `c${id}`, label: `C${id}`, organ: 'corm', caution: null, status, reading: null, skip: null }, descriptor: null });
+    sheet.flush({ plant: { id: 11 }, accession: { id: 1 }, site: { id: 1 }, rows: [row(5, 'done'), row(7, 'todo')], progress: {} });
+    await fixture.whenStable();
+    fixture.detectChanges();
+    expect(f.getRawValue()).toMatchObject({ accessionId: 1, plantId: 11, characterId: 7, method: 'instrument', light: 'overcast', instrument: 'Bench spectro A', lab: { l: null, a: null, b: null } });
+    expect(el.textContent).toContain('Save reading');
+  });
+
   it('should show the server’s refusal beside the field it names', async () => {
     localStorage.setItem(READING_MEMORY_KEY, JSON.stringify({ accessionId: 1, characterId: 5, light: 'overcast' }));
     const { fixture, el } = await open();

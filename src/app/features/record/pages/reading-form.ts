@@ -50,6 +50,11 @@ import { nextColourTodo } from '../data/sheet-progress';
 /** What the draft store keeps: the form's value and the reading it corrects, if any. */
 type KeptDraft = ReadingFormValue & { correcting: number | null };
 
+/** Where a problem shows, in page order: a marked field, a choice group left empty, the missing photo, the refusal. */
+const FIRST_PROBLEM = '.hl-invalid, input.ng-invalid.ng-touched, mat-select.ng-invalid.ng-touched, textarea.ng-invalid.ng-touched, .methods.invalid, .lights.invalid, .photo-missing, .problems';
+/** What can take the cursor inside a problem. */
+const FOCUSABLE = 'input, textarea, mat-select, button, [tabindex]';
+
 /** Quick choices for which leaf (our own words; the character's "how to read it" names the usual one). */
 const LEAF_CHOICES = ['2nd open leaf', '3rd open leaf', '4th open leaf'] as const;
 
@@ -402,9 +407,13 @@ export class ReadingForm {
     return this.accessions.value().find((a) => a.id === id) ?? null;
   }
 
+  /** Brings the first field with a problem into view and puts the cursor (or focus) in it. */
   private scrollToFirstProblem(): void {
-    const el = this.host.nativeElement.querySelector('.ng-invalid.ng-touched:not(form), .photo-missing, .problems');
-    el?.scrollIntoView?.({ block: 'center', behavior: 'smooth' });
+    const el = this.host.nativeElement.querySelector<HTMLElement>(FIRST_PROBLEM);
+    if (!el) return;
+    el.scrollIntoView?.({ block: 'center' });
+    const target = el.matches(FOCUSABLE) ? el : el.querySelector<HTMLElement>(FOCUSABLE);
+    target?.focus({ preventScroll: true });
   }
 }
 
