@@ -1,11 +1,11 @@
 import { Router } from 'express';
-import { createDescriptorBody, createObservationBody, observationQuery, supersedeObservationBody, updateDescriptorBody } from '../../shared/api/descriptors.js';
+import { createDescriptorBody, createObservationBody, createObservationsBody, observationQuery, supersedeObservationBody, updateDescriptorBody } from '../../shared/api/descriptors.js';
 import { actorOf, allow, currentUser, signedIn } from '../core/access.js';
 import type { AppContext } from '../core/context.js';
 import { idParam, parse } from '../core/validate.js';
 import { accessionDescriptors } from './descriptor-values.js';
 import { createDescriptor, listDescriptors, updateDescriptor } from './descriptors.js';
-import { createObservation, listObservations, supersedeObservation } from './observations.js';
+import { createObservation, createObservations, listObservations, supersedeObservation } from './observations.js';
 
 /** Who may enter and correct observations (the roles that take readings; docs/architecture.md, roles). */
 const OBSERVERS = allow('recorder', 'trainer', 'admin');
@@ -36,6 +36,10 @@ export function descriptorRoutes(ctx: AppContext): Router {
 
   router.post('/observations', OBSERVERS, async (req, res) => {
     res.status(201).json(await createObservation(ctx.ds, actorOf(req), currentUser(req), parse(createObservationBody, req.body)));
+  });
+
+  router.post('/observations/batch', OBSERVERS, async (req, res) => {
+    res.status(201).json(await createObservations(ctx.ds, actorOf(req), currentUser(req), parse(createObservationsBody, req.body)));
   });
 
   router.post('/observations/:id/supersede', OBSERVERS, async (req, res) => {

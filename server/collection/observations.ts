@@ -1,7 +1,8 @@
 import { IsNull, type DataSource, type EntityManager, type FindOptionsWhere } from 'typeorm';
-import type { CreateObservationBody, Observation as ObservationDto, ObservationPage, ObservationQuery, SupersedeObservationBody } from '../../shared/api/descriptors.js';
+import type { CreateObservationBody, CreateObservationsBody, Observation as ObservationDto, ObservationPage, ObservationQuery, SupersedeObservationBody } from '../../shared/api/descriptors.js';
 import { KIND_QUANTITY } from '../../shared/api/descriptor-answers.js';
 import { quantityOf, toSi, unitsOf, type Unit } from '../../shared/units/units.js';
+import { implausibleValue } from '../../shared/units/plausible-ranges.js';
 import { recordAudit, type Actor } from '../audit/audit.js';
 import type { User } from '../auth/user.entity.js';
 import { AppError } from '../core/app-error.js';
@@ -32,6 +33,8 @@ export function valueFor(d: Descriptor, input: ValueInput): Pick<Observation, 'v
   if (unit === undefined) throw bad('unit', `is required: one of ${unitsOf(quantity).join(', ')}`);
   if (quantityOf(unit) !== quantity) throw bad('unit', `must be one of ${unitsOf(quantity).join(', ')} for a ${quantity}, not ${unit}`);
   if (quantity === 'count' && !Number.isInteger(input.value)) throw bad('value', 'must be a whole number for a count');
+  const implausible = implausibleValue(d, quantity, input.value, unit);
+  if (implausible) throw bad('value', `is out of range: ${implausible}`);
   return { valueSi: toSi(input.value, unit), category: null, enteredValue: input.value, enteredUnit: unit };
 }
 
@@ -56,7 +59,11 @@ async function reload(m: EntityManager, id: number): Promise<ObservationDto> {
 
 /** Stores one observation in SI, with what was typed; 400 naming the field for unknown ids or a value that does not fit. */
 export async function createObservation(ds: DataSource, actor: Actor, observer: User, body: CreateObservationBody): Promise<ObservationDto> {
-  return ds.transaction(async (m) => {
+  return ds.transaction((m) => createIn(m, actor, observer, body));
+}
+
+async function createIn(m: EntityManager, actor: Actor, observer: User, body: CreateObservationBody): Promise<ObservationDto> {
+  {
     const accession = await m.findOneBy(Accession, { id: body.accessionId });
     if (!accession) throw AppError.badRequest(`No accession ${body.accessionId}.`, [{ field: 'accessionId', message: `accession ${body.accessionId} does not exist` }]);
     const descriptor = await m.findOneBy(Descriptor, { id: body.descriptorId });
@@ -69,6 +76,27 @@ export async function createObservation(ds: DataSource, actor: Actor, observer: 
     );
     await recordAudit(m, actor, 'observation.created', `observation:${saved.id}`, { accessionId: accession.id, plantId: plant?.id ?? null, descriptor: descriptor.code, ...value });
     return reload(m, saved.id);
+  }
+}
+
+/**
+ * Stores several observations of one plant at once, all or nothing: the first value that does not
+ * fit refuses the lot with a 400 naming it (`observations.3.value`), and nothing is written.
+ */
+export async function createObservations(ds: DataSource, actor: Actor, observer: User, body: CreateObservationsBody): Promise<ObservationDto[]> {
+  return ds.transaction(async (m) => {
+    const saved: ObservationDto[] = [];
+    for (const [i, item] of body.observations.entries()) {
+      try {
+        saved.push(await createIn(m, actor, observer, item));
+      } catch (error) {
+        if (error instanceof AppError && error.errors) {
+          throw AppError.badRequest(`Value ${i + 1} of ${body.observations.length}: ${error.detail} Nothing was saved.`, error.errors.map((e) => ({ field: `observations.${i}.${e.field}`, message: e.message })));
+        }
+        throw error;
+      }
+    }
+    return saved;
   });
 }
 

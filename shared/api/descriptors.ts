@@ -104,6 +104,18 @@ export const createObservationBody = z.object({
 });
 export type CreateObservationBody = z.infer<typeof createObservationBody>;
 
+/** Most values saved at once (our own cap: a whole catalogue for one plant, with room to spare). */
+export const OBSERVATIONS_BATCH_MAX = 100;
+
+/**
+ * `POST /api/observations/batch` (recorder, trainer, admin) → 201 `Observation[]`: several values
+ * saved all or nothing; a refusal names the value (`observations.2.value`) and nothing is stored.
+ */
+export const createObservationsBody = z.object({
+  observations: z.array(createObservationBody, { message: 'must be a list of observations' }).min(1, { message: 'must hold at least one value' }).max(OBSERVATIONS_BATCH_MAX, { message: `must hold at most ${OBSERVATIONS_BATCH_MAX} values` }),
+});
+export type CreateObservationsBody = z.infer<typeof createObservationsBody>;
+
 /**
  * `POST /api/observations/:id/supersede` (recorder: own only; trainer: own only; admin: any) → 201 the new
  * `Observation`; the old one stays, linked both ways. Same accession and descriptor; plant optional (defaults to the old one's).

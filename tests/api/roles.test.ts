@@ -122,6 +122,7 @@ const ROUTES: readonly RouteCase[] = [
   { method: 'PATCH', path: '/api/descriptors/:id', access: ADMIN, ok: 200, url: (f) => `/api/descriptors/${f.descriptorId}`, body: (f) => ({ object: `matrix part ${f.next()}` }) },
   { method: 'GET', path: '/api/observations', access: EVERYONE, ok: 200 },
   { method: 'POST', path: '/api/observations', access: OBSERVERS, ok: 201, body: (f) => ({ accessionId: f.accessionId, plantId: f.plantId, descriptorId: f.descriptorId, value: 40, unit: 'in' }) },
+  { method: 'POST', path: '/api/observations/batch', access: OBSERVERS, ok: 201, body: (f) => ({ observations: [{ accessionId: f.accessionId, plantId: f.plantId, descriptorId: f.descriptorId, value: 41, unit: 'in' }] }) },
   { method: 'POST', path: '/api/observations/:id/supersede', access: OBSERVERS, ok: 201, url: (f, role) => `/api/observations/${f.observationBy(role)}/supersede`, body: () => ({ value: 101.6, unit: 'cm' }) },
   { method: 'GET', path: '/api/plants/:id/sheet', access: EVERYONE, ok: 200, url: (f) => `/api/plants/${f.plantId}/sheet` },
   { method: 'POST', path: '/api/plants/:id/skips', access: OBSERVERS, ok: 201, url: (f) => `/api/plants/${f.plantId}/skips`, body: (f) => ({ characterId: f.characterId, reason: `Matrix skip ${f.next()}` }) },
