@@ -49,11 +49,11 @@ export class DescriptorRow {
   });
 
   protected typeValue(text: string): void {
-    this.entryChange.emit(typeInto(this.entry(), text));
+    this.entryChange.emit(typeInto(this.entry(), text, this.descriptor()));
   }
 
   protected chooseUnit(unit: Unit): void {
-    this.entryChange.emit(switchUnit(this.entry(), unit));
+    this.entryChange.emit(switchUnit(this.entry(), unit, this.descriptor()));
   }
 
   protected chooseCategory(category: string | null): void {

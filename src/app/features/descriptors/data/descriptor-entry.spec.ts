@@ -114,11 +114,21 @@ describe('entry rows', () => {
     expect(row.invalid).toBe(true);
   });
 
-  it('should show the typed value converted when the unit is switched, keeping what was typed', () => {
-    const row = switchUnit(typeInto(blankEntry('length', 'imperial'), '40'), 'cm');
-    expect(row.text).toBe('101.6');
-    expect(row.unit).toBe('cm');
+  it('should keep the typed number when the unit is switched, reading it in the new unit', () => {
+    // A recorder who typed 40 with the toggle on cm, then sees the tape was in inches, means 40 in.
+    const row = switchUnit(typeInto(blankEntry('length', 'metric'), '40'), 'in');
+    expect(row.text).toBe('40');
+    expect(row.unit).toBe('in');
     expect(row.typed).toEqual({ value: 40, unit: 'in' });
+  });
+
+  it('should refuse a count that is not a whole number, and an implausible value, before sending', () => {
+    const count = descriptor(8, 'suckers.count', 'Number of suckers', 'count');
+    expect(typeInto(blankEntry('count', 'metric'), '2.5', count).problem).toBe('Number of suckers is a count: type a whole number.');
+    expect(observationOf(count, typeInto(blankEntry('count', 'metric'), '2.5', count), 1, null)).toEqual([]);
+    const row = typeInto({ ...blankEntry('length', 'metric'), unit: 'm' }, '127', petiole);
+    expect(row.problem).toMatch(/127 m is not a plausible petiole length: expected 0.02 m to 3 m/);
+    expect(observationOf(petiole, row, 1, null)).toEqual([]);
   });
 
   it('should take a new value in the new unit once the person types again', () => {

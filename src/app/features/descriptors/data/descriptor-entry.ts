@@ -1,4 +1,6 @@
 import type { Descriptor, DescriptorKind, Unit, UnitSystem } from '../../../../../shared/api/descriptor-answers.js';
+import { KIND_QUANTITY } from '../../../../../shared/api/descriptor-answers.js';
+import { implausibleValue } from '../../../../../shared/units/plausible-ranges.js';
 import { formatRatio, fromSi, toSi } from '../../../../../shared/units/units.js';
 import type { NewObservation } from './descriptors-api';
 
@@ -88,6 +90,8 @@ export interface RowEntry {
   typed: TypedValue | null;
   /** Whether the text is not a number (the row says so). */
   invalid: boolean;
+  /** Why a number cannot be sent (not a whole count, out of the plausible range), in words; null when it can. */
+  problem?: string | null;
   category: string | null;
 }
 
@@ -96,20 +100,33 @@ export function blankEntry(kind: DescriptorKind, system: UnitSystem): RowEntry {
   return { text: '', unit: defaultUnit(kind, system), typed: null, invalid: false, category: null };
 }
 
-/** The row after the person typed into its field: the text is read in the unit shown. */
-export function typeInto(entry: RowEntry, text: string): RowEntry {
+/**
+ * The row after the person typed into its field: the text is read in the unit shown. With the
+ * descriptor, a count that is not whole or a value outside its plausible range gets a `problem`
+ * (the same rules the server applies), so nothing doomed is sent.
+ */
+export function typeInto(entry: RowEntry, text: string, d?: Pick<Descriptor, 'code' | 'label' | 'kind'>): RowEntry {
   const value = parseTyped(text);
   const number = value !== null && !Number.isNaN(value) && entry.unit !== null;
-  return { ...entry, text, typed: number ? { value: value!, unit: entry.unit! } : null, invalid: value !== null && Number.isNaN(value) };
+  const typed = number ? { value: value!, unit: entry.unit! } : null;
+  return { ...entry, text, typed, invalid: value !== null && Number.isNaN(value), problem: typed && d ? problemOf(d, typed) : null };
+}
+
+function problemOf(d: Pick<Descriptor, 'code' | 'label' | 'kind'>, typed: TypedValue): string | null {
+  const quantity = KIND_QUANTITY[d.kind];
+  if (!quantity) return null;
+  if (quantity === 'count' && !Number.isInteger(typed.value)) return `${d.label} is a count: type a whole number.`;
+  const implausible = implausibleValue(d, quantity, typed.value, typed.unit);
+  return implausible ? `${implausible[0]!.toUpperCase()}${implausible.slice(1)}.` : null;
 }
 
 /**
- * The row shown in another unit. The typed value and its unit are kept as they were, so what is
- * saved is what was typed; the field shows it converted.
+ * The row in another unit. The number typed stays as it is and is read in the new unit: a recorder
+ * who switches the unit after typing meant that number in that unit, so nothing is converted.
  */
-export function switchUnit(entry: RowEntry, unit: Unit): RowEntry {
+export function switchUnit(entry: RowEntry, unit: Unit, d?: Pick<Descriptor, 'code' | 'label' | 'kind'>): RowEntry {
   if (entry.unit === unit) return entry;
-  return { ...entry, unit, text: entry.typed ? shownIn(entry.typed, unit) : entry.text };
+  return typeInto({ ...entry, unit }, entry.text, d);
 }
 
 /** Descriptors in catalogue order, each ratio moved to just after the later of its two parts, so it sits under the values it is computed from. */
@@ -127,5 +144,5 @@ export function observationOf(d: Descriptor, entry: RowEntry | undefined, access
   if (!entry || d.kind === 'ratio') return [];
   const base = { accessionId, plantId, descriptorId: d.id };
   if (d.kind === 'category') return entry.category ? [{ ...base, category: entry.category }] : [];
-  return entry.typed ? [{ ...base, value: entry.typed.value, unit: entry.typed.unit }] : [];
+  return entry.typed && !entry.problem ? [{ ...base, value: entry.typed.value, unit: entry.typed.unit }] : [];
 }

@@ -33,6 +33,18 @@ describe('DescriptorsApi', () => {
     request.flush({ id: 1 });
   });
 
+  it('should send several values in one request, so they are saved all or nothing', () => {
+    const values = [
+      { accessionId: 3, plantId: 9, descriptorId: 1, value: 40, unit: 'in' as const },
+      { accessionId: 3, plantId: 9, descriptorId: 2, category: 'round' },
+    ];
+    api.recordAll(values).subscribe();
+    const request = http.expectOne('/api/observations/batch');
+    expect(request.request.method).toBe('POST');
+    expect(request.request.body).toEqual({ observations: values });
+    request.flush([]);
+  });
+
   it('should ask for one accession’s observations with the page size', () => {
     api.observations(3, 20).subscribe();
     const request = http.expectOne((r) => r.url === '/api/observations');

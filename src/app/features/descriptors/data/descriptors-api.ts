@@ -41,6 +41,11 @@ export class DescriptorsApi {
     return this.http.post<Observation>('/api/observations', body);
   }
 
+  /** Records several values all or nothing; a refusal names the value (`observations.N.field`) and nothing is stored. */
+  recordAll(observations: readonly NewObservation[]): Observable<Observation[]> {
+    return this.http.post<Observation[]>('/api/observations/batch', { observations });
+  }
+
   /** Current observations of an accession, newest first. */
   observations(accessionId: number, pageSize = 50): Observable<ObservationPage> {
     const params = new HttpParams().set('accessionId', accessionId).set('pageSize', pageSize);

@@ -7,7 +7,6 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatSelectModule } from '@angular/material/select';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router, RouterLink } from '@angular/router';
-import { concatMap, from, tap, toArray } from 'rxjs';
 
 import { ApiError } from '../../../core/http/api-error';
 import { UnitPreference, type UnitSystem } from '../../../core/units/unit-preference';
@@ -105,7 +104,7 @@ export class DescriptorEntryPage {
       for (const d of this.shown()) {
         const unit = defaultUnit(d.kind, system);
         const row = rows[d.id];
-        if (row) next[d.id] = unit ? switchUnit(row, unit) : row;
+        if (row) next[d.id] = unit ? switchUnit(row, unit, d) : row;
       }
       return next;
     });
@@ -131,19 +130,20 @@ export class DescriptorEntryPage {
   protected saveValues(): void {
     const observations = this.ready();
     if (observations.length === 0) return;
+    // Checked here as the server would, so a doomed value is never sent.
+    const wrong = this.shown().filter((d) => this.entries()[d.id]?.invalid || this.entries()[d.id]?.problem);
+    if (wrong.length) {
+      this.problem.set(`Nothing was saved. Fix the marked ${wrong.length === 1 ? 'value' : 'values'} first: ${wrong.map((d) => d.label).join(', ')}.`);
+      this.focusRow(wrong[0]!.id);
+      return;
+    }
     this.busy.set(true);
     this.problem.set(null);
-    // Which rows have gone through, so a refusal half-way leaves only the rest in the form.
-    const saved: number[] = [];
-    from(observations)
-      .pipe(
-        concatMap((observation) => this.api.record(observation).pipe(tap(() => saved.push(observation.descriptorId)))),
-        toArray(),
-      )
-      .subscribe({
-        next: (done) => this.showSaved(done.length),
-        error: (error: unknown) => this.showRefusal(error, saved),
-      });
+    // All or nothing: one refused value leaves every value in the form and nothing on the server.
+    this.api.recordAll(observations).subscribe({
+      next: (saved) => this.showSaved(saved.length),
+      error: (error: unknown) => this.showRefusal(error, observations.map((o) => o.descriptorId)),
+    });
   }
 
   private showSaved(count: number): void {
@@ -155,13 +155,29 @@ export class DescriptorEntryPage {
     if (sheet !== null) void this.router.navigate(['/record/plant', sheet]);
   }
 
-  private showRefusal(error: unknown, saved: number[]): void {
+  private showRefusal(error: unknown, sent: number[]): void {
     this.busy.set(false);
-    this.edited.update((rows) => Object.fromEntries(Object.entries(rows).filter(([id]) => !saved.includes(Number(id)))));
-    if (saved.length > 0) this.savedCount.update((n) => n + 1);
     const why = error instanceof ApiError ? error.message : 'The server could not be reached.';
-    this.problem.set(`${saved.length ? `${saved.length} saved; the rest were not. ` : ''}${why}`);
+    const index = error instanceof ApiError ? refusedIndex(error) : null;
+    const refused = index === null ? undefined : this.shown().find((d) => d.id === sent[index]);
+    this.problem.set(`Nothing was saved. ${refused ? `${refused.label}: ` : ''}${why}`);
+    if (refused) this.focusRow(refused.id);
   }
+
+  private focusRow(id: number): void {
+    const row = this.host.nativeElement.querySelector<HTMLElement>(`#descriptor-${id}`);
+    row?.scrollIntoView?.({ block: 'center' });
+    row?.querySelector<HTMLElement>('input')?.focus();
+  }
+}
+
+/** Which value of a batch the server refused (`observations.3.value` → 3), if it says. */
+function refusedIndex(error: ApiError): number | null {
+  for (const e of error.fieldErrors ?? []) {
+    const m = /^observations\.(\d+)\./.exec(e.field);
+    if (m) return Number(m[1]);
+  }
+  return null;
 }
 
 function idOf(text: string | undefined): number | null {
