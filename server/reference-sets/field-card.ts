@@ -26,10 +26,10 @@ const LAYOUT = {
   footer: 104,
 } as const;
 
-/** Neutral grey patch: L* 50, a* = b* = 0, as sRGB (#777777). */
-const NEUTRAL_GREY = displayHex({ l: 50, a: 0, b: 0 }).hex;
+/** Neutral grey patch and swatch surround: L* 50, a* = b* = 0, as sRGB (#777777). */
+export const NEUTRAL_GREY = displayHex({ l: 50, a: 0, b: 0 }).hex;
 /** Outline of swatches and patches: a neutral darker than the grey patch. */
-const OUTLINE = '#5e5e5e';
+export const OUTLINE = '#5e5e5e';
 
 const cards = new WeakMap<LoadedSet, Promise<Buffer>>();
 
@@ -48,11 +48,12 @@ export function fieldCard(set: LoadedSet): Promise<Buffer> {
  * grouped by hue family, then a neutral grey and a white patch and the printing caution. A card
  * that does not fit one page continues on the next.
  */
-export function renderFieldCard(set: LoadedSet): Promise<Buffer> {
+export function renderFieldCard(set: LoadedSet, options: { compress?: boolean } = {}): Promise<Buffer> {
   const { summary } = set;
   const doc = new PDFDocument({
     size: 'A4',
     margin: LAYOUT.margin,
+    compress: options.compress ?? true,
     info: { Title: `Hueledger field card, reference set ${summary.id}`, Author: 'Hueledger', Subject: `${summary.name}: field chips with codes, a neutral grey and a white patch` },
   });
   const parts: Buffer[] = [];
@@ -79,12 +80,18 @@ function drawHeader(doc: PDFKit.PDFDocument, set: LoadedSet, fieldCount: number)
     .fontSize(8)
     .text(
       `${summary.name}. ${fieldCount} field chips, CIELAB ${summary.white}, ${summary.observer} observer. ` +
-        `Each field chip refines into fine chips (F-087 into F-087.001 …) in the app.`,
+        `Each field chip refines into fine chips (${firstField(set)} into ${firstField(set)}.001 …): the booklet prints them, one page per field chip. ` +
+        `Swatches sit on a neutral grey (L* 50) surround.`,
       margin,
       doc.y + 2,
       { width },
     );
   return doc.y + 8;
+}
+
+/** The set's first field code, for the header's example. */
+function firstField(set: LoadedSet): string {
+  return set.chips.find((c) => c.parent === null)?.code ?? 'F-001';
 }
 
 function drawGroup(doc: PDFKit.PDFDocument, sector: HueSector, chips: ChipDto[], top: number): number {
@@ -98,6 +105,8 @@ function drawGroup(doc: PDFKit.PDFDocument, sector: HueSector, chips: ChipDto[],
     y = margin;
   }
   doc.font('Helvetica-Bold').fontSize(8).fillColor('#000000').text(sectorLabel(sector), margin, y + 2, { width: familyColumn - 6 });
+  // The neutral surround behind the group's swatches and codes (black on L* 50 reads at 4.7 : 1).
+  doc.rect(gridLeft - 3, y - 2, Math.min(chips.length, perRow) * cell.width + 4, rows * cell.height + 1).fill(NEUTRAL_GREY);
   chips.forEach((chip, i) => {
     const x = gridLeft + (i % perRow) * cell.width;
     const rowTop = y + Math.floor(i / perRow) * cell.height;
@@ -119,5 +128,5 @@ function drawFooter(doc: PDFKit.PDFDocument, setId: string, gridBottom: number):
   // fillAndStroke leaves the fill colour set to the patch's: text goes back to black.
   doc.fillColor('#000000').text('white\nunprinted paper (#ffffff)', whiteLeft + patch + 6, top + 10, { width: 120 });
   doc.font('Helvetica-Bold').fontSize(8).fillColor('#000000').text(PRINT_CAUTION, margin, top + patch + 10, { width });
-  doc.font('Helvetica').fontSize(6.5).fillColor('#333333').text(`Reference set ${setId}. Codes are never reused: a code always means the same CIELAB value.`, margin, doc.y + 4, { width });
+  doc.font('Helvetica').fontSize(7).fillColor('#333333').text(`Reference set ${setId}. Codes are never reused: a code always means the same CIELAB value.`, margin, doc.y + 4, { width });
 }

@@ -7,6 +7,7 @@ import { AppError } from '../core/app-error.js';
 import type { AppContext } from '../core/context.js';
 import { parse } from '../core/validate.js';
 import { chipsBody } from './chips-body.js';
+import { fineChipBooklet } from './booklet.js';
 import { fieldCard } from './field-card.js';
 
 /** A day: a set's chips never change, but a day bounds how long a browser trusts its copy unasked. */
@@ -54,6 +55,14 @@ export function referenceSetRoutes(ctx: AppContext): Router {
     const set = await ctx.referenceSets.get(setIdParam(req.params['id']));
     const pdf = await fieldCard(set);
     res.setHeader('Content-Disposition', `attachment; filename="hueledger-field-card-${set.summary.id}.pdf"`);
+    res.setHeader('Cache-Control', CHIPS_CACHE_CONTROL);
+    sendBytes(res, pdf, 'application/pdf', null);
+  });
+
+  router.get('/reference-sets/:id/booklet.pdf', signedIn, async (req, res) => {
+    const set = await ctx.referenceSets.get(setIdParam(req.params['id']));
+    const pdf = await fineChipBooklet(set);
+    res.setHeader('Content-Disposition', `attachment; filename="hueledger-fine-chip-booklet-${set.summary.id}.pdf"`);
     res.setHeader('Cache-Control', CHIPS_CACHE_CONTROL);
     sendBytes(res, pdf, 'application/pdf', null);
   });

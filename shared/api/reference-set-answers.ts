@@ -92,6 +92,11 @@ export function fieldCardUrl(setId: string): string {
   return `/api/reference-sets/${encodeURIComponent(setId)}/card.pdf`;
 }
 
+/** Where a set's fine-chip booklet (one page per field chip) is downloaded. */
+export function bookletUrl(setId: string): string {
+  return `/api/reference-sets/${encodeURIComponent(setId)}/booklet.pdf`;
+}
+
 /** Where a set's chips are loaded (one cacheable answer). */
 export function chipsUrl(setId: string): string {
   return `/api/reference-sets/${encodeURIComponent(setId)}/chips`;

@@ -131,6 +131,7 @@ const ROUTES: readonly RouteCase[] = [
   { method: 'GET', path: '/api/reference-sets', access: EVERYONE, ok: 200 },
   { method: 'GET', path: '/api/reference-sets/:id/chips', access: EVERYONE, ok: 200, url: () => '/api/reference-sets/v1/chips' },
   { method: 'GET', path: '/api/reference-sets/:id/card.pdf', access: EVERYONE, ok: 200, url: () => '/api/reference-sets/v1/card.pdf' },
+  { method: 'GET', path: '/api/reference-sets/:id/booklet.pdf', access: EVERYONE, ok: 200, url: () => '/api/reference-sets/v1/booklet.pdf' },
   { method: 'PUT', path: '/api/reference-sets/current', access: ADMIN, ok: 200, body: () => ({ setId: 'v1' }) },
   { method: 'POST', path: '/api/match', access: EVERYONE, ok: 200, body: () => ({ hex: '#7b3f6e' }) },
   { method: 'POST', path: '/api/photos', access: ['recorder', 'trainer', 'admin'], ok: 201, upload: (f) => f.nextPhoto() },

@@ -3,6 +3,7 @@ import { Injectable, inject } from '@angular/core';
 import { Observable } from 'rxjs';
 
 import {
+  bookletUrl,
   chipsUrl,
   fieldCardUrl,
   type ChipDto,
@@ -34,5 +35,10 @@ export class ReferenceSetApi {
   /** Where the set's printable field card (PDF) is downloaded. */
   cardUrl(setId: string): string {
     return fieldCardUrl(setId);
+  }
+
+  /** Where the set's fine-chip booklet (PDF, one page per field chip) is downloaded. */
+  bookletUrl(setId: string): string {
+    return bookletUrl(setId);
   }
 }

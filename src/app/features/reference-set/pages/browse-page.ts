@@ -72,6 +72,10 @@ export class BrowsePage {
     const set = this.catalogue.set();
     return set ? this.api.cardUrl(set.summary.id) : null;
   });
+  protected readonly bookletUrl = computed(() => {
+    const set = this.catalogue.set();
+    return set ? this.api.bookletUrl(set.summary.id) : null;
+  });
 
   constructor() {
     this.catalogue.load();
