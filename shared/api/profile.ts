@@ -33,3 +33,6 @@ export type SimilarQuery = z.infer<typeof similarQuery>;
 /** `GET /api/accessions/duplicates[?minShared=]`. */
 export const duplicatesQuery = z.object({ minShared: count('characters', 50).default(MIN_SHARED_DEFAULT) }).strict();
 export type DuplicatesQuery = z.infer<typeof duplicatesQuery>;
+
+/** Routes that take no query parameters: anything given is refused. */
+export const noQuery = z.object({}).strict();

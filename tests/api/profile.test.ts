@@ -7,7 +7,9 @@ import assert from 'node:assert/strict';
 import Color from 'colorjs.io';
 import type { AccessionProfile, CharacterProfile } from '../../shared/api/profile-answers.js';
 import type { LabTuple } from '../../shared/colour/lab.js';
+import ExcelJS from 'exceljs';
 import { DEMO_DRIFT, DEMO_STEADY } from '../../server/demo/demo-readings.js';
+import { profilePdf, RECORD_CAUTION } from '../../server/profile/profile-pdf.js';
 import { assertInvalidFields, assertProblem } from './assert-problem.js';
 import { Client, signedInAs, startHarness, type Harness } from './harness.js';
 
@@ -25,6 +27,20 @@ const colorjsDE00 = (p: LabTuple, q: LabTuple) => new Color('lab', p).deltaE(new
  * trainer; plants P1 (readings 1, 2, 5) and P2 (3, 4).
  */
 const WORKED: LabTuple[] = [[51, 10, 5], [51.5, 10.5, 5], [52, 10, 5.5], [53, 10.2, 5], [90, 10, 5]];
+
+/** supertest: keep a binary body as a Buffer. */
+function binary(res: NodeJS.ReadableStream & { setEncoding(e: string): void }, done: (err: Error | null, body: Buffer) => void): void {
+  const parts: Buffer[] = [];
+  res.on('data', (c: Buffer) => parts.push(Buffer.from(c)));
+  res.on('end', () => done(null, Buffer.concat(parts)));
+}
+
+/** The text of an uncompressed pdfkit PDF: each TJ array's hex strings, decoded as Latin-1 (WinAnsi for these characters). */
+function pdfTextOf(pdf: Buffer): string {
+  return [...pdf.toString('latin1').matchAll(/\[((?:<[0-9a-f]*>\s*-?[\d.]*\s*)+)\] TJ/g)]
+    .map((m) => [...m[1]!.matchAll(/<([0-9a-f]*)>/g)].map((h) => Buffer.from(h[1]!, 'hex').toString('latin1')).join(''))
+    .join('\n');
+}
 
 describe('the characterisation record of an accession', () => {
   let h: Harness;
@@ -129,6 +145,42 @@ describe('the characterisation record of an accession', () => {
     close(position.share!, count / cats.length, 1e-12, 'share');
   });
 
+  test('should print the record as a PDF with the swatch codes, numbers, season notes and the caution', async () => {
+    const res = await reviewer.get(`/api/accessions/${ids.accession}/profile.pdf`).buffer(true).parse(binary);
+    assert.equal(res.status, 200);
+    assert.match(String(res.headers['content-type']), /^application\/pdf/);
+    assert.match(String(res.headers['content-disposition']), /characterisation-PW-0001\.pdf/);
+    const file = res.body as Buffer;
+    assert.equal(file.subarray(0, 5).toString('latin1'), '%PDF-');
+    assert.match(file.subarray(-8).toString('latin1'), /%%EOF/);
+    // The same record uncompressed, so its text can be read back: pdfkit writes Helvetica text as hex strings in TJ arrays.
+    const text = pdfTextOf(await profilePdf(await profile(reviewer, ids.accession), { compress: false }));
+    const c = characterOf(await profile(reviewer, ids.accession), ids.character);
+    for (const expected of ['Characterisation record \u00b7 PW-0001 Profile Example', c.chip.code, 'L* 51.25, a* 10.25, b* 5.00', 'Seasons: Dry 2025 n 5', 'Caution: ', RECORD_CAUTION.slice(0, 60)]) {
+      assert.ok(text.includes(expected), `the PDF says "${expected}"`);
+    }
+  });
+
+  test('should export the collection\'s characterisation as XLSX with an explanation sheet', async () => {
+    const res = await reviewer.get('/api/accessions/characterisation.xlsx').buffer(true).parse(binary);
+    assert.equal(res.status, 200, String(res.body));
+    const book = new ExcelJS.Workbook();
+    await book.xlsx.load(res.body as Buffer);
+    assert.deepEqual(book.worksheets.map((w) => w.name), ['Colours', 'Descriptors', 'About']);
+    const colours = book.getWorksheet('Colours')!;
+    const header = (colours.getRow(1).values as unknown[]).slice(1);
+    const rows = colours.getSheetValues().slice(2).map((r) => Object.fromEntries(header.map((h, i) => [h, (r as unknown[])[i + 1]])));
+    const mine = rows.find((r) => r['accession'] === 'PW-0001' && r['character'] === 'petiole.profile.example') ?? assert.fail('a row for the worked example');
+    assert.deepEqual([mine['L*'], mine['a*'], mine['b*'], mine['basis'], mine['readings'], mine['readings in force']], [51.25, 10.25, 5, 'approved', 2, 5]);
+    const accessions = (await reviewer.get('/api/accessions').expect(200)).body as unknown[];
+    assert.ok(new Set(rows.map((r) => r['accession'])).size >= accessions.length - 1, 'every accession with colour readings has rows');
+    const about = book.getWorksheet('About')!.getSheetValues().map((r) => ((r as unknown[]) ?? []).slice(1).join(' ')).join('\n');
+    assert.match(about, /white point D65/);
+    assert.match(about, /2° standard observer/);
+    assert.match(about, /Reference set v1/i);
+    for (const h of header) assert.ok(about.includes(String(h)), `the About sheet explains "${h}"`);
+  });
+
   test('should be read by every role and refused when signed out', async () => {
     for (const client of [admin, recorder, trainer, reviewer]) await client.get(`/api/accessions/${ids.accession}/profile`).expect(200);
     assertProblem(await new Client(h.app).get(`/api/accessions/${ids.accession}/profile`), 401);
@@ -140,5 +192,9 @@ describe('the characterisation record of an accession', () => {
     assert.match(assertProblem(await reviewer.get(`/api/accessions/${ids.accession}/profile?setId=v999`), 404).detail ?? '', /v999/);
     assertProblem(await reviewer.get('/api/accessions/999999/profile'), 404);
     assertProblem(await reviewer.get('/api/accessions/abc/profile'), 404);
+    assertInvalidFields(await reviewer.get(`/api/accessions/${ids.accession}/profile.pdf?setId=%24`), 'setId');
+    assertProblem(await reviewer.get('/api/accessions/999999/profile.pdf'), 404);
+    assertInvalidFields(await reviewer.get('/api/accessions/characterisation.xlsx?sheet=1'), 'query');
+    assertProblem(await new Client(h.app).get('/api/accessions/characterisation.xlsx'), 401);
   });
 });

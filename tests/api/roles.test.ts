@@ -117,6 +117,8 @@ const ROUTES: readonly RouteCase[] = [
   { method: 'GET', path: '/api/accessions/:id/profile', access: EVERYONE, ok: 200, url: (f) => `/api/accessions/${f.accessionId}/profile` },
   { method: 'GET', path: '/api/accessions/:id/similar', access: EVERYONE, ok: 200, url: (f) => `/api/accessions/${f.accessionId}/similar` },
   { method: 'GET', path: '/api/accessions/duplicates', access: EVERYONE, ok: 200 },
+  { method: 'GET', path: '/api/accessions/characterisation.xlsx', access: EVERYONE, ok: 200 },
+  { method: 'GET', path: '/api/accessions/:id/profile.pdf', access: EVERYONE, ok: 200, url: (f) => `/api/accessions/${f.accessionId}/profile.pdf` },
   { method: 'GET', path: '/api/descriptors', access: EVERYONE, ok: 200 },
   { method: 'POST', path: '/api/descriptors', access: ADMIN, ok: 201, body: (f) => ({ code: `matrix.length${f.next()}`, label: 'Matrix length', object: 'matrix part', kind: 'length', howToMeasure: 'Measure it the way the matrix test says.' }) },
   { method: 'PATCH', path: '/api/descriptors/:id', access: ADMIN, ok: 200, url: (f) => `/api/descriptors/${f.descriptorId}`, body: (f) => ({ object: `matrix part ${f.next()}` }) },

@@ -8,7 +8,7 @@ import { RouterLink } from '@angular/router';
 import type { CharacterProfile, ProfilePhoto } from '../../../../../shared/api/profile-answers.js';
 import { UnitPreference } from '../../../core/units/unit-preference';
 import { deltaEText, labText, lchText } from '../../reference-set/data/chip-words';
-import { ProfileApi, profilePdfUrl } from '../data/profile-api';
+import { CHARACTERISATION_XLSX_URL, ProfileApi, profilePdfUrl } from '../data/profile-api';
 import { chipText, countsText, cropStyle, descriptorText, stabilityText } from '../data/profile-words';
 
 /** How many outliers a character lists before "and n more" (the rest are on the Readings page). */
@@ -36,6 +36,7 @@ export class Characterisation {
 
   protected readonly units = inject(UnitPreference).system;
   protected readonly profile = rxResource({ params: () => this.accessionId(), stream: ({ params }) => this.api.profile(params) });
+  protected readonly xlsxUrl = CHARACTERISATION_XLSX_URL;
   protected readonly outliersShown = OUTLIERS_SHOWN;
   protected readonly cropSize = CROP_SIZE;
   protected readonly de = deltaEText;
