@@ -4,7 +4,9 @@
 import { stringify } from 'csv-stringify';
 import ExcelJS from 'exceljs';
 import type { Writable } from 'node:stream';
-import type { DataSource } from 'typeorm';
+import { IsNull, Not, type DataSource } from 'typeorm';
+import { Descriptor } from '../collection/descriptor.entity.js';
+import { Observation } from '../collection/observation.entity.js';
 import type { ListReadingsQuery } from '../../shared/api/readings.js';
 import { labToLch } from '../../shared/colour/lab.js';
 import { spreadsheetSafe } from '../core/spreadsheet-safe.js';
@@ -23,6 +25,14 @@ interface ExportColumn {
   width: number;
   numFmt?: string;
   value(r: Reading, publicUrl: string): Cell;
+  /** The XLSX cell when it differs from the CSV text: a real date, which spreadsheets sort and filter as one. */
+  xlsx?(r: Reading): Date | Cell;
+}
+
+/** Site-local wall-clock time as a Date whose UTC fields hold it: spreadsheet dates carry no time zone. */
+function siteLocalDate(instant: Date, timeZone: string): Date {
+  const [date, time] = siteLocalTime(instant, timeZone).split(' ');
+  return new Date(`${date}T${time}:00Z`);
 }
 
 const localFormats = new Map<string, Intl.DateTimeFormat>();
@@ -44,9 +54,9 @@ const round = (x: number, places: number) => Math.round(x * 10 ** places) / 10 *
 /** The columns of both exports, in order. Colour values to 2 places: finer than any instrument repeats. */
 export const EXPORT_COLUMNS: readonly ExportColumn[] = [
   { header: 'id', width: 8, value: (r) => r.id },
-  { header: 'observed at (site local)', width: 18, value: (r) => siteLocalTime(r.observedAt, r.site!.timezone) },
+  { header: 'observed at (site local)', width: 18, numFmt: 'yyyy-mm-dd hh:mm', value: (r) => siteLocalTime(r.observedAt, r.site!.timezone), xlsx: (r) => siteLocalDate(r.observedAt, r.site!.timezone) },
   { header: 'site time zone', width: 20, value: (r) => r.site!.timezone },
-  { header: 'observed at (UTC)', width: 26, value: (r) => r.observedAt.toISOString() },
+  { header: 'observed at (UTC)', width: 20, numFmt: 'yyyy-mm-dd hh:mm:ss', value: (r) => r.observedAt.toISOString(), xlsx: (r) => r.observedAt },
   { header: 'accession', width: 12, value: (r) => r.accession!.accessionNumber },
   { header: 'accession name', width: 18, value: (r) => r.accession!.name },
   { header: 'plant', width: 8, value: (r) => r.plant?.label ?? null },
@@ -94,18 +104,52 @@ async function* selectedReadings(ds: DataSource, q: ListReadingsQuery): AsyncGen
   }
 }
 
-function rowOf(r: Reading, publicUrl: string): Cell[] {
-  return EXPORT_COLUMNS.map((c) => c.value(r, publicUrl));
+/** A CSV row: text typed by people (notes, names) made inert for spreadsheets (OWASP CSV injection). XLSX cells are typed, so text there never runs. */
+function csvRowOf(columns: readonly ExportColumn[], r: Reading, publicUrl: string): Cell[] {
+  return columns.map((c) => spreadsheetSafe(c.value(r, publicUrl)));
 }
 
-/** A CSV row: text typed by people (notes, names) made inert for spreadsheets (OWASP CSV injection). XLSX cells are typed, so text there never runs. */
-function csvRowOf(r: Reading, publicUrl: string): Cell[] {
-  return rowOf(r, publicUrl).map((v) => spreadsheetSafe(v));
+function xlsxRowOf(columns: readonly ExportColumn[], r: Reading, publicUrl: string): (Date | Cell)[] {
+  return columns.map((c) => (c.xlsx ? c.xlsx(r) : c.value(r, publicUrl)));
+}
+
+/** The SI unit of a descriptor's stored values, for its column header. */
+function unitWords(d: Descriptor): string {
+  return d.kind === 'length' ? 'm' : d.kind === 'mass' ? 'kg' : d.kind === 'count' ? 'count' : d.kind === 'ratio' ? 'ratio' : 'category';
+}
+
+/**
+ * One column per descriptor of the catalogue: the reading's plant's latest value (SI, or the
+ * category id; ratios from the same plant's latest parts), so a colour can be read beside the
+ * plant's size and shape. Readings of no particular plant leave them empty.
+ */
+export async function descriptorColumns(ds: DataSource): Promise<ExportColumn[]> {
+  const descriptors = await ds.getRepository(Descriptor).find({ order: { sortOrder: 'ASC', id: 'ASC' } });
+  const observations = await ds.getRepository(Observation).find({ where: { supersededBy: IsNull(), plant: Not(IsNull()) }, relations: { descriptor: true }, order: { observedAt: 'DESC', id: 'DESC' } });
+  const latest = new Map<number, Map<string, Observation>>();
+  for (const o of observations) {
+    const byCode = latest.get(o.plantId!) ?? new Map<string, Observation>();
+    latest.set(o.plantId!, byCode);
+    if (!byCode.has(o.descriptor.code)) byCode.set(o.descriptor.code, o);
+  }
+  const valueOf = (d: Descriptor, plantId: number | null): Cell => {
+    const byCode = plantId === null ? undefined : latest.get(plantId);
+    if (!byCode) return null;
+    if (d.kind === 'ratio') {
+      const top = byCode.get(d.numeratorCode!)?.valueSi;
+      const bottom = byCode.get(d.denominatorCode!)?.valueSi;
+      return top == null || !bottom ? null : round(top / bottom, 4);
+    }
+    const o = byCode.get(d.code);
+    return o ? (d.kind === 'category' ? o.category : o.valueSi) : null;
+  };
+  return descriptors.map((d) => ({ header: `plant ${d.code} (${unitWords(d)})`, width: 12, value: (r: Reading) => valueOf(d, r.plantId) }));
 }
 
 /** Writes the CSV (header row, CRLF line ends per RFC 4180, UTF-8 with a BOM so spreadsheets read ΔE and ° right) to `out`. */
 export async function writeReadingsCsv(ds: DataSource, q: ListReadingsQuery, publicUrl: string, out: Writable): Promise<void> {
-  const csv = stringify({ header: true, columns: EXPORT_COLUMNS.map((c) => c.header), record_delimiter: 'windows', bom: true });
+  const columns = [...EXPORT_COLUMNS, ...(await descriptorColumns(ds))];
+  const csv = stringify({ header: true, columns: columns.map((c) => c.header), record_delimiter: 'windows', bom: true });
   csv.pipe(out);
   const done = new Promise<void>((resolve, reject) => {
     out.on('finish', resolve);
@@ -113,7 +157,7 @@ export async function writeReadingsCsv(ds: DataSource, q: ListReadingsQuery, pub
     csv.on('error', reject);
   });
   for await (const r of selectedReadings(ds, q)) {
-    if (!csv.write(csvRowOf(r, publicUrl))) await new Promise((resolve) => csv.once('drain', resolve));
+    if (!csv.write(csvRowOf(columns, r, publicUrl))) await new Promise((resolve) => csv.once('drain', resolve));
   }
   csv.end();
   await done;
@@ -134,14 +178,15 @@ export async function readingsXlsx(ds: DataSource, q: ListReadingsQuery, publicU
   const book = new ExcelJS.Workbook();
   book.creator = 'Hueledger';
   const sheet = book.addWorksheet('Readings', { views: [{ state: 'frozen', ySplit: 1 }] });
-  sheet.columns = EXPORT_COLUMNS.map((c) => ({ header: c.header, width: c.width, style: c.numFmt ? { numFmt: c.numFmt } : {} }));
+  const columns = [...EXPORT_COLUMNS, ...(await descriptorColumns(ds))];
+  sheet.columns = columns.map((c) => ({ header: c.header, width: c.width, style: c.numFmt ? { numFmt: c.numFmt } : {} }));
   sheet.getRow(1).font = { bold: true };
   for await (const r of selectedReadings(ds, q)) {
-    const row = sheet.addRow(rowOf(r, publicUrl));
+    const row = sheet.addRow(xlsxRowOf(columns, r, publicUrl));
     const hexCell = row.getCell(HEX_COLUMN + 1);
     hexCell.fill = { type: 'pattern', pattern: 'solid', fgColor: { argb: `FF${r.hex.slice(1).toUpperCase()}` } };
     hexCell.font = { color: { argb: textOn(r.hex) } };
   }
-  sheet.autoFilter = { from: { row: 1, column: 1 }, to: { row: 1, column: EXPORT_COLUMNS.length } };
+  sheet.autoFilter = { from: { row: 1, column: 1 }, to: { row: 1, column: columns.length } };
   return Buffer.from(await book.xlsx.writeBuffer());
 }

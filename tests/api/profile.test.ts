@@ -11,6 +11,7 @@ import ExcelJS from 'exceljs';
 import { DEMO_DRIFT, DEMO_STEADY } from '../../server/demo/demo-readings.js';
 import { profilePdf, RECORD_CAUTION } from '../../server/profile/profile-pdf.js';
 import { assertInvalidFields, assertProblem } from './assert-problem.js';
+import { bytes } from './reference-set-file.js';
 import { Client, signedInAs, startHarness, type Harness } from './harness.js';
 
 const close = (actual: number, expected: number, tol: number, what: string) => assert.ok(Math.abs(actual - expected) <= tol, `${what}: ${actual} ≠ ${expected}`);
@@ -27,13 +28,6 @@ const colorjsDE00 = (p: LabTuple, q: LabTuple) => new Color('lab', p).deltaE(new
  * trainer; plants P1 (readings 1, 2, 5) and P2 (3, 4).
  */
 const WORKED: LabTuple[] = [[51, 10, 5], [51.5, 10.5, 5], [52, 10, 5.5], [53, 10.2, 5], [90, 10, 5]];
-
-/** supertest: keep a binary body as a Buffer. */
-function binary(res: NodeJS.ReadableStream & { setEncoding(e: string): void }, done: (err: Error | null, body: Buffer) => void): void {
-  const parts: Buffer[] = [];
-  res.on('data', (c: Buffer) => parts.push(Buffer.from(c)));
-  res.on('end', () => done(null, Buffer.concat(parts)));
-}
 
 /** The text of an uncompressed pdfkit PDF: each TJ array's hex strings, decoded as Latin-1 (WinAnsi for these characters). */
 function pdfTextOf(pdf: Buffer): string {
@@ -146,7 +140,7 @@ describe('the characterisation record of an accession', () => {
   });
 
   test('should print the record as a PDF with the swatch codes, numbers, season notes and the caution', async () => {
-    const res = await reviewer.get(`/api/accessions/${ids.accession}/profile.pdf`).buffer(true).parse(binary);
+    const res = await reviewer.get(`/api/accessions/${ids.accession}/profile.pdf`).buffer(true).parse(bytes);
     assert.equal(res.status, 200);
     assert.match(String(res.headers['content-type']), /^application\/pdf/);
     assert.match(String(res.headers['content-disposition']), /characterisation-PW-0001\.pdf/);
@@ -162,10 +156,10 @@ describe('the characterisation record of an accession', () => {
   });
 
   test('should export the collection\'s characterisation as XLSX with an explanation sheet', async () => {
-    const res = await reviewer.get('/api/accessions/characterisation.xlsx').buffer(true).parse(binary);
+    const res = await reviewer.get('/api/accessions/characterisation.xlsx').buffer(true).parse(bytes);
     assert.equal(res.status, 200, String(res.body));
     const book = new ExcelJS.Workbook();
-    await book.xlsx.load(res.body as Buffer);
+    await book.xlsx.load(res.body as ArrayBuffer);
     assert.deepEqual(book.worksheets.map((w) => w.name), ['Colours', 'Descriptors', 'About']);
     const colours = book.getWorksheet('Colours')!;
     const header = (colours.getRow(1).values as unknown[]).slice(1);

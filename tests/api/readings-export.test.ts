@@ -32,6 +32,9 @@ describe('readings exports', () => {
     // More than one list page's worth (the export holds every page).
     for (let i = 0; i < 110; i++) await recorder.post('/api/readings', instrumentBody(w, { accessionId: w.amber.id, plantId: null, lab: [60 + (i % 20), 5, 30], observedAt: `2026-0${1 + (i % 8)}-15T10:00:00-04:00` })).expect(201);
     observerId = first.observerId;
+    // Plant P1 of the violet accession measured: 40 in of petiole (1.016 m in SI).
+    const descriptors = (await reviewer.get('/api/descriptors').expect(200)).body as { id: number; code: string }[];
+    await recorder.post('/api/observations', { accessionId: w.violet.id, plantId: w.violet.plants[0]!.id, descriptorId: descriptors.find((d) => d.code === 'petiole.length')!.id, value: 40, unit: 'in' }).expect(201);
   });
   after(() => h.close());
 
@@ -43,7 +46,14 @@ describe('readings exports', () => {
     assert.ok(res.text.startsWith('\ufeff'), 'UTF-8 BOM, so spreadsheets read ΔE and ° right');
     assert.ok(res.text.includes('\r\n'), 'CRLF line ends (RFC 4180)');
     const rows = parseCsv(res.text, { bom: true, columns: true }) as Record<string, string>[];
-    assert.deepEqual(Object.keys(rows[0]!), EXPORT_COLUMNS.map((c) => c.header));
+    const headers = Object.keys(rows[0]!);
+    assert.deepEqual(headers.slice(0, EXPORT_COLUMNS.length), EXPORT_COLUMNS.map((c) => c.header));
+    // Then the plant's latest value of each descriptor of the catalogue, SI unit in the header.
+    const descriptors = (await reviewer.get('/api/descriptors').expect(200)).body as { code: string }[];
+    assert.deepEqual(headers.slice(EXPORT_COLUMNS.length).map((x) => x.replace(/^plant (\S+) \(.*\)$/, '$1')), descriptors.map((d) => d.code));
+    assert.ok(headers.includes('plant petiole.length (m)'));
+    // 40 in × 0.0254 m/in = 1.016 m (NIST SP 811, exact).
+    assert.equal(Number(rows.find((r) => Number(r['id']) === first.id)!['plant petiole.length (m)']), 1.016);
     for (const h of ['observed at (site local)', 'observed at (UTC)', 'L*', 'a*', 'b*', 'C*ab', 'h°ab', 'hex', 'best chip', 'ΔE00', 'eye chip', 'eye ΔE00', 'light', 'seconds since cut', 'leaf', 'notes', 'status', 'supersedes', 'superseded by', 'set id', 'provenance link', 'season', 'season-year']) {
       assert.ok(h in rows[0]!, `column ${h}`);
     }
@@ -97,12 +107,17 @@ describe('readings exports', () => {
     const sheet = book.getWorksheet('Readings')!;
     assert.equal(sheet.rowCount, 1 + 112);
     const header = (sheet.getRow(1).values as unknown[]).slice(1);
-    assert.deepEqual(header, EXPORT_COLUMNS.map((c) => c.header));
+    assert.deepEqual(header.slice(0, EXPORT_COLUMNS.length), EXPORT_COLUMNS.map((c) => c.header));
     assert.equal(sheet.getRow(1).font?.bold, true);
     assert.deepEqual(sheet.views.map((v) => [v.state, (v as { ySplit?: number }).ySplit]), [['frozen', 1]]);
     const col = (name: string) => EXPORT_COLUMNS.findIndex((c) => c.header === name) + 1;
     const row = sheet.getRows(2, 112)!.find((r) => r.getCell(1).value === first.id)!;
     assert.equal(row.getCell(col('L*')).value, 38.2);
+    // Dates are real dates: the instant in UTC, and the site's wall clock (09:30 in Fiji) as a zone-less date.
+    assert.deepEqual(row.getCell(col('observed at (UTC)')).value, new Date('2026-02-09T21:30:00.000Z'));
+    assert.equal(row.getCell(col('observed at (UTC)')).numFmt, 'yyyy-mm-dd hh:mm:ss');
+    assert.deepEqual(row.getCell(col('observed at (site local)')).value, new Date('2026-02-10T09:30:00.000Z'));
+    assert.equal(row.getCell(col('plant')).value, 'P1');
     assert.equal(row.getCell(col('L*')).numFmt, '0.00');
     assert.equal(row.getCell(col('ΔE00')).numFmt, '0.00');
     assert.equal(row.getCell(col('notes')).value, '=HYPERLINK("x") typed by mistake', 'XLSX cells are typed text, never formulas, so no apostrophe');
