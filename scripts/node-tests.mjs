@@ -5,8 +5,8 @@
 //   node scripts/node-tests.mjs [--jobs N] folder-or-file…
 // Node 20's --test takes no globs, so the files are listed here.
 import { spawn } from 'node:child_process';
-import { existsSync, readdirSync, statSync, writeFileSync } from 'node:fs';
-import { availableParallelism } from 'node:os';
+import { existsSync, mkdtempSync, readdirSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { availableParallelism, tmpdir } from 'node:os';
 import path from 'node:path';
 
 const root = path.resolve(import.meta.dirname, '..');
@@ -31,13 +31,17 @@ if (!files.length) {
   process.exit(1);
 }
 
+// The browser-test files of this run share one freshly seeded demo data folder, copied per server
+// (tests/e2e/server-process.ts makes it on first use); removed at the end.
+const templateDir = mkdtempSync(path.join(tmpdir(), 'hueledger-e2e-template-'));
+
 /** Runs one file in node:test (TAP) and resolves with its output, counts and wall time. */
 function runFile(file) {
   return new Promise((resolve) => {
     const started = Date.now();
     const child = spawn(process.execPath, ['--import', 'tsx', '--test', '--test-reporter=tap', file], {
       cwd: root,
-      env: { ...process.env, TSX_TSCONFIG_PATH: 'server/tsconfig.json' },
+      env: { ...process.env, TSX_TSCONFIG_PATH: 'server/tsconfig.json', HUELEDGER_E2E_TEMPLATE_DIR: templateDir },
       stdio: ['ignore', 'pipe', 'pipe'],
     });
     let out = '';
@@ -67,6 +71,7 @@ async function worker() {
 }
 const started = Date.now();
 await Promise.all(Array.from({ length: Math.min(jobs, files.length) }, worker));
+rmSync(templateDir, { recursive: true, force: true });
 
 console.log(`\n# Time per file (${jobs} at a time, ${((Date.now() - started) / 1000).toFixed(1)} s in all):`);
 for (const r of [...results].sort((a, b) => b.seconds - a.seconds)) console.log(`#   ${r.seconds.toFixed(1).padStart(6)} s  ${r.fail ? 'FAILED ' : ''}${r.file}`);

@@ -106,8 +106,8 @@ describe('readings on a phone: each method, the table, the detail and the export
     await waitForValue(page.getByLabel('Accession'), /HL-0001/);
     await page.getByRole('radio', { name: 'Open shade', checked: true }).waitFor();
     await page.getByRole('radio', { name: /Chip by eye/ }).click();
-    // A purple field chip (anthocyanin petioles), then one of its fine chips.
-    const field = page.locator('hl-chip-picker .families hl-swatch-grid button.chip[aria-label*="purple"]').first();
+    // A plum field chip (anthocyanin petioles), then one of its fine chips.
+    const field = page.locator('hl-chip-picker .families hl-swatch-grid button.chip[aria-label*="plum"]').first();
     await field.click();
     await page.locator('hl-chip-picker .fines-heading').waitFor();
     const fine = page.locator('hl-chip-picker .fines-heading + hl-swatch-grid button.chip').nth(2);

@@ -1,5 +1,5 @@
 import { spawn, type ChildProcess } from 'node:child_process';
-import { existsSync, mkdtempSync, rmSync } from 'node:fs';
+import { cpSync, existsSync, mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
@@ -99,7 +99,54 @@ export async function startServerProcess(opts: ServerOptions = {}): Promise<Serv
   };
 }
 
-/** Starts the built app with the demo scenario; needs `npm run build` first. */
-export function startServer(env: Record<string, string> = {}): Promise<ServerProcess> {
-  return startServerProcess({ env, needsClient: true });
+/**
+ * Where scripts/node-tests.mjs lets the browser-test files of one run share a freshly seeded demo
+ * data folder: migrating, loading the reference sets and seeding the demo is the slowest part of a
+ * server's start, and its result is the same for every file of the run. Unset when a file runs alone.
+ */
+const TEMPLATE_ENV = 'HUELEDGER_E2E_TEMPLATE_DIR';
+
+/**
+ * A data folder as the real server leaves it after its first start with the demo scenario, made once
+ * per run by whichever file asks first (mkdir is the lock); null when there is none to share.
+ */
+async function demoTemplate(): Promise<string | null> {
+  const base = process.env[TEMPLATE_ENV];
+  if (!base) return null;
+  const data = path.join(base, 'data');
+  const ready = path.join(base, 'ready');
+  const failed = path.join(base, 'failed');
+  try {
+    mkdirSync(path.join(base, 'lock'), { recursive: false });
+  } catch {
+    // Another file is making it: wait for its word.
+    const deadline = Date.now() + START_LIMIT_MS;
+    while (!existsSync(ready) && !existsSync(failed) && Date.now() < deadline) await new Promise((r) => setTimeout(r, 250));
+    return existsSync(ready) ? data : null;
+  }
+  try {
+    const server = await startServerProcess({ dataDir: data });
+    await server.stop(); // a clean stop checkpoints SQLite's write-ahead log into the file
+    writeFileSync(ready, '');
+    return data;
+  } catch (err) {
+    writeFileSync(failed, String(err));
+    return null;
+  }
+}
+
+/** Starts the built app with the demo scenario (from the run's seeded copy when there is one); needs `npm run build` first. */
+export async function startServer(env: Record<string, string> = {}): Promise<ServerProcess> {
+  const template = await demoTemplate();
+  if (!template) return startServerProcess({ env, needsClient: true });
+  const dataDir = mkdtempSync(path.join(tmpdir(), 'hueledger-e2e-'));
+  cpSync(template, dataDir, { recursive: true });
+  const server = await startServerProcess({ env, needsClient: true, dataDir });
+  return {
+    ...server,
+    async stop() {
+      await server.stop();
+      rmSync(dataDir, { recursive: true, force: true });
+    },
+  };
 }
