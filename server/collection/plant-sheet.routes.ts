@@ -1,5 +1,6 @@
 import { Router } from 'express';
-import { createSkipBody, progressQuery, walkOrderBody } from '../../shared/api/plant-sheet.js';
+import { createSkipBody, labelsQuery, progressQuery, walkOrderBody } from '../../shared/api/plant-sheet.js';
+import { labelPlants, renderPlantLabels } from './plant-labels.js';
 import { actorOf, allow, currentUser, signedIn } from '../core/access.js';
 import type { AppContext } from '../core/context.js';
 import { idParam, parse } from '../core/validate.js';
@@ -15,6 +16,16 @@ const OBSERVERS = allow('recorder', 'trainer', 'admin');
  */
 export function plantSheetRoutes(ctx: AppContext): Router {
   const router = Router();
+
+  // A fixed path before `/plants/:id/…`.
+  router.get('/plants/labels.pdf', signedIn, async (req, res) => {
+    const q = parse(labelsQuery, req.query, 'query');
+    const plants = await labelPlants(ctx.ds, q.accessionId !== undefined ? { accessionId: q.accessionId } : { siteId: q.siteId! });
+    const pdf = await renderPlantLabels(plants, ctx.publicUrl);
+    const name = q.accessionId !== undefined ? plants[0]!.accessionNumber : plants[0]!.siteCode;
+    res.setHeader('Content-Disposition', `attachment; filename="hueledger-plant-labels-${name.replace(/[^A-Za-z0-9-]/g, '_')}.pdf"`);
+    res.type('application/pdf').send(pdf);
+  });
 
   router.get('/plants/:id/sheet', signedIn, async (req, res) => {
     res.json(await plantSheet(ctx.ds, idParam(req.params['id'])));

@@ -44,3 +44,11 @@ export const progressQuery = z.object({
   at: z.iso.datetime({ offset: true, message: 'must be an ISO 8601 date-time with a time zone' }).optional(),
 });
 export type ProgressQuery = z.infer<typeof progressQuery>;
+
+/** `GET /api/plants/labels.pdf?accessionId=` or `?siteId=`: the label sheet of one accession's plants or of every plant at a site. */
+export const labelsQuery = z
+  .object({ accessionId: queryId('accession').optional(), siteId: queryId('site').optional() })
+  .superRefine((q, ctx) => {
+    if ((q.accessionId === undefined) === (q.siteId === undefined)) ctx.addIssue({ code: 'custom', path: ['accessionId'], message: 'name exactly one of accessionId and siteId' });
+  });
+export type LabelsQuery = z.infer<typeof labelsQuery>;
