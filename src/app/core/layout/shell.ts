@@ -12,7 +12,7 @@ import { AuthStore } from '../auth/auth-store';
 import { RequestProgress } from '../http/request-progress';
 import { ServerStatus } from '../http/server-status';
 import { QueueIndicator } from '../offline/queue-indicator';
-import { NotificationBell } from '../../features/notifications/components/notification-bell';
+import { NotificationBell } from '../notifications/notification-bell';
 import { navSectionsFor } from './nav-items';
 import { Viewport } from './viewport';
 

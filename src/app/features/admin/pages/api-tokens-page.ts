@@ -10,7 +10,7 @@ import { MatSnackBar } from '@angular/material/snack-bar';
 import { filter, switchMap } from 'rxjs';
 
 import type { ApiTokenRow, IssuedApiToken } from '../../../../../shared/api/api-token-answers.js';
-import { ConfirmDialog, ConfirmDialogData } from '../components/confirm-dialog';
+import { ConfirmDialog, ConfirmDialogData } from '../../../shared/confirm-dialog';
 import { IssueTokenDialog } from '../components/issue-token-dialog';
 import { ApiTokensApi } from '../data/api-tokens-api';
 

@@ -17,7 +17,7 @@ import { filter, switchMap } from 'rxjs';
 import type { InvitationRow, Role, UpdateUserBody, UserRow } from '../../../../../shared/api/auth.js';
 import { AuthStore } from '../../../core/auth/auth-store';
 import { ROLE_CHOICES } from '../../../core/auth/role-descriptions';
-import { ConfirmDialog, ConfirmDialogData } from '../components/confirm-dialog';
+import { ConfirmDialog, ConfirmDialogData } from '../../../shared/confirm-dialog';
 import { InvitationList } from '../components/invitation-list';
 import { InviteDialog } from '../components/invite-dialog';
 import { AdminApi } from '../data/admin-api';

@@ -10,7 +10,7 @@ import { ActivatedRoute, Router, RouterLink } from '@angular/router';
 import type { CalibrationResults, CalibrationSessionDetail, SpecimenView } from '../../../../../shared/api/calibration-answers.js';
 import { AuthStore } from '../../../core/auth/auth-store';
 import { ApiError } from '../../../core/http/api-error';
-import { ConfirmDialog, type ConfirmDialogData } from '../../admin/components/confirm-dialog';
+import { ConfirmDialog, type ConfirmDialogData } from '../../../shared/confirm-dialog';
 import { labText } from '../../reference-set/data/chip-words';
 import { CalibrationTabs } from '../components/calibration-tabs';
 import { InvitePanel } from '../components/invite-panel';

@@ -18,7 +18,7 @@ import { AccessionDialog, type AccessionDialogData } from '../components/accessi
 import { AccessionList } from '../components/accession-list';
 import { CharacterDialog } from '../components/character-dialog';
 import { CharacterList } from '../components/character-list';
-import { LoadState } from '../components/load-state';
+import { LoadState } from '../../../shared/load-state';
 import { SiteList } from '../components/site-list';
 import { CollectionApi, PASSPORT_CSV_URL } from '../data/collection-api';
 

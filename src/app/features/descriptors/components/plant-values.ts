@@ -6,7 +6,7 @@ import { MatIconModule } from '@angular/material/icon';
 import type { DescriptorValue, PlantDescriptors } from '../../../../../shared/api/descriptor-answers.js';
 import { Viewport } from '../../../core/layout/viewport';
 import { UnitPreference } from '../../../core/units/unit-preference';
-import { LoadState } from '../../collection/components/load-state';
+import { LoadState } from '../../../shared/load-state';
 import { DescriptorsApi } from '../data/descriptors-api';
 import { shownValue, valueTable } from '../data/value-table';
 

@@ -10,7 +10,7 @@ import { Router, RouterLink } from '@angular/router';
 
 import { ApiError } from '../../../core/http/api-error';
 import { UnitPreference, type UnitSystem } from '../../../core/units/unit-preference';
-import { LoadState } from '../../collection/components/load-state';
+import { LoadState } from '../../../shared/load-state';
 import { CollectionApi } from '../../collection/data/collection-api';
 import { plantAgeWords } from '../../collection/data/passport-fields';
 import { DescriptorRow } from '../components/descriptor-row';

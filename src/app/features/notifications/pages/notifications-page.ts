@@ -7,7 +7,7 @@ import { RouterLink } from '@angular/router';
 import type { NotificationDto, NotificationKind } from '../../../../../shared/api/review-answers.js';
 import { calibrationSessionPath } from '../../../../../shared/api/calibration-answers.js';
 import { readingUrl } from '../../../../../shared/api/reading-answers.js';
-import { NotificationFeed } from '../data/notification-feed';
+import { NotificationFeed } from '../../../core/notifications/notification-feed';
 
 /** Each kind of notice as a heading and an icon. */
 const KIND_WORDS: Record<NotificationKind, { title: string; icon: string }> = {

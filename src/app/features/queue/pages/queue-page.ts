@@ -9,7 +9,7 @@ import { catchError, filter, of } from 'rxjs';
 import { AuthStore } from '../../../core/auth/auth-store';
 import { OfflineQueue } from '../../../core/offline/offline-queue';
 import type { PendingReading } from '../../../core/offline/queue-item';
-import { ConfirmDialog, type ConfirmDialogData } from '../../admin/components/confirm-dialog';
+import { ConfirmDialog, type ConfirmDialogData } from '../../../shared/confirm-dialog';
 import { CollectionApi } from '../../collection/data/collection-api';
 import { QueuedReading, type ReadingChange } from '../components/queued-reading';
 import { savedAt, waitingWords } from '../data/queue-words';

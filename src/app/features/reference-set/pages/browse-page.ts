@@ -10,7 +10,7 @@ import { Router } from '@angular/router';
 import { Viewport } from '../../../core/layout/viewport';
 import { ChipDetail } from '../components/chip-detail';
 import { ScreenCaution } from '../components/screen-caution';
-import { SectionTabs } from '../components/section-tabs';
+import { ReferenceSetTabs } from '../components/reference-set-tabs';
 import { SwatchGrid } from '../components/swatch-grid';
 import { ChipCatalogue } from '../data/chip-catalogue';
 import { familyLabel, normaliseCode } from '../data/chip-words';
@@ -28,7 +28,7 @@ const NEIGHBOURS = 6;
  */
 @Component({
   selector: 'hl-browse-page',
-  imports: [ChipDetail, DecimalPipe, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressSpinnerModule, ScreenCaution, SectionTabs, SwatchGrid],
+  imports: [ChipDetail, DecimalPipe, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressSpinnerModule, ScreenCaution, ReferenceSetTabs, SwatchGrid],
   templateUrl: './browse-page.html',
   styleUrl: './browse-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -12,7 +12,7 @@ import { ColourEntry } from '../components/colour-entry';
 import { GamutMark } from '../components/gamut-mark';
 import { MatchStrip } from '../components/match-strip';
 import { ScreenCaution } from '../components/screen-caution';
-import { SectionTabs } from '../components/section-tabs';
+import { ReferenceSetTabs } from '../components/reference-set-tabs';
 import { ChipCatalogue } from '../data/chip-catalogue';
 import { labText, lchText } from '../data/chip-words';
 import type { ColourQuery } from '../data/colour-query';
@@ -37,7 +37,7 @@ export interface ShownMatch {
  */
 @Component({
   selector: 'hl-match-page',
-  imports: [BetweenBar, ColourEntry, GamutMark, MatButtonModule, MatIconModule, MatProgressSpinnerModule, MatchStrip, ScreenCaution, SectionTabs],
+  imports: [BetweenBar, ColourEntry, GamutMark, MatButtonModule, MatIconModule, MatProgressSpinnerModule, MatchStrip, ScreenCaution, ReferenceSetTabs],
   templateUrl: './match-page.html',
   styleUrl: './match-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

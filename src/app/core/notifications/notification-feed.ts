@@ -2,7 +2,7 @@ import { Injectable, computed, inject, signal } from '@angular/core';
 import { NavigationEnd, Router } from '@angular/router';
 import { EMPTY, Subscription, catchError, filter, merge, switchMap, timer } from 'rxjs';
 
-import type { NotificationDto, NotificationList } from '../../../../../shared/api/review-answers.js';
+import type { NotificationDto, NotificationList } from '../../../../shared/api/review-answers.js';
 import { NotificationsApi } from './notifications-api';
 
 /** How often the bell asks for new notices while the app is open. */

@@ -2,7 +2,7 @@ import { HttpClient } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
 import type { Observable } from 'rxjs';
 
-import type { NotificationList } from '../../../../../shared/api/review-answers.js';
+import type { NotificationList } from '../../../../shared/api/review-answers.js';
 
 /** The signed-in person's own notices: list them, mark one read. */
 @Injectable({ providedIn: 'root' })

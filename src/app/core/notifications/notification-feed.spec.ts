@@ -4,7 +4,7 @@ import { TestBed } from '@angular/core/testing';
 import { Router, provideRouter } from '@angular/router';
 import { Component } from '@angular/core';
 
-import type { NotificationDto } from '../../../../../shared/api/review-answers.js';
+import type { NotificationDto } from '../../../../shared/api/review-answers.js';
 import { NOTIFICATION_POLL_MS, NotificationFeed } from './notification-feed';
 
 @Component({ template: '' })

@@ -4,7 +4,7 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
 
-import { NotificationFeed } from '../data/notification-feed';
+import { NotificationFeed } from './notification-feed';
 
 /** The toolbar's bell: the unread count as a badge and in its name, linking to the notices; polls while shown. */
 @Component({

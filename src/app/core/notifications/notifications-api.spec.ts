@@ -2,7 +2,7 @@ import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
 
-import type { NotificationList } from '../../../../../shared/api/review-answers.js';
+import type { NotificationList } from '../../../../shared/api/review-answers.js';
 import { NotificationsApi } from './notifications-api';
 
 describe('NotificationsApi', () => {
