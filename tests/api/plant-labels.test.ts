@@ -3,7 +3,7 @@
 import { after, before, describe, test } from 'node:test';
 import assert from 'node:assert/strict';
 import { inflateSync } from 'node:zlib';
-import jsQR from 'jsqr';
+import jsqrModule from 'jsqr';
 import QRCode from 'qrcode';
 import sharp from 'sharp';
 import { plantSheetUrl } from '../../server/collection/plant-labels.js';
@@ -11,6 +11,9 @@ import { plantIdFromScan } from '../../shared/collection/plant-link.js';
 import { assertInvalidFields, assertProblem } from './assert-problem.js';
 import { PUBLIC_URL, signedInAs, startHarness, type Client, type Harness } from './harness.js';
 import { readingWorld, type ReadingWorld } from './reading-fixtures.js';
+
+/** jsqr is CommonJS with an ES-style default in its types: under NodeNext the import is the module, whose default is the decoder. */
+const jsQR = ((jsqrModule as unknown as { default?: unknown }).default ?? jsqrModule) as typeof jsqrModule.default;
 
 /** The text a PDF shows: every hex string of every content stream, inflated and decoded (pdfkit writes the standard fonts' text so). */
 function pdfText(pdf: Buffer): string {
