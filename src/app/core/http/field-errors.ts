@@ -19,3 +19,14 @@ export function applyFieldErrors(form: FormGroup, error: ApiError, aliases: Reco
   }
   return unmatched;
 }
+
+/**
+ * The one way a form shows a refusal: anything but an API error gets `fallback`; an API error's
+ * field errors go on their controls, and what is left for the line above the form is returned —
+ * the server's message with any refusals no control took, or null when every one found its field.
+ */
+export function refusalMessage(form: FormGroup, error: unknown, fallback: string, aliases: Record<string, string> = {}): string | null {
+  if (!(error instanceof ApiError)) return fallback;
+  const unmatched = applyFieldErrors(form, error, aliases);
+  return error.fieldErrors.length === 0 || unmatched.length > 0 ? [error.message, ...unmatched].join(' ') : null;
+}

@@ -9,8 +9,7 @@ import { MatSelectModule } from '@angular/material/select';
 
 import type { InvitationRow, Role } from '../../../../../shared/api/auth.js';
 import { ROLE_CHOICES, ROLE_DESCRIPTIONS } from '../../../core/auth/role-descriptions';
-import { ApiError } from '../../../core/http/api-error';
-import { applyFieldErrors } from '../../../core/http/field-errors';
+import { refusalMessage } from '../../../core/http/field-errors';
 import { AdminApi } from '../data/admin-api';
 
 /** Invite a person by e-mail with a role; closes with the new invitation once the server has sent it. */
@@ -49,11 +48,7 @@ export class InviteDialog {
 
   private showRefusal(error: unknown): void {
     this.busy.set(false);
-    if (!(error instanceof ApiError)) {
-      this.problem.set('Sending the invitation failed. Try again.');
-      return;
-    }
-    const unmatched = applyFieldErrors(this.form, error);
-    if (error.fieldErrors.length === 0 || unmatched.length > 0) this.problem.set([error.message, ...unmatched].join(' '));
+    const message = refusalMessage(this.form, error, 'Sending the invitation failed. Try again.');
+    if (message !== null) this.problem.set(message);
   }
 }

@@ -9,8 +9,7 @@ import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
 
 import type { IssuedApiToken } from '../../../../../shared/api/api-token-answers.js';
-import { ApiError } from '../../../core/http/api-error';
-import { applyFieldErrors } from '../../../core/http/field-errors';
+import { refusalMessage } from '../../../core/http/field-errors';
 import { AdminApi } from '../data/admin-api';
 import { ApiTokensApi } from '../data/api-tokens-api';
 
@@ -51,11 +50,7 @@ export class IssueTokenDialog {
 
   private showRefusal(error: unknown): void {
     this.busy.set(false);
-    if (!(error instanceof ApiError)) {
-      this.problem.set('Issuing the token failed. Try again.');
-      return;
-    }
-    const unmatched = applyFieldErrors(this.form, error);
-    if (error.fieldErrors.length === 0 || unmatched.length > 0) this.problem.set([error.message, ...unmatched].join(' '));
+    const message = refusalMessage(this.form, error, 'Issuing the token failed. Try again.');
+    if (message !== null) this.problem.set(message);
   }
 }

@@ -7,8 +7,7 @@ import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
 
 import { SCREENING_METHOD_LABELS, SCREENING_METHODS, SCREENING_NOTES_MAX, SCREENING_RESULTS, type ScreeningMethod, type ScreeningResult } from '../../../../../shared/api/calibration-answers.js';
-import { ApiError } from '../../../core/http/api-error';
-import { applyFieldErrors } from '../../../core/http/field-errors';
+import { refusalMessage } from '../../../core/http/field-errors';
 import { CalibrationApi } from '../data/calibration-api';
 import { localToday } from './session-form';
 
@@ -115,9 +114,8 @@ export class ScreeningForm {
       },
       error: (error: unknown) => {
         this.busy.set(false);
-        if (!(error instanceof ApiError)) return this.problem.set('The screening was not recorded. Try again.');
-        const unmatched = applyFieldErrors(this.form, error);
-        if (error.fieldErrors.length === 0 || unmatched.length > 0) this.problem.set([error.message, ...unmatched].join(' '));
+        const message = refusalMessage(this.form, error, 'The screening was not recorded. Try again.');
+        if (message !== null) this.problem.set(message);
       },
     });
   }

@@ -10,8 +10,7 @@ import { MatSelectModule } from '@angular/material/select';
 import { catchError, of } from 'rxjs';
 
 import { CALIBRATION_DEFAULT_THRESHOLDS, CALIBRATION_TITLE_MAX } from '../../../../../shared/api/calibration-answers.js';
-import { ApiError } from '../../../core/http/api-error';
-import { applyFieldErrors } from '../../../core/http/field-errors';
+import { refusalMessage } from '../../../core/http/field-errors';
 import { ReferenceSetApi } from '../../reference-set/data/reference-set-api';
 import { CalibrationApi } from '../data/calibration-api';
 
@@ -83,9 +82,8 @@ export class SessionForm {
         },
         error: (error: unknown) => {
           this.busy.set(false);
-          if (!(error instanceof ApiError)) return this.problem.set('Creating the session failed. Try again.');
-          const unmatched = applyFieldErrors(this.form, error, { 'thresholds.kappa': 'kappa', 'thresholds.deltaE00': 'deltaE00' });
-          if (error.fieldErrors.length === 0 || unmatched.length > 0) this.problem.set([error.message, ...unmatched].join(' '));
+          const message = refusalMessage(this.form, error, 'Creating the session failed. Try again.', { 'thresholds.kappa': 'kappa', 'thresholds.deltaE00': 'deltaE00' });
+          if (message !== null) this.problem.set(message);
         },
       });
   }

@@ -12,7 +12,7 @@ import type { PhotoDto } from '../../../../../shared/api/photo-answers.js';
 import { LAB_INPUT_LIMITS } from '../../../../../shared/api/reference-set-answers.js';
 import type { Region } from '../../../../../shared/photo/region.js';
 import { ApiError } from '../../../core/http/api-error';
-import { applyFieldErrors } from '../../../core/http/field-errors';
+import { refusalMessage } from '../../../core/http/field-errors';
 import { PhotoCanvas } from '../../record/components/photo-canvas';
 import { PhotosApi } from '../../record/data/photos-api';
 import { normaliseCode } from '../../reference-set/data/chip-words';
@@ -87,9 +87,8 @@ export class SpecimenForm {
       },
       error: (error: unknown) => {
         this.busy.set(false);
-        if (!(error instanceof ApiError)) return this.problem.set('The specimen was not added. Try again.');
-        const unmatched = applyFieldErrors(this.form, error, { 'lab.0': 'l', 'lab.1': 'a', 'lab.2': 'b' });
-        if (error.fieldErrors.length === 0 || unmatched.length > 0) this.problem.set([error.message, ...unmatched].join(' '));
+        const message = refusalMessage(this.form, error, 'The specimen was not added. Try again.', { 'lab.0': 'l', 'lab.1': 'a', 'lab.2': 'b' });
+        if (message !== null) this.problem.set(message);
       },
     });
   }

@@ -9,8 +9,7 @@ import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
 
 import { MCPD_DATE, type Accession, type Site } from '../../../../../shared/api/collection-answers.js';
-import { ApiError } from '../../../core/http/api-error';
-import { applyFieldErrors } from '../../../core/http/field-errors';
+import { refusalMessage } from '../../../core/http/field-errors';
 import { CollectionApi } from '../data/collection-api';
 import { PASSPORT_LABELS, SAMPLE_STATUSES } from '../data/passport-fields';
 import { passportBody } from '../data/passport-body';
@@ -97,11 +96,7 @@ export class AccessionDialog {
 
   private showRefusal(error: unknown): void {
     this.busy.set(false);
-    if (!(error instanceof ApiError)) {
-      this.problem.set('Saving the accession failed. Try again.');
-      return;
-    }
-    const unmatched = applyFieldErrors(this.form, error);
-    if (error.fieldErrors.length === 0 || unmatched.length > 0) this.problem.set([error.message, ...unmatched].join(' '));
+    const message = refusalMessage(this.form, error, 'Saving the accession failed. Try again.');
+    if (message !== null) this.problem.set(message);
   }
 }

@@ -10,8 +10,7 @@ import { MatSlideToggleModule } from '@angular/material/slide-toggle';
 import { TextFieldModule } from '@angular/cdk/text-field';
 
 import { CHARACTER_CODE, DEFAULT_DRIFT_THRESHOLD, ORGANS, type Character, type Organ } from '../../../../../shared/api/collection-answers.js';
-import { ApiError } from '../../../core/http/api-error';
-import { applyFieldErrors } from '../../../core/http/field-errors';
+import { refusalMessage } from '../../../core/http/field-errors';
 import { CollectionApi } from '../data/collection-api';
 
 /** Adds a character to the catalogue, or edits one (code and organ stay: readings refer to them). Closes with the saved character. */
@@ -71,11 +70,7 @@ export class CharacterDialog {
 
   private showRefusal(error: unknown): void {
     this.busy.set(false);
-    if (!(error instanceof ApiError)) {
-      this.problem.set('Saving the character failed. Try again.');
-      return;
-    }
-    const unmatched = applyFieldErrors(this.form, error);
-    if (error.fieldErrors.length === 0 || unmatched.length > 0) this.problem.set([error.message, ...unmatched].join(' '));
+    const message = refusalMessage(this.form, error, 'Saving the character failed. Try again.');
+    if (message !== null) this.problem.set(message);
   }
 }

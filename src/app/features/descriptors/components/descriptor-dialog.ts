@@ -11,8 +11,7 @@ import { MatSelectModule } from '@angular/material/select';
 import { MatSlideToggleModule } from '@angular/material/slide-toggle';
 
 import { DESCRIPTOR_CODE, DESCRIPTOR_KINDS, type Descriptor, type DescriptorKind } from '../../../../../shared/api/descriptor-answers.js';
-import { ApiError } from '../../../core/http/api-error';
-import { applyFieldErrors } from '../../../core/http/field-errors';
+import { refusalMessage } from '../../../core/http/field-errors';
 import { type DescriptorChanges, DescriptorsApi, type NewDescriptor } from '../data/descriptors-api';
 import { KIND_WORDS, categoryIdOf, ratioParts } from '../data/descriptor-words';
 
@@ -143,11 +142,7 @@ export class DescriptorDialog {
 
   private showRefusal(error: unknown): void {
     this.busy.set(false);
-    if (!(error instanceof ApiError)) {
-      this.problem.set('Saving the descriptor failed. Try again.');
-      return;
-    }
-    const unmatched = applyFieldErrors(this.form, error);
-    if (error.fieldErrors.length === 0 || unmatched.length > 0) this.problem.set([error.message, ...unmatched].join(' '));
+    const message = refusalMessage(this.form, error, 'Saving the descriptor failed. Try again.');
+    if (message !== null) this.problem.set(message);
   }
 }
