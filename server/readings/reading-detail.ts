@@ -70,6 +70,12 @@ export async function getReadingDetail(deps: { ds: DataSource; referenceSets: Re
   const r = await m.findOne(Reading, { where: { id }, relations: { accession: true, plant: true, character: true, site: true, observer: true, photo: true } });
   if (!r) throw AppError.notFound(`There is no reading ${id}.`);
   await nameBestChips(deps.ds, [r]);
-  const match = await referenceSets.match({ l: r.l, a: r.a, b: r.b }, DETAIL_MATCHES, r.setId);
-  return { ...toReadingDto(r), matches: match.matches, between: match.between, provenance: provenanceOf(r), versions: await chainOf(m, r), history: await historyOf(m, id) };
+  const lab = { l: r.l, a: r.a, b: r.b };
+  const match = await referenceSets.match(lab, DETAIL_MATCHES, r.setId);
+  const otherSets = [];
+  for (const set of (await referenceSets.list()).filter((s) => s.id !== r.setId)) {
+    const other = await referenceSets.match(lab, DETAIL_MATCHES, set.id);
+    otherSets.push({ setId: set.id, current: set.current, matches: other.matches, between: other.between });
+  }
+  return { ...toReadingDto(r), matches: match.matches, between: match.between, otherSets, provenance: provenanceOf(r), versions: await chainOf(m, r), history: await historyOf(m, id) };
 }

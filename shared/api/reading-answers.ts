@@ -137,9 +137,22 @@ export interface ReadingHistoryEvent {
 }
 
 /** `GET /api/readings/:id`. */
-export interface ReadingDetail extends ReadingDto {
+/** A reading's colour matched against a reference set other than the one it was stored with. */
+export interface OtherSetMatch {
+  setId: string;
+  /** Whether that set is the current one. */
+  current: boolean;
+  /** Nearest first. */
   matches: MatchedChip[];
   between: MatchBetween | null;
+}
+
+export interface ReadingDetail extends ReadingDto {
+  /** Nearest chips in the set the reading was stored with (`setId`). */
+  matches: MatchedChip[];
+  between: MatchBetween | null;
+  /** The same colour in every other stored set, so a v1 reading also shows its v2 chips and back. */
+  otherSets: OtherSetMatch[];
   provenance: ReadingProvenance;
   /** The whole supersede chain, oldest first (this reading included). */
   versions: ReadingVersion[];

@@ -46,6 +46,13 @@ describe("readings show their best chip's name as derived today", () => {
     const detail = (await admin.get(`/api/readings/${list.items[0]!.id}`).expect(200)).body as ReadingDetail;
     assert.equal(detail.bestChipName, list.items[0]!.bestChipName);
     assert.ok(detail.matches.every((m) => !OLD_WORDS.test(m.name)));
+    // The detail also matches the colour against the other set (v2 for a v1 reading), marked current or not.
+    assert.equal(detail.setId, 'v1');
+    assert.deepEqual(detail.otherSets.map((o) => [o.setId, o.current, o.matches.length]), [['v2', false, 5]]);
+    assert.ok(detail.otherSets[0]!.matches.every((m) => Number(m.code.slice(2, 5)) > 189), 'v2 codes');
+    const lab = { l: detail.lab[0], a: detail.lab[1], b: detail.lab[2] };
+    const v2Best = (await admin.post('/api/match', { lab: detail.lab, setId: 'v2', k: 1 }).expect(200)).body.matches[0];
+    assert.equal(detail.otherSets[0]!.matches[0]!.code, v2Best.code, `v2 best for ${JSON.stringify(lab)}`);
     const csv = (await admin.get('/api/readings/export.csv').expect(200)).text;
     assert.doesNotMatch(csv, OLD_WORDS);
     const stored = await h.ds.getRepository(Reading).find({ select: { id: true, bestChipName: true } });

@@ -45,11 +45,19 @@ import type { ReadingDetail } from '../../../../../shared/api/reading-answers.js
       </p>
     }
     @if (showStrip() && r.matches.length) {
-      <h3>Nearest chips</h3>
+      <h3>Nearest chips{{ r.setId ? ' in set ' + r.setId + ', the set it was matched against' : '' }}</h3>
       <hl-match-strip [matches]="r.matches" />
     }
     @if (showStrip() && between(); as b) {
       <hl-between-bar [between]="b.between" [fromHex]="b.fromHex" [toHex]="b.toHex" />
+    }
+    @if (showStrip()) {
+      @for (other of r.otherSets ?? []; track other.setId) {
+        @if (other.matches[0]; as best) {
+          <h3 [attr.data-testid]="'other-set-' + other.setId">In set {{ other.setId }}{{ other.current ? ' (current)' : '' }}: {{ best.code }}, {{ best.name }}, ΔE00 {{ deltaE(best.deltaE00) }}</h3>
+          <hl-match-strip [matches]="other.matches" />
+        }
+      }
     }
     <p class="hl-muted caution">Screen colours are approximate; trust the numbers and codes, and judge against the physical chip in good light.</p>
   `,
@@ -110,7 +118,8 @@ import type { ReadingDetail } from '../../../../../shared/api/reading-answers.js
 })
 export class ReadingMatch {
   readonly reading = input.required<
-    Pick<ReadingDetail, 'hex' | 'lab' | 'lch' | 'inGamut' | 'bestChip' | 'bestChipName' | 'bestChipHex' | 'deltaE00' | 'verdict' | 'eyeChipCode' | 'eyeDeltaE00' | 'method' | 'matches' | 'between'>
+    Pick<ReadingDetail, 'hex' | 'lab' | 'lch' | 'inGamut' | 'bestChip' | 'bestChipName' | 'bestChipHex' | 'deltaE00' | 'verdict' | 'eyeChipCode' | 'eyeDeltaE00' | 'method' | 'matches' | 'between'> &
+      Partial<Pick<ReadingDetail, 'setId' | 'otherSets'>>
   >();
   /** Whether to show the nearest chips and the between bar (the detail does; the saved panel keeps it short). */
   readonly showStrip = input(true);

@@ -100,6 +100,17 @@ describe('ReadingDetailPage', () => {
     expect((await open({ id: 9, role: 'recorder' })).textContent).not.toContain('Correct this reading');
   });
 
+  it('should show the colour matched against the other reference set too, beside the set it was stored with', async () => {
+    const other = {
+      setId: 'v2',
+      current: true,
+      matches: [{ code: 'F-201.004', parent: 'F-201', name: 'plum L32 C30', hex: '#6a2e5b', lab: [32, 30, -12], deltaE00: 0.62, verdict: 'indistinguishable' }],
+      between: null,
+    };
+    const el = await open({ id: 4, role: 'recorder' }, { ...DETAIL, otherSets: [other] } as ReadingDetail);
+    expect(el.querySelector('[data-testid="other-set-v2"]')?.textContent).toContain('In set v2 (current): F-201.004, plum L32 C30, ΔE00 0.6');
+  });
+
   it('should point a superseded reading to its correction and offer no correction of it', async () => {
     const el = await open({ id: 4, role: 'recorder' }, { ...DETAIL, supersededById: 41 });
     expect(el.textContent).toContain('Superseded by a correction');

@@ -77,6 +77,13 @@ export class ChipCatalogue {
   /** Whether loading failed (the page offers to try again). */
   readonly failed = computed(() => this.state() === 'failed');
 
+  /** Forgets the loaded set and loads the current one again (after an admin chose another). */
+  reload(): void {
+    if (this.state() === 'loading') return;
+    this.state.set('idle');
+    this.load();
+  }
+
   /** Starts loading unless the chips are loaded or on their way. */
   load(): void {
     if (this.state() === 'loading' || this.state() === 'ready') return;

@@ -22,6 +22,11 @@ export class ReferenceSetApi {
     return this.http.get<ReferenceSetSummary[]>('/api/reference-sets');
   }
 
+  /** Makes a stored set the current one (admins only); answers the sets as they now stand. */
+  chooseCurrent(setId: string): Observable<ReferenceSetSummary[]> {
+    return this.http.put<ReferenceSetSummary[]>('/api/reference-sets/current', { setId });
+  }
+
   /** All chips of a set in code order; the browser may answer from its cache (ETag, a day's max-age). */
   chips(setId: string): Observable<ChipDto[]> {
     return this.http.get<ChipDto[]>(chipsUrl(setId));

@@ -7,8 +7,10 @@ import { MatInputModule } from '@angular/material/input';
 import { MatProgressSpinnerModule } from '@angular/material/progress-spinner';
 import { Router } from '@angular/router';
 
+import { AuthStore } from '../../../core/auth/auth-store';
 import { Viewport } from '../../../core/layout/viewport';
 import { ChipDetail } from '../components/chip-detail';
+import { CurrentSetChooser } from '../components/current-set-chooser';
 import { ScreenCaution } from '../components/screen-caution';
 import { ReferenceSetTabs } from '../components/reference-set-tabs';
 import { SwatchGrid } from '../components/swatch-grid';
@@ -23,12 +25,12 @@ const FULL_CODE = /^\s*F-\d{3}(?:\.\d{3})?\s*$/i;
 const NEIGHBOURS = 6;
 
 /**
- * Browse the current set: field chips by hue family, a field chip's fine chips, one chip's detail,
+ * Browse the current set: field chips by hue sector (light to dark), a field chip's fine chips, one chip's detail,
  * search by code and the printable card. The chip shown is in the URL (`?chip=F-087.014`).
  */
 @Component({
   selector: 'hl-browse-page',
-  imports: [ChipDetail, DecimalPipe, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressSpinnerModule, ScreenCaution, ReferenceSetTabs, SwatchGrid],
+  imports: [ChipDetail, CurrentSetChooser, DecimalPipe, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressSpinnerModule, ScreenCaution, ReferenceSetTabs, SwatchGrid],
   templateUrl: './browse-page.html',
   styleUrl: './browse-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -43,6 +45,9 @@ export class BrowsePage {
   readonly chip = input<string>();
 
   protected readonly catalogue = inject(ChipCatalogue);
+  private readonly auth = inject(AuthStore);
+  /** Whether the signed-in person may choose the current set. */
+  protected readonly isAdmin = computed(() => this.auth.currentUser()?.role === 'admin');
   protected readonly searchProblem = signal<string | null>(null);
   protected readonly familyLabel = familyLabel;
 
