@@ -19,6 +19,10 @@ export class Accession {
   @Column('varchar', { length: 40, default: 'taro' }) cropName: string;
   @Column('varchar', { length: 3, nullable: true }) originCountry: string | null;
   @Column('varchar', { length: 200, nullable: true }) collectingSite: string | null;
+  /** Where the sample was collected (MCPD DECLATITUDE, DECLONGITUDE, ELEVATION), not where it is held: decimal degrees WGS 84, metres. */
+  @Column('real', { nullable: true }) collectingLatitude: number | null;
+  @Column('real', { nullable: true }) collectingLongitude: number | null;
+  @Column('real', { nullable: true }) collectingElevationM: number | null;
   @Column('varchar', { length: 8, nullable: true }) acquisitionDate: string | null;
   @Column('integer', { nullable: true }) sampleStatus: number | null;
   @Column('varchar', { length: 200, nullable: true }) donorName: string | null;
@@ -54,6 +58,9 @@ export function toAccessionDto(a: Accession): AccessionDto {
     cropName: a.cropName,
     originCountry: a.originCountry,
     collectingSite: a.collectingSite,
+    collectingLatitude: a.collectingLatitude ?? null,
+    collectingLongitude: a.collectingLongitude ?? null,
+    collectingElevationM: a.collectingElevationM ?? null,
     acquisitionDate: a.acquisitionDate,
     sampleStatus: a.sampleStatus,
     donorName: a.donorName,

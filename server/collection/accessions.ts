@@ -5,6 +5,19 @@ import { AppError } from '../core/app-error.js';
 import { Accession, Plant, toAccessionDto } from './accession.entity.js';
 import { Site } from './site.entity.js';
 
+/**
+ * 409 naming the field when another accession holds the number in any letter case: "hl-0001" and
+ * "HL-0001" would read as one accession on a label and in a spreadsheet lookup.
+ */
+export async function assertAccessionNumberFree(m: EntityManager, accessionNumber: string, exceptId?: number): Promise<void> {
+  const holder = await m.createQueryBuilder(Accession, 'a').where('LOWER(a.accessionNumber) = LOWER(:n)', { n: accessionNumber }).getOne();
+  if (holder && holder.id !== exceptId) {
+    throw new AppError(409, 'Conflict', `Accession number ${accessionNumber} is already in use (as ${holder.accessionNumber}); numbers are compared regardless of case.`, [
+      { field: 'accessionNumber', message: `already in use as ${holder.accessionNumber} (case does not count)` },
+    ]);
+  }
+}
+
 /** One accession with its plants; 404 when there is none. */
 export async function findAccession(m: EntityManager, id: number): Promise<Accession> {
   const accession = await m.findOne(Accession, { where: { id }, relations: { site: true, plants: { site: true } } });
@@ -27,7 +40,7 @@ async function siteFor(m: EntityManager, id: number, field: string): Promise<Sit
 /** The passport fields PATCH may change; null clears an optional one. */
 const PASSPORT_KEYS = [
   'accessionNumber', 'name', 'otherNames', 'instituteCode', 'genus', 'species', 'speciesAuthor', 'cropName',
-  'originCountry', 'collectingSite', 'acquisitionDate', 'sampleStatus', 'donorName', 'remarks',
+  'originCountry', 'collectingSite', 'collectingLatitude', 'collectingLongitude', 'collectingElevationM', 'acquisitionDate', 'sampleStatus', 'donorName', 'remarks',
 ] as const;
 
 /** Changes passport fields (and the holding site); 404 unknown, 400 unknown site, 409 for a taken number. */
@@ -35,9 +48,7 @@ export async function updateAccession(ds: DataSource, actor: Actor, id: number, 
   return ds.transaction(async (m) => {
     const accession = await findAccession(m, id);
     const changes: Record<string, { from: unknown; to: unknown }> = {};
-    if (body.accessionNumber !== undefined && body.accessionNumber !== accession.accessionNumber) {
-      if (await m.existsBy(Accession, { accessionNumber: body.accessionNumber })) throw AppError.conflict(`Accession number ${body.accessionNumber} is already in use.`);
-    }
+    if (body.accessionNumber !== undefined && body.accessionNumber !== accession.accessionNumber) await assertAccessionNumberFree(m, body.accessionNumber, id);
     for (const key of PASSPORT_KEYS) {
       const value = body[key];
       if (value === undefined) continue;

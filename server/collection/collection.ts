@@ -3,6 +3,7 @@ import type { Accession as AccessionDto, CreateAccessionBody, Character as Chara
 import { recordAudit, type Actor } from '../audit/audit.js';
 import { AppError } from '../core/app-error.js';
 import { Accession, Plant, toAccessionDto } from './accession.entity.js';
+import { assertAccessionNumberFree } from './accessions.js';
 import { Character, toCharacterDto } from './character.entity.js';
 import { Site, toSiteDto } from './site.entity.js';
 
@@ -34,9 +35,7 @@ export async function createAccession(ds: DataSource, actor: Actor, body: Create
       if (!site) throw AppError.badRequest(`No site ${id}.`, [{ field: id === body.siteId ? 'siteId' : 'plants.siteId', message: `site ${id} does not exist` }]);
       sites.set(id, site);
     }
-    if (await m.existsBy(Accession, { accessionNumber: body.accessionNumber })) {
-      throw AppError.conflict(`Accession number ${body.accessionNumber} is already in use.`);
-    }
+    await assertAccessionNumberFree(m, body.accessionNumber);
     const labels = (body.plants ?? []).map((p) => p.label);
     if (new Set(labels).size !== labels.length) throw AppError.badRequest('Plant labels must be unique within an accession.', [{ field: 'plants', message: 'labels repeat' }]);
     const site = sites.get(body.siteId)!;
@@ -48,6 +47,9 @@ export async function createAccession(ds: DataSource, actor: Actor, body: Create
         instituteCode: body.instituteCode ?? null,
         originCountry: body.originCountry ?? null,
         collectingSite: body.collectingSite ?? null,
+        collectingLatitude: body.collectingLatitude ?? null,
+        collectingLongitude: body.collectingLongitude ?? null,
+        collectingElevationM: body.collectingElevationM ?? null,
         acquisitionDate: body.acquisitionDate ?? null,
         sampleStatus: body.sampleStatus ?? null,
         donorName: body.donorName ?? null,

@@ -12,9 +12,14 @@ export async function getSite(m: EntityManager, id: number): Promise<Site> {
   return site;
 }
 
+/** 409 naming the field when another site holds the code in any letter case ("rdp" beside "RDP"). */
 async function assertCodeFree(m: EntityManager, code: string, exceptId?: number): Promise<void> {
-  const holder = await m.findOneBy(Site, { code });
-  if (holder && holder.id !== exceptId) throw AppError.conflict(`Site code ${code} is already in use.`);
+  const holder = await m.createQueryBuilder(Site, 's').where('LOWER(s.code) = LOWER(:code)', { code }).getOne();
+  if (holder && holder.id !== exceptId) {
+    throw new AppError(409, 'Conflict', `Site code ${code} is already in use (as ${holder.code}); codes are compared regardless of case.`, [
+      { field: 'code', message: `already in use as ${holder.code} (case does not count)` },
+    ]);
+  }
 }
 
 /** The scheme's warnings, after checking once more that it has no errors (the zod schema checks the same). */

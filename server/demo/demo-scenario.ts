@@ -125,6 +125,10 @@ export interface DemoAccession {
   originCountry: string | null;
   /** COLLSITE */
   collectingSite: string | null;
+  /** DECLATITUDE, DECLONGITUDE, ELEVATION of where it was collected (invented), when known. */
+  collectingLatitude?: number;
+  collectingLongitude?: number;
+  collectingElevationM?: number;
   /** ACQDATE, "YYYYMMDD" with hyphens for unknown parts */
   acquisitionDate: string | null;
   /** SAMPSTAT: 300 traditional cultivar/landrace, 400 breeding material, 500 advanced cultivar */

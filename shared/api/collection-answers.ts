@@ -74,6 +74,10 @@ export interface Accession {
   originCountry: string | null;
   /** COLLSITE */
   collectingSite: string | null;
+  /** DECLATITUDE, DECLONGITUDE (decimal degrees, WGS 84) and ELEVATION (m) of where it was collected, never the holding site's. */
+  collectingLatitude: number | null;
+  collectingLongitude: number | null;
+  collectingElevationM: number | null;
   /** ACQDATE, "YYYYMMDD" with hyphens for unknown parts */
   acquisitionDate: string | null;
   /** SAMPSTAT code (e.g. 300 traditional cultivar/landrace) */

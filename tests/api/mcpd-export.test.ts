@@ -30,6 +30,9 @@ describe('GET /api/accessions/mcpd.csv', () => {
       instituteCode: 'XHL009',
       originCountry: 'FJI',
       collectingSite: 'Garden by the old mill\nsecond line',
+      collectingLatitude: -16.80012,
+      collectingLongitude: 178.41236,
+      collectingElevationM: 240.4,
       acquisitionDate: '202403--',
       sampleStatus: 300,
       donorName: 'Ottoline Brake',
@@ -49,10 +52,20 @@ describe('GET /api/accessions/mcpd.csv', () => {
     assert.ok(!text.startsWith('\uFEFF'), 'no byte-order mark before PUID');
   });
 
-  test('should have one row per accession, in accession-number order', () => {
+  test('should have one row per accession, in accession-number order, then the report row', () => {
     assert.ok(rows.length >= 9, `${rows.length} rows`);
-    const numbers = rows.map((r) => r['ACCENUMB']!);
+    const numbers = rows.slice(0, -1).map((r) => r['ACCENUMB']!);
+    assert.ok(numbers.every((n) => n !== ''));
     assert.deepEqual(numbers, [...numbers].sort());
+    assert.equal(rows.at(-1)!['ACCENUMB'], '', 'the report row holds no accession');
+  });
+
+  test('should warn in a report row about every accession without INSTCODE (MCPD requires it)', () => {
+    const report = rows.at(-1)!;
+    const without = rows.slice(0, -1).filter((r) => r['INSTCODE'] === '').map((r) => r['ACCENUMB']);
+    assert.ok(without.includes('MC-0002') && without.includes('HL-0006'), without.join(','));
+    assert.equal(report['REMARKS'], `Export report, not an accession: INSTCODE (required by MCPD) is missing for ${without.length} accessions: ${without.join(', ')}.`);
+    assert.ok(!report['REMARKS']!.includes('MC-0001'));
   });
 
   test('should quote a name with a comma and join several names with ";"', () => {
@@ -72,19 +85,22 @@ describe('GET /api/accessions/mcpd.csv', () => {
     assert.equal(row['INSTCODE'], 'XHL009');
   });
 
-  test('should give the holding site’s coordinates in decimal degrees and its elevation in whole metres', () => {
+  test('should give the accession’s own collecting coordinates in decimal degrees and elevation in whole metres, never the holding site’s', () => {
     const row = rows.find((r) => r['ACCENUMB'] === 'MC-0001')!;
-    assert.equal(row['DECLATITUDE'], '-17.5123');
-    assert.equal(row['DECLONGITUDE'], '177.9877');
-    assert.equal(row['ELEVATION'], '13');
+    assert.equal(row['DECLATITUDE'], '-16.8001');
+    assert.equal(row['DECLONGITUDE'], '178.4124');
+    assert.equal(row['ELEVATION'], '240');
     assert.equal(row['LATITUDE'], '', 'the DMS forms stay blank');
+    // MC-0002 has no collecting coordinates: blank, although its holding site has -17.5123, 177.9877, 13 m.
+    const unknown = rows.find((r) => r['ACCENUMB'] === 'MC-0002')!;
+    assert.deepEqual([unknown['DECLATITUDE'], unknown['DECLONGITUDE'], unknown['ELEVATION']], ['', '', '']);
   });
 
   test('should make text that would start a spreadsheet formula inert, but leave negative coordinates as numbers (OWASP CSV injection)', () => {
     const row = rows.find((r) => r['ACCENUMB'] === 'MC-0002')!;
     assert.equal(row['ACCENAME'], `'=HYPERLINK("https://example.invalid","open")`);
     assert.equal(row['REMARKS'], "'@SUM(1+1)");
-    assert.match(row['DECLATITUDE']!, /^-17\.512/);
+    assert.equal(rows.find((r) => r['ACCENUMB'] === 'MC-0001')!['DECLATITUDE'], '-16.8001');
   });
 
   test('should keep UTF-8 text intact', () => {

@@ -52,6 +52,7 @@ export class AccessionDialog {
   protected readonly data = inject<AccessionDialogData>(MAT_DIALOG_DATA);
   protected readonly labels = PASSPORT_LABELS;
   protected readonly statuses = SAMPLE_STATUSES;
+  protected readonly coordinateFields = ['collectingLatitude', 'collectingLongitude', 'collectingElevationM'] as const;
   protected readonly form = this.buildForm(this.data.accession);
   protected readonly busy = signal(false);
   protected readonly problem = signal<string | null>(null);
@@ -87,6 +88,9 @@ export class AccessionDialog {
       originCountry: [accession?.originCountry ?? '', Validators.pattern(/^[A-Z]{3}$/)],
       acquisitionDate: [accession?.acquisitionDate ?? '', Validators.pattern(MCPD_DATE)],
       collectingSite: [accession?.collectingSite ?? '', Validators.maxLength(200)],
+      collectingLatitude: [accession?.collectingLatitude?.toString() ?? ''],
+      collectingLongitude: [accession?.collectingLongitude?.toString() ?? ''],
+      collectingElevationM: [accession?.collectingElevationM?.toString() ?? ''],
       sampleStatus: [accession?.sampleStatus ?? (null as number | null)],
       instituteCode: [accession?.instituteCode ?? '', Validators.maxLength(20)],
       donorName: [accession?.donorName ?? '', Validators.maxLength(200)],

@@ -9,6 +9,10 @@ export interface PassportForm {
   originCountry: string;
   acquisitionDate: string;
   collectingSite: string;
+  /** Decimal degrees and metres as typed; empty when unknown. */
+  collectingLatitude: string;
+  collectingLongitude: string;
+  collectingElevationM: string;
   sampleStatus: number | null;
   instituteCode: string;
   donorName: string;
@@ -29,9 +33,18 @@ export function passportBody(form: PassportForm): PassportBody {
     originCountry: orNull(form.originCountry)?.toUpperCase() ?? null,
     acquisitionDate: orNull(form.acquisitionDate),
     collectingSite: orNull(form.collectingSite),
+    collectingLatitude: numberOrNull(form.collectingLatitude),
+    collectingLongitude: numberOrNull(form.collectingLongitude),
+    collectingElevationM: numberOrNull(form.collectingElevationM),
     sampleStatus: form.sampleStatus,
     instituteCode: orNull(form.instituteCode),
     donorName: orNull(form.donorName),
     remarks: orNull(form.remarks),
   };
+}
+
+/** A typed number (a true minus sign or a decimal comma accepted), null when empty; NaN is left for the server to refuse by name. */
+function numberOrNull(text: string): number | null {
+  const t = text.trim().replace('−', '-').replace(',', '.');
+  return t === '' ? null : Number(t);
 }

@@ -22,7 +22,7 @@ import { PASSPORT_LABELS, type PassportField, mcpdDateWords, plantAgeWords, samp
 /** Passport fields in the order the page lists them. */
 const SHOWN: readonly PassportField[] = [
   'accessionNumber', 'name', 'otherNames', 'genus', 'species', 'speciesAuthor', 'cropName', 'originCountry',
-  'collectingSite', 'acquisitionDate', 'sampleStatus', 'instituteCode', 'donorName', 'remarks',
+  'collectingSite', 'collectingLatitude', 'collectingLongitude', 'collectingElevationM', 'acquisitionDate', 'sampleStatus', 'instituteCode', 'donorName', 'remarks',
 ];
 
 /** One accession: passport with MCPD names, its plants with their age, and the latest descriptor values per plant. */
