@@ -157,9 +157,6 @@ export const DEMO_ACCESSIONS: readonly DemoAccession[] = [
     instituteCode: DEMO_GENEBANK,
     originCountry: 'FJI',
     collectingSite: 'Home garden beside the upper ford, Quorrish Creek valley',
-    collectingLatitude: -17.4512,
-    collectingLongitude: 178.0931,
-    collectingElevationM: 85,
     acquisitionDate: '20240312',
     sampleStatus: 300,
     donorName: 'Mara Quillfeather',
@@ -365,7 +362,7 @@ export const DEMO_ACCESSIONS: readonly DemoAccession[] = [
   },
   {
     // The planted duplicate: the same invented variety as HL-0004 "Copper Vein", received again
-    // under a donor's own name. Its readings and measurements follow HL-0004's, so the look-alike
+    // under the same donor's own name. Its readings and measurements follow HL-0004's, so the look-alike
     // page can find it (see DEMO_DUPLICATE).
     accessionNumber: 'HL-0013',
     name: 'Ember Thread',
@@ -375,7 +372,7 @@ export const DEMO_ACCESSIONS: readonly DemoAccession[] = [
     collectingSite: 'Kitchen garden below the Tessivane terraces',
     acquisitionDate: '20250305',
     sampleStatus: 300,
-    donorName: 'Linnet Oakhollow',
+    donorName: 'Tobiah Fenmarch',
     remarks: 'Donor\'s own name for it; not yet compared with the rest of the collection.',
     siteCode: 'HTG',
     plants: [
