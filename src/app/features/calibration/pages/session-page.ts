@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, DestroyRef, computed, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, DestroyRef, type OnInit, computed, inject, input, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatExpansionModule } from '@angular/material/expansion';
@@ -34,14 +34,16 @@ const SOURCE_WORDS: Record<SpecimenView['source'], string> = { lab: 'instrument 
   templateUrl: './session-page.html',
   styleUrl: './session-page.scss',
 })
-export class SessionPage {
+export class SessionPage implements OnInit {
   private readonly api = inject(CalibrationApi);
   private readonly dialog = inject(MatDialog);
   private readonly snackBar = inject(MatSnackBar);
   private readonly route = inject(ActivatedRoute);
   private readonly router = inject(Router);
   protected readonly role = inject(AuthStore).role;
-  protected readonly sessionId = Number(this.route.snapshot.paramMap.get('id'));
+  /** The session's id, from the route (component input binding). */
+  readonly id = input.required<string>();
+  protected readonly sessionId = computed(() => Number(this.id()));
 
   protected readonly session = signal<CalibrationSessionDetail | null>(null);
   protected readonly problem = signal<string | null>(null);
@@ -49,14 +51,14 @@ export class SessionPage {
   /** Whether the add-specimen panel is open: at first only when there is no specimen, then as the trainer leaves it. */
   protected readonly addOpen = signal<boolean | null>(null);
   /** Live results; the poller stops once they say closed, and when the page is left. */
-  protected readonly poller = new Poller<CalibrationResults>(() => this.api.results(this.sessionId), (r) => r.status === 'open', RESULTS_POLL_MS, inject(DestroyRef));
+  protected readonly poller = new Poller<CalibrationResults>(() => this.api.results(this.sessionId()), (r) => r.status === 'open', RESULTS_POLL_MS, inject(DestroyRef));
   protected readonly results = computed(() => this.poller.value());
   protected readonly open = computed(() => this.session()?.status === 'open' && this.results()?.status !== 'closed');
   protected readonly pollSeconds = RESULTS_POLL_MS / 1000;
   protected readonly sourceWords = SOURCE_WORDS;
   protected readonly labText = labText;
 
-  constructor() {
+  ngOnInit(): void {
     if (!runsSessions(this.role())) {
       void this.router.navigate(['take'], { relativeTo: this.route, replaceUrl: true });
       return;
@@ -66,7 +68,7 @@ export class SessionPage {
   }
 
   protected loadSession(): void {
-    this.api.session(this.sessionId).subscribe({
+    this.api.session(this.sessionId()).subscribe({
       next: (s) => {
         this.session.set(s);
         if (this.addOpen() === null) this.addOpen.set(!s.specimens.length);
@@ -99,7 +101,7 @@ export class SessionPage {
 
   private closeSession(): void {
     this.closing.set(true);
-    this.api.close(this.sessionId).subscribe({
+    this.api.close(this.sessionId()).subscribe({
       next: (answer) => {
         this.closing.set(false);
         this.poller.stop();

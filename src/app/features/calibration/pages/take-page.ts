@@ -1,9 +1,9 @@
-import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, type OnInit, computed, inject, input, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressSpinnerModule } from '@angular/material/progress-spinner';
 import { MatSnackBar } from '@angular/material/snack-bar';
-import { ActivatedRoute, RouterLink } from '@angular/router';
+import { RouterLink } from '@angular/router';
 
 import type { CalibrationSessionDetail, MyCalibrationResult, MyPick } from '../../../../../shared/api/calibration-answers.js';
 import { ApiError } from '../../../core/http/api-error';
@@ -26,11 +26,13 @@ import { SessionChips } from '../data/session-chips';
   templateUrl: './take-page.html',
   styleUrl: './take-page.scss',
 })
-export class TakePage {
+export class TakePage implements OnInit {
   private readonly api = inject(CalibrationApi);
   private readonly chips = inject(SessionChips);
   private readonly snackBar = inject(MatSnackBar);
-  private readonly sessionId = Number(inject(ActivatedRoute).snapshot.paramMap.get('id'));
+  /** The session's id, from the route (component input binding). */
+  readonly id = input.required<string>();
+  private readonly sessionId = computed(() => Number(this.id()));
 
   protected readonly session = signal<CalibrationSessionDetail | null>(null);
   protected readonly chipSet = signal<ChipSet | null>(null);
@@ -49,13 +51,13 @@ export class TakePage {
   });
   protected readonly answered = computed(() => this.specimens().filter((s) => this.picks().has(s.id)).length);
 
-  constructor() {
+  ngOnInit(): void {
     this.loadSession(true);
   }
 
   protected loadSession(first = false): void {
     this.problem.set(null);
-    this.api.session(this.sessionId).subscribe({
+    this.api.session(this.sessionId()).subscribe({
       next: (session) => {
         this.session.set(session);
         if (first) this.index.set(firstUnanswered(session));
@@ -75,7 +77,7 @@ export class TakePage {
     const specimen = this.current();
     if (!specimen) return;
     this.saving.set(true);
-    this.api.respond(this.sessionId, { specimenId: specimen.id, chipCode }).subscribe({
+    this.api.respond(this.sessionId(), { specimenId: specimen.id, chipCode }).subscribe({
       next: (answer) => {
         this.saving.set(false);
         this.rememberPick({ specimenId: specimen.id, chipCode, respondedAt: new Date().toISOString() });
@@ -113,7 +115,7 @@ export class TakePage {
   }
 
   private loadResult(): void {
-    this.api.myResult(this.sessionId).subscribe({
+    this.api.myResult(this.sessionId()).subscribe({
       next: (result) => this.result.set(result),
       error: (error: unknown) => {
         if (!(error instanceof ApiError && error.status === 404)) this.problem.set(error instanceof ApiError ? error.message : 'Your result could not be loaded.');
