@@ -67,4 +67,26 @@ describe('SampleResult', () => {
   it('should say when the swatch stands in for a colour outside the screen', () => {
     expect(render(sample({ inGamut: false })).textContent).toContain('outside what a screen shows');
   });
+
+  it('should show each colour of a region that is not even, with its share and chip', () => {
+    const stripe = {
+      lab: [32, 30, -12] as [number, number, number],
+      lch: [32, 32.3, 338] as [number, number, number],
+      hex: '#6b2d5c',
+      inGamut: true,
+      spreadDeltaE00: 0.3,
+    };
+    const chipOf = (code: string) => ({ code, parent: 'F-150', name: 'plum L32 C32', hex: '#6a2e5b', lab: [32, 30, -12] as [number, number, number], deltaE00: 0.4, verdict: 'indistinguishable' as const });
+    const el = render(sample({ uniform: false, spreadDeltaE00: 12, clusters: [{ ...stripe, hex: '#4f7a28', share: 0.75, chip: chipOf('F-300.010') }, { ...stripe, share: 0.25, chip: chipOf('F-150.004') }] }));
+    const section = el.querySelector('[data-testid=clusters]')!;
+    expect(section.textContent).toContain('2 colours in this region');
+    const items = [...section.querySelectorAll('li')].map((li) => li.textContent!.replace(/\s+/g, ' '));
+    expect(items[0]).toContain('F-300.010');
+    expect(items[0]).toContain('75 % of the region');
+    expect(items[1]).toContain('25 % of the region');
+  });
+
+  it('should show no colour list for an even region', () => {
+    expect(render(sample()).querySelector('[data-testid=clusters]')).toBeNull();
+  });
 });
