@@ -22,7 +22,7 @@ import { seedCharacterCatalogue } from '../server/collection/seed-catalogue.js';
 import { Season, Site } from '../server/collection/site.entity.js';
 import { openDatabase } from '../server/data-source.js';
 import { DEMO_SITES } from '../server/demo/demo-scenario.js';
-import { mulberry32 } from '../reference-colors/prng.js';
+import { mulberry32 } from '../shared/random/mulberry32.js';
 import { benchSize, reportRatio } from './ratio.js';
 
 const READINGS = benchSize(100_000, 400);

@@ -6,7 +6,7 @@
 import type { AddressInfo } from 'node:net';
 import { formatHex } from 'culori';
 import { addUser, PASSWORD, startHarness } from '../tests/api/harness.js';
-import { mulberry32 } from '../reference-colors/prng.js';
+import { mulberry32 } from '../shared/random/mulberry32.js';
 import { benchSize, reportRatio, SMOKE } from './ratio.js';
 
 const REQUESTS = Math.min(5000, benchSize(1000, 30));

@@ -6,9 +6,8 @@ import { createChipIndex, type SearchStats } from '../shared/colour/chip-index.j
 import { fromCulori, labFromTuple, type Lab } from '../shared/colour/lab.js';
 import { createScan } from '../shared/colour/nearest.js';
 import type { ReferenceSetFile } from '../shared/colour/reference-set.js';
-import { sampleRegion } from '../reference-colors/coverage.js';
-import { mulberry32 } from '../reference-colors/prng.js';
-import { TISSUE_REGIONS } from '../reference-colors/tissue-regions.js';
+import { mulberry32 } from '../shared/random/mulberry32.js';
+import { sampleRegion, TISSUE_REGIONS } from '../shared/colour/tissue-regions.js';
 import { benchSize, reportRatio } from './ratio.js';
 
 const K = 5;

@@ -12,7 +12,7 @@ import { PhotoFiles } from '../server/photos/photo-files.js';
 import { samplePhoto, storePhoto } from '../server/photos/photos.js';
 import { loadReferenceSets } from '../server/reference-sets/load-reference-sets.js';
 import { ReferenceSets } from '../server/reference-sets/reference-sets.js';
-import { mulberry32 } from '../reference-colors/prng.js';
+import { mulberry32 } from '../shared/random/mulberry32.js';
 import { benchSize, reportRatio, SMOKE } from './ratio.js';
 
 const RUNS = benchSize(9, 1);

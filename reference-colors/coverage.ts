@@ -64,6 +64,3 @@ export function coverageOf(index: ChipIndex, region: TissueRegion, samples: read
     max: distances[distances.length - 1],
   };
 }
-
-/** Moved to shared/colour/tissue-regions.ts; re-exported for the match benchmark's import. */
-export { sampleRegion } from '../shared/colour/tissue-regions.js';

@@ -10,8 +10,8 @@ import { createChipIndex } from '../shared/colour/chip-index.js';
 import { labFromTuple } from '../shared/colour/lab.js';
 import { formatReferenceSet } from './build-set.js';
 import { buildReferenceSetV2 } from './build-set-v2.js';
-import { coverageOfSample, percentile, sampleGamut, sampleRegion } from './coverage.js';
-import { TISSUE_REGIONS_V2 } from '../shared/colour/tissue-regions.js';
+import { coverageOfSample, percentile, sampleGamut } from './coverage.js';
+import { sampleRegion, TISSUE_REGIONS_V2 } from '../shared/colour/tissue-regions.js';
 
 const DEFAULT_OUT = fileURLToPath(new URL('./reference-set-v2.json', import.meta.url));
 

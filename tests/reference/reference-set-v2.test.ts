@@ -13,7 +13,8 @@ import { displayHex } from '../../shared/colour/display-hex.js';
 import { labFromTuple } from '../../shared/colour/lab.js';
 import { createScan } from '../../shared/colour/nearest.js';
 import { FIELD_CODE_PATTERN, FINE_CODE_PATTERN, type ReferenceSetFile } from '../../shared/colour/reference-set.js';
-import { coverageOfSample, sampleGamut, sampleRegion } from '../../reference-colors/coverage.js';
+import { coverageOfSample, sampleGamut } from '../../reference-colors/coverage.js';
+import { sampleRegion } from '../../shared/colour/tissue-regions.js';
 import { mulberry32 } from '../../shared/random/mulberry32.js';
 import { TISSUE_REGIONS_V2 } from '../../shared/colour/tissue-regions.js';
 
