@@ -77,7 +77,8 @@ describe('a recorder on a phone matches and browses the reference set', () => {
   test('should open a field chip into its fine chips and show a fine chip’s numbers', async () => {
     await page.getByRole('tab', { name: 'Browse chips' }).or(page.getByRole('link', { name: 'Browse chips' })).first().click();
     await page.waitForURL((u) => u.pathname === '/reference-set/browse');
-    await page.getByRole('group', { name: 'red field chips' }).waitFor();
+    // Field chips by hue sector, each heading with its h° range (names of our own).
+    await page.getByRole('group', { name: 'wine h° 350–30 field chips' }).waitFor();
     await screenshot(page, 'reference-set-browse-phone');
     await page.getByRole('button', { name: /^F-087,/ }).click();
     await page.waitForURL((u) => u.searchParams.get('chip') === 'F-087');
@@ -117,6 +118,13 @@ describe('a recorder on a phone matches and browses the reference set', () => {
     assert.equal(await link.getAttribute('href'), '/api/reference-sets/v1/card.pdf');
     const [download] = await Promise.all([page.waitForEvent('download'), link.click()]);
     assert.equal(download.suggestedFilename(), 'hueledger-field-card-v1.pdf');
+  });
+
+  test('should offer the fine-chip booklet as a PDF download', async () => {
+    const link = page.getByRole('link', { name: 'Download fine-chip booklet (PDF)' });
+    assert.equal(await link.getAttribute('href'), '/api/reference-sets/v1/booklet.pdf');
+    const [download] = await Promise.all([page.waitForEvent('download'), link.click()]);
+    assert.equal(download.suggestedFilename(), 'hueledger-fine-chip-booklet-v1.pdf');
   });
 
   test('should load nothing from another origin', () => {
