@@ -6,7 +6,7 @@ import { AuditEvent } from '../audit/audit-event.entity.js';
 import { User } from '../auth/user.entity.js';
 import { AppError } from '../core/app-error.js';
 import type { ReferenceSets } from '../reference-sets/reference-sets.js';
-import { toReadingDto } from './reading-list.js';
+import { toReadingDto, wrappingSeasons } from './reading-list.js';
 import { Reading } from './reading.entity.js';
 import { nameBestChips } from '../reference-sets/chip-names.js';
 
@@ -77,5 +77,5 @@ export async function getReadingDetail(deps: { ds: DataSource; referenceSets: Re
     const other = await referenceSets.match(lab, DETAIL_MATCHES, set.id);
     otherSets.push({ setId: set.id, current: set.current, matches: other.matches, between: other.between });
   }
-  return { ...toReadingDto(r), matches: match.matches, between: match.between, otherSets, provenance: provenanceOf(r), versions: await chainOf(m, r), history: await historyOf(m, id) };
+  return { ...toReadingDto(r, await wrappingSeasons(m)), matches: match.matches, between: match.between, otherSets, provenance: provenanceOf(r), versions: await chainOf(m, r), history: await historyOf(m, id) };
 }

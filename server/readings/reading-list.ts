@@ -1,10 +1,11 @@
 // Listing readings: every filter, sort and page in SQL (TypeORM QueryBuilder), and the DTO of a
 // row. The exports and (later) the review queue use the same query.
-import type { DataSource, SelectQueryBuilder } from 'typeorm';
+import type { DataSource, EntityManager, SelectQueryBuilder } from 'typeorm';
 import type { ReadingDto, ReadingList, ReadingSort } from '../../shared/api/reading-answers.js';
 import type { ListReadingsQuery } from '../../shared/api/readings.js';
 import { labToLch } from '../../shared/colour/lab.js';
 import { verdictFor } from '../../shared/colour/verdict.js';
+import { seasonLabel } from '../../shared/collection/season-of.js';
 import { Reading } from './reading.entity.js';
 import { nameBestChips } from '../reference-sets/chip-names.js';
 
@@ -66,12 +67,21 @@ export function readingsQuery(ds: DataSource, q: ReadingFilters): SelectQueryBui
 export async function listReadings(ds: DataSource, q: ListReadingsQuery): Promise<ReadingList> {
   const qb = readingsQuery(ds, q);
   // Every join is to-one, so plain OFFSET/LIMIT pages correctly (no DISTINCT sub-query needed).
-  const [rows, total] = await Promise.all([qb.clone().offset((q.page - 1) * q.pageSize).limit(q.pageSize).getMany(), qb.clone().getCount()]);
-  return { items: (await nameBestChips(ds, rows)).map(toReadingDto), total };
+  const [rows, total, wrapping] = await Promise.all([qb.clone().offset((q.page - 1) * q.pageSize).limit(q.pageSize).getMany(), qb.clone().getCount(), wrappingSeasons(ds.manager)]);
+  return { items: (await nameBestChips(ds, rows)).map((r) => toReadingDto(r, wrapping)), total };
 }
 
-/** The API shape of a reading (relations accession, plant, character, site and observer loaded). */
-export function toReadingDto(r: Reading): ReadingDto {
+/** Keys `siteId|season name in lower case` of the seasons that wrap the year end. */
+export type WrappingSeasons = ReadonlySet<string>;
+
+/** Every site's seasons that wrap the year end (end before start): a small table read whole. */
+export async function wrappingSeasons(m: EntityManager): Promise<WrappingSeasons> {
+  const rows: { siteId: number; name: string }[] = await m.query(`SELECT "siteId" AS siteId, name FROM season WHERE "end" < "start"`);
+  return new Set(rows.map((s) => `${s.siteId}|${s.name.toLowerCase()}`));
+}
+
+/** The API shape of a reading (relations accession, plant, character, site and observer loaded); `wrapping` names the seasons labelled across two years. */
+export function toReadingDto(r: Reading, wrapping: WrappingSeasons = new Set()): ReadingDto {
   const lch = labToLch({ l: r.l, a: r.a, b: r.b });
   return {
     id: r.id,
@@ -103,6 +113,7 @@ export function toReadingDto(r: Reading): ReadingDto {
     setId: r.setId,
     season: r.season,
     seasonYear: r.seasonYear,
+    seasonLabel: seasonLabel(r.season, r.seasonYear, r.season !== null && wrapping.has(`${r.siteId}|${r.season.toLowerCase()}`)),
     plantAgeMonths: r.plantAgeMonths,
     light: r.light,
     secondsSinceCut: r.secondsSinceCut,

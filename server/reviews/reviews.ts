@@ -12,6 +12,7 @@ import { User } from '../auth/user.entity.js';
 import { AppError } from '../core/app-error.js';
 import type { Mailer } from '../mail/mailer.js';
 import { READING_ROW_RELATIONS, readingSubject, toReadingDto } from '../readings/reading-view.js';
+import { wrappingSeasons } from '../readings/reading-list.js';
 import { Reading } from '../readings/reading.entity.js';
 import { listReadings } from '../readings/readings.js';
 import { noticeKindOf, noticeMessage, reviewNoticeMail, type ReviewedReading } from './review-mail.js';
@@ -73,7 +74,7 @@ export async function reviewReading(deps: ReviewDeps, actor: Actor, reviewer: Us
   }
   // After the transaction: the derived chip name is set in memory only, never saved.
   await nameBestChips(deps.ds, [reading]);
-  return { review: toReviewDto(review, reviewer.name), reading: toReadingDto(reading), mailed };
+  return { review: toReviewDto(review, reviewer.name), reading: toReadingDto(reading, await wrappingSeasons(deps.ds.manager)), mailed };
 }
 
 /**

@@ -86,6 +86,8 @@ export interface ReadingDto {
   setId: string;
   season: string | null;
   seasonYear: number | null;
+  /** The season as people say it: "Dry 2025", or "Wet 2024–25" for a season that wraps the year end; null without a season. */
+  seasonLabel: string | null;
   plantAgeMonths: number | null;
   light: Light;
   secondsSinceCut: number | null;

@@ -80,3 +80,16 @@ export function seasonOfDate(date: LocalDate, seasons: readonly SeasonRange[]): 
 export function seasonOf(instant: Date, timeZone: string, seasons: readonly SeasonRange[]): SeasonOf {
   return seasonOfDate(localDateOf(instant, timeZone), seasons);
 }
+
+/**
+ * A season as people say it: "Dry 2025" for a season inside one calendar year, "Wet 2024–25" for
+ * one that wraps the year end (it began in 2024 and ends in 2025), so a reading of 15 April 2025
+ * in a November–April season is not read as a 2024 reading. Null without a season.
+ */
+export function seasonLabel(season: string | null, seasonYear: number | null, wraps: boolean): string | null {
+  if (season === null || seasonYear === null) return null;
+  if (!wraps) return `${season} ${seasonYear}`;
+  const next = seasonYear + 1;
+  const tail = Math.floor(next / 100) === Math.floor(seasonYear / 100) ? String(next % 100).padStart(2, '0') : String(next);
+  return `${season} ${seasonYear}–${tail}`;
+}

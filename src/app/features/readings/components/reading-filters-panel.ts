@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, computed, input, output } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, input, output, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCheckboxModule } from '@angular/material/checkbox';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -78,13 +78,16 @@ import { METHOD_WORDS, STATUS_WORDS } from '../data/reading-words';
       </mat-form-field>
       <mat-form-field subscriptSizing="dynamic">
         <mat-label>From</mat-label>
-        <input matInput type="date" [value]="q.from ?? ''" (change)="set({ from: $any($event.target).value || undefined })" />
+        <input #fromBox matInput type="date" [value]="q.from ?? ''" (change)="setRange('from', fromBox)" [attr.aria-invalid]="rangeError() ? true : null" aria-describedby="date-range-error" />
       </mat-form-field>
       <mat-form-field subscriptSizing="dynamic">
         <mat-label>To</mat-label>
-        <input matInput type="date" [value]="q.to ?? ''" (change)="set({ to: $any($event.target).value || undefined })" />
+        <input #toBox matInput type="date" [value]="q.to ?? ''" (change)="setRange('to', toBox)" [attr.aria-invalid]="rangeError() ? true : null" aria-describedby="date-range-error" />
       </mat-form-field>
     </div>
+    @if (rangeError(); as message) {
+      <p class="range-error" id="date-range-error" role="alert"><mat-icon aria-hidden="true">error</mat-icon> {{ message }}</p>
+    }
     <div class="row">
       <mat-checkbox [checked]="q.observerId !== undefined && q.observerId === myId()" (change)="set({ observerId: $event.checked ? (myId() ?? undefined) : undefined })">Only mine</mat-checkbox>
       @if (q.observerId !== undefined && q.observerId !== myId()) {
@@ -106,6 +109,13 @@ import { METHOD_WORDS, STATUS_WORDS } from '../data/reading-words';
       align-items: center;
       gap: 8px 16px;
       margin-top: 8px;
+    }
+    .range-error {
+      display: flex;
+      align-items: center;
+      gap: 6px;
+      margin: 0 0 8px;
+      color: var(--mat-sys-error);
     }
     mat-checkbox {
       min-height: 48px;
@@ -136,8 +146,29 @@ export class ReadingFiltersPanel {
   /** Season names of every site, once each, in the order the sites list them. */
   protected readonly seasonNames = computed(() => [...new Set(this.sites().flatMap((s) => s.seasons.map((season) => season.name)))]);
 
+  /** Why the last date typed was not applied: From after To. */
+  protected readonly rangeError = signal<string | null>(null);
+
   protected set(change: Partial<ReadingListQuery>): void {
     this.changed.emit(change);
+  }
+
+  /**
+   * Applies a From or To date unless it would put From after To; then the date is not applied,
+   * the field goes back to the date in force and the message says why.
+   */
+  protected setRange(end: 'from' | 'to', box: HTMLInputElement): void {
+    const value = box.value || undefined;
+    const q = this.query();
+    const from = end === 'from' ? value : q.from;
+    const to = end === 'to' ? value : q.to;
+    if (from && to && from > to) {
+      this.rangeError.set(`From ${from} is after To ${to}: choose a From on or before To.`);
+      box.value = q[end] ?? '';
+      return;
+    }
+    this.rangeError.set(null);
+    this.set({ [end]: value });
   }
 
   protected setYear(text: string): void {

@@ -18,8 +18,8 @@ import type { ReadingDetail } from '../../../../../shared/api/reading-answers.js
     @let r = reading();
     <div class="head hl-swatch-surround">
       <span class="pair">
-        <span class="swatch" [style.background-color]="r.hex" role="img" [attr.aria-label]="'The reading, ' + r.hex"></span>
-        <span class="code">reading {{ r.hex }}</span>
+        <span class="swatch" [style.background-color]="r.hex" role="img" [attr.aria-label]="'Reading ' + r.id + ', shown as ' + r.hex" [attr.title]="'display colour ' + r.hex"></span>
+        <span class="code">reading {{ r.id }}</span>
       </span>
       <span class="pair">
         <span class="swatch" [style.background-color]="r.bestChipHex" role="img" [attr.aria-label]="'Best chip ' + r.bestChip"></span>
@@ -118,7 +118,7 @@ import type { ReadingDetail } from '../../../../../shared/api/reading-answers.js
 })
 export class ReadingMatch {
   readonly reading = input.required<
-    Pick<ReadingDetail, 'hex' | 'lab' | 'lch' | 'inGamut' | 'bestChip' | 'bestChipName' | 'bestChipHex' | 'deltaE00' | 'verdict' | 'eyeChipCode' | 'eyeDeltaE00' | 'method' | 'matches' | 'between'> &
+    Pick<ReadingDetail, 'id' | 'hex' | 'lab' | 'lch' | 'inGamut' | 'bestChip' | 'bestChipName' | 'bestChipHex' | 'deltaE00' | 'verdict' | 'eyeChipCode' | 'eyeDeltaE00' | 'method' | 'matches' | 'between'> &
       Partial<Pick<ReadingDetail, 'setId' | 'otherSets'>>
   >();
   /** Whether to show the nearest chips and the between bar (the detail does; the saved panel keeps it short). */

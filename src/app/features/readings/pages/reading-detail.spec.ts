@@ -33,6 +33,7 @@ const DETAIL = {
   setId: 'v1',
   season: 'Wet',
   seasonYear: 2026,
+  seasonLabel: 'Wet 2026–27',
   plantAgeMonths: 13.8,
   light: 'open-shade',
   secondsSinceCut: 95,

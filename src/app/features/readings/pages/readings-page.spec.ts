@@ -39,6 +39,7 @@ const ROW: ReadingDto = {
   setId: 'v1',
   season: 'Wet',
   seasonYear: 2026,
+  seasonLabel: 'Wet 2026–27',
   plantAgeMonths: 13.8,
   light: 'overcast',
   secondsSinceCut: null,

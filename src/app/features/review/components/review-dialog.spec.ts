@@ -34,6 +34,7 @@ function detail(id: number): ReadingDetail {
     siteCode: 'RDP',
     season: 'Wet',
     seasonYear: 2026,
+    seasonLabel: 'Wet 2026–27',
     plantAgeMonths: 5,
     light: 'overcast',
     secondsSinceCut: null,
