@@ -6,6 +6,7 @@ import { AuditEvent } from '../audit/audit-event.entity.js';
 import { User } from '../auth/user.entity.js';
 import { AppError } from '../core/app-error.js';
 import type { ReferenceSets } from '../reference-sets/reference-sets.js';
+import { auditSentence } from '../audit/audit-sentence.js';
 import { toReadingDto, wrappingSeasons } from './reading-list.js';
 import { Reading } from './reading.entity.js';
 import { nameBestChips } from '../reference-sets/chip-names.js';
@@ -60,7 +61,10 @@ async function historyOf(m: EntityManager, id: number): Promise<ReadingHistoryEv
   const events = await m.find(AuditEvent, { where: { subject: readingSubject(id) }, order: { at: 'ASC', id: 'ASC' } });
   const actorIds = [...new Set(events.map((e) => e.actorId).filter((x): x is number => x !== null))];
   const names = new Map((actorIds.length ? await m.find(User, { where: { id: In(actorIds) }, select: { id: true, name: true } }) : []).map((u) => [u.id, u.name]));
-  return events.map((e) => ({ id: e.id, at: e.at.toISOString(), actorName: e.actorId === null ? null : (names.get(e.actorId) ?? e.actorEmail), action: e.action, detail: e.detail }));
+  return events.map((e) => {
+    const actorName = e.actorId === null ? null : (names.get(e.actorId) ?? e.actorEmail);
+    return { id: e.id, at: e.at.toISOString(), actorName, action: e.action, detail: e.detail, sentence: auditSentence(actorName, e.action, e.subject, e.detail) };
+  });
 }
 
 /** One reading with its provenance, its chips (matched again against the set it was stored with), versions and history; 404 when there is none. */

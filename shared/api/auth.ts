@@ -98,10 +98,14 @@ export interface AuditEventRow {
   at: string;
   actorId: number | null;
   actorEmail: string | null;
+  /** The actor's name now; null for the system or a signed-out caller. */
+  actorName: string | null;
   action: string;
   subject: string | null;
   detail: Record<string, unknown> | null;
   ip: string | null;
+  /** The event in plain words, e.g. "Juno Pellbright corrected reading 12 from … to …, because …". */
+  sentence: string;
 }
 
 /** Any paginated list. */

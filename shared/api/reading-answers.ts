@@ -136,6 +136,8 @@ export interface ReadingHistoryEvent {
   actorName: string | null;
   action: string;
   detail: Record<string, unknown> | null;
+  /** The event in plain words. */
+  sentence: string;
 }
 
 /** `GET /api/readings/:id`. */

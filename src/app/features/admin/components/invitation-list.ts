@@ -1,14 +1,14 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
-import { DatePipe } from '@angular/common';
 import { MatIconModule } from '@angular/material/icon';
 import { MatListModule } from '@angular/material/list';
 
 import type { InvitationRow } from '../../../../../shared/api/auth.js';
+import { LocalDateTimePipe } from '../../../core/format/local-date-time';
 
 /** Invitations not yet accepted, with expired ones marked in words. */
 @Component({
   selector: 'hl-invitation-list',
-  imports: [DatePipe, MatIconModule, MatListModule],
+  imports: [LocalDateTimePipe, MatIconModule, MatListModule],
   changeDetection: ChangeDetectionStrategy.OnPush,
   template: `
     @if (pending().length === 0) {
@@ -22,9 +22,9 @@ import type { InvitationRow } from '../../../../../shared/api/auth.js';
             <span matListItemLine>{{ invitation.email }}</span>
             <span matListItemLine>
               @if (invitation.expired) {
-                <strong>Expired</strong> {{ invitation.expiresAt | date: 'd MMM y, HH:mm' }} — invite again to send a new link
+                <strong>Expired</strong> {{ invitation.expiresAt | localDateTime }} — invite again to send a new link
               } @else {
-                Waiting, link valid until {{ invitation.expiresAt | date: 'd MMM y, HH:mm' }}
+                Waiting, link valid until {{ invitation.expiresAt | localDateTime }}
               }
               · sent by {{ invitation.invitedBy }}
             </span>

@@ -12,6 +12,14 @@ import type {
   UserRow,
 } from '../../../../../shared/api/auth.js';
 
+/** The audit trail's filters: who (part of a name or e-mail), what (an action family such as "reading"), when (days). */
+export interface AuditFilters {
+  who?: string;
+  action?: string;
+  from?: string;
+  to?: string;
+}
+
 /** The admin's endpoints: people, invitations, the caught-mail outbox and the audit trail. */
 @Injectable({ providedIn: 'root' })
 export class AdminApi {
@@ -39,9 +47,10 @@ export class AdminApi {
     return this.http.get<OutboxMessage[]>('/api/outbox');
   }
 
-  /** One page of the audit trail, newest first; `page` counts from 1. */
-  audit(page: number, pageSize: number): Observable<Page<AuditEventRow>> {
-    const params = new HttpParams().set('page', page).set('pageSize', pageSize);
+  /** One page of the audit trail, newest first; `page` counts from 1; empty filters are left out. */
+  audit(page: number, pageSize: number, filters: AuditFilters = {}): Observable<Page<AuditEventRow>> {
+    let params = new HttpParams().set('page', page).set('pageSize', pageSize);
+    for (const [key, value] of Object.entries(filters)) if (value) params = params.set(key, value);
     return this.http.get<Page<AuditEventRow>>('/api/audit', { params });
   }
 }

@@ -1,19 +1,39 @@
 import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
-import { DatePipe } from '@angular/common';
 import { MatButtonModule } from '@angular/material/button';
+import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
+import { MatInputModule } from '@angular/material/input';
 import { MatPaginatorModule, PageEvent } from '@angular/material/paginator';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
-import { MatTableModule } from '@angular/material/table';
+import { MatSelectModule } from '@angular/material/select';
 
-import type { AuditEventRow } from '../../../../../shared/api/auth.js';
-import { AdminApi } from '../data/admin-api';
+import { LocalDateTimePipe } from '../../../core/format/local-date-time';
+import { AdminApi, type AuditFilters } from '../data/admin-api';
 
-/** The audit trail, newest first, one server page at a time. */
+/** The kinds of event the "What" filter offers: an action family and its plain name. */
+export const AUDIT_KINDS: readonly { value: string; label: string }[] = [
+  { value: 'auth', label: 'Sign-ins and passwords' },
+  { value: 'user', label: 'People' },
+  { value: 'invitation', label: 'Invitations' },
+  { value: 'reading', label: 'Readings and reviews' },
+  { value: 'readings', label: 'Reading imports' },
+  { value: 'calibration', label: 'Calibration' },
+  { value: 'accession', label: 'Accessions' },
+  { value: 'plant', label: 'Plants' },
+  { value: 'site', label: 'Sites and seasons' },
+  { value: 'character', label: 'Characters' },
+  { value: 'descriptor', label: 'Descriptors' },
+  { value: 'observation', label: 'Observations' },
+  { value: 'photo', label: 'Photos' },
+  { value: 'notification', label: 'Notices read' },
+  { value: 'api-token', label: 'API tokens' },
+];
+
+/** The audit trail, newest first, one server page at a time, each event as a sentence; filtered by who, what and when. */
 @Component({
   selector: 'hl-audit-page',
-  imports: [DatePipe, MatButtonModule, MatIconModule, MatPaginatorModule, MatProgressBarModule, MatTableModule],
+  imports: [LocalDateTimePipe, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatPaginatorModule, MatProgressBarModule, MatSelectModule],
   templateUrl: './audit-page.html',
   styleUrl: './audit-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -21,24 +41,43 @@ import { AdminApi } from '../data/admin-api';
 export class AuditPage {
   private readonly api = inject(AdminApi);
 
-  protected readonly columns = ['at', 'actor', 'action', 'subject', 'detail', 'ip'];
+  protected readonly kinds = AUDIT_KINDS;
   /** The paginator's page, counted from 0 as MatPaginator does. */
   protected readonly pageIndex = signal(0);
   protected readonly pageSize = signal(25);
+  protected readonly filters = signal<AuditFilters>({});
+  /** Why the last From/To was not applied. */
+  protected readonly rangeError = signal<string | null>(null);
   protected readonly events = rxResource({
-    params: () => ({ page: this.pageIndex() + 1, pageSize: this.pageSize() }),
-    stream: ({ params }) => this.api.audit(params.page, params.pageSize),
+    params: () => ({ page: this.pageIndex() + 1, pageSize: this.pageSize(), filters: this.filters() }),
+    stream: ({ params }) => this.api.audit(params.page, params.pageSize, params.filters),
   });
   protected readonly rows = computed(() => (this.events.hasValue() ? this.events.value().items : []));
   protected readonly total = computed(() => (this.events.hasValue() ? this.events.value().total : 0));
+  protected readonly filtered = computed(() => Object.values(this.filters()).some(Boolean));
 
   protected turnPage(event: PageEvent): void {
     this.pageIndex.set(event.pageIndex);
     this.pageSize.set(event.pageSize);
   }
 
-  protected describeDetail(event: AuditEventRow): string {
-    return describeAuditDetail(event.detail);
+  /** Applies one filter and goes back to the first page; From after To is refused with a message. */
+  protected filter(change: AuditFilters, box?: HTMLInputElement): void {
+    const next = { ...this.filters(), ...change };
+    if (next.from && next.to && next.from > next.to) {
+      this.rangeError.set(`From ${next.from} is after To ${next.to}: choose a From on or before To.`);
+      if (box) box.value = (change.from !== undefined ? this.filters().from : this.filters().to) ?? '';
+      return;
+    }
+    this.rangeError.set(null);
+    this.filters.set(next);
+    this.pageIndex.set(0);
+  }
+
+  protected clearFilters(): void {
+    this.rangeError.set(null);
+    this.filters.set({});
+    this.pageIndex.set(0);
   }
 }
 

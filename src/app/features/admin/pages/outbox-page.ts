@@ -1,6 +1,5 @@
 import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
-import { DatePipe } from '@angular/common';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatListModule } from '@angular/material/list';
@@ -9,11 +8,12 @@ import { MatProgressSpinnerModule } from '@angular/material/progress-spinner';
 import type { OutboxMessage } from '../../../../../shared/api/auth.js';
 import { MailText } from '../components/mail-text';
 import { AdminApi } from '../data/admin-api';
+import { LocalDateTimePipe } from '../../../core/format/local-date-time';
 
 /** Mails the built-in test mail server caught: a list, and the chosen one's text with working links. */
 @Component({
   selector: 'hl-outbox-page',
-  imports: [DatePipe, MailText, MatButtonModule, MatIconModule, MatListModule, MatProgressSpinnerModule],
+  imports: [LocalDateTimePipe, MailText, MatButtonModule, MatIconModule, MatListModule, MatProgressSpinnerModule],
   templateUrl: './outbox-page.html',
   styleUrl: './outbox-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,6 +1,5 @@
 import { ChangeDetectionStrategy, Component, ErrorHandler, effect, inject, viewChild } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
-import { DatePipe } from '@angular/common';
 import { MatButtonModule } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -21,12 +20,12 @@ import { ConfirmDialog, ConfirmDialogData } from '../../../shared/confirm-dialog
 import { InvitationList } from '../components/invitation-list';
 import { InviteDialog } from '../components/invite-dialog';
 import { AdminApi } from '../data/admin-api';
+import { LocalDateTimePipe } from '../../../core/format/local-date-time';
 
 /** People with access: roles, active or not, last sign-in; invitations waiting below. */
 @Component({
   selector: 'hl-users-page',
-  imports: [
-    DatePipe,
+  imports: [LocalDateTimePipe, 
     InvitationList,
     MatButtonModule,
     MatFormFieldModule,

@@ -9,11 +9,12 @@ import { deltaEText, formatNumber } from '../../reference-set/data/chip-words';
 import { biasNumbers, biasWords } from '../data/bias-words';
 import { kappaWords, percentText } from '../data/session-words';
 import { BiasChart } from './bias-chart';
+import { LocalDateTimePipe } from '../../../core/format/local-date-time';
 
 /** A session's results for the trainer: observers, group κ, Cohen's κ by pair, agreement by specimen, and the bias chart. */
 @Component({
   selector: 'hl-results-view',
-  imports: [MatIconModule, BiasChart, VerdictMark],
+  imports: [LocalDateTimePipe, MatIconModule, BiasChart, VerdictMark],
   changeDetection: ChangeDetectionStrategy.OnPush,
   templateUrl: './results-view.html',
   styleUrl: './results-view.scss',

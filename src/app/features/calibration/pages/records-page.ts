@@ -12,11 +12,12 @@ import { ScreeningForm } from '../components/screening-form';
 import { CalibrationApi, certificatePdfUrl } from '../data/calibration-api';
 import { observerRecords } from '../data/observer-records';
 import { runsSessions } from '../data/session-words';
+import { LocalDateTimePipe } from '../../../core/format/local-date-time';
 
 /** Certifications and colour-vision screenings: my own, and (trainers, admins) everyone's, unscreened people shown as such. */
 @Component({
   selector: 'hl-records-page',
-  imports: [MatIconModule, MatProgressSpinnerModule, RouterLink, CalibrationTabs, ScreeningForm],
+  imports: [LocalDateTimePipe, MatIconModule, MatProgressSpinnerModule, RouterLink, CalibrationTabs, ScreeningForm],
   changeDetection: ChangeDetectionStrategy.OnPush,
   templateUrl: './records-page.html',
   styleUrl: './records-page.scss',

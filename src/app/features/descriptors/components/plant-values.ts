@@ -1,6 +1,5 @@
 import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
-import { DatePipe } from '@angular/common';
 import { MatIconModule } from '@angular/material/icon';
 
 import type { DescriptorValue, PlantDescriptors } from '../../../../../shared/api/descriptor-answers.js';
@@ -9,6 +8,7 @@ import { UnitPreference } from '../../../core/units/unit-preference';
 import { LoadState } from '../../../shared/load-state';
 import { DescriptorsApi } from '../data/descriptors-api';
 import { shownValue, valueTable } from '../data/value-table';
+import { LocalDateTimePipe } from '../../../core/format/local-date-time';
 
 /**
  * The latest descriptor values of an accession's plants, in the person's units; derived ratios
@@ -16,7 +16,7 @@ import { shownValue, valueTable } from '../data/value-table';
  */
 @Component({
   selector: 'hl-plant-values',
-  imports: [DatePipe, LoadState, MatIconModule],
+  imports: [LocalDateTimePipe, LoadState, MatIconModule],
   changeDetection: ChangeDetectionStrategy.OnPush,
   template: `
     <hl-load-state [resource]="values" what="descriptor values">
@@ -62,7 +62,7 @@ import { shownValue, valueTable } from '../data/value-table';
                 @if (value.derived) {
                   <span class="hl-muted derived"><mat-icon aria-hidden="true">calculate</mat-icon> computed</span>
                 } @else {
-                  <span class="hl-muted when">{{ value.observedAt | date: 'd MMM y' }}</span>
+                  <span class="hl-muted when">{{ value.observedAt | localDateTime: 'date' }}</span>
                 }
               </dd>
             }

@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
@@ -8,6 +7,7 @@ import type { NotificationDto, NotificationKind } from '../../../../../shared/ap
 import { calibrationSessionPath } from '../../../../../shared/api/calibration-answers.js';
 import { readingUrl } from '../../../../../shared/api/reading-answers.js';
 import { NotificationFeed } from '../../../core/notifications/notification-feed';
+import { LocalDateTimePipe } from '../../../core/format/local-date-time';
 
 /** Each kind of notice as a heading and an icon. */
 const KIND_WORDS: Record<NotificationKind, { title: string; icon: string }> = {
@@ -20,7 +20,7 @@ const KIND_WORDS: Record<NotificationKind, { title: string; icon: string }> = {
 /** The signed-in person's notices, newest first; opening one marks it read and goes to the reading, where it can be corrected. */
 @Component({
   selector: 'hl-notifications-page',
-  imports: [DatePipe, MatButtonModule, MatIconModule, RouterLink],
+  imports: [LocalDateTimePipe, MatButtonModule, MatIconModule, RouterLink],
   changeDetection: ChangeDetectionStrategy.OnPush,
   template: `
     <section class="hl-page hl-narrow wide">
@@ -46,7 +46,7 @@ const KIND_WORDS: Record<NotificationKind, { title: string; icon: string }> = {
                   }
                 </p>
                 <p class="message">{{ n.message }}</p>
-                <p class="hl-muted when"><time [attr.datetime]="n.createdAt">{{ n.createdAt | date: 'd MMM y, HH:mm' }}</time></p>
+                <p class="hl-muted when"><time [attr.datetime]="n.createdAt">{{ n.createdAt | localDateTime }}</time></p>
                 <div class="actions">
                   <a mat-flat-button [routerLink]="url(n)" (click)="open(n)"><mat-icon aria-hidden="true">open_in_new</mat-icon> Open {{ subject(n) }}</a>
                   @if (!n.readAt) {

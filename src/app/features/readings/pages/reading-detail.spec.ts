@@ -64,7 +64,7 @@ const DETAIL = {
     { id: 39, observedAt: '2026-03-14T09:20:00.000Z', createdAt: '2026-03-14T09:21:00.000Z', reason: null, current: false },
     { id: 40, observedAt: '2026-03-14T09:30:00.000Z', createdAt: '2026-03-14T09:31:00.000Z', reason: 'wrong plant', current: true },
   ],
-  history: [{ id: 7, at: '2026-03-14T09:31:00.000Z', actorName: 'Juno Pellbright', action: 'reading.supersede', detail: { from: 39 } }],
+  history: [{ id: 7, at: '2026-03-14T09:31:00.000Z', actorName: 'Juno Pellbright', action: 'reading.superseded', detail: { from: 39 }, sentence: 'Juno Pellbright corrected reading 39 as reading 40, because "wrong plant".' }],
 } as unknown as ReadingDetail;
 
 describe('ReadingDetailPage', () => {
@@ -87,7 +87,7 @@ describe('ReadingDetailPage', () => {
     const el = await open({ id: 4, role: 'recorder' });
     expect(el.querySelector('hl-photo-crop svg image')?.getAttribute('href')).toBe('/api/photos/12/image');
     const text = el.textContent!;
-    for (const words of ['F-040.012', 'indistinguishable', 'No correction', '120,000 used', 'Open shade', '95 s', 'More than a minute after the cut', 'Wet 2026', '13 months', 'Reason: wrong plant', 'reading.supersede']) {
+    for (const words of ['F-040.012', 'indistinguishable', 'No correction', '120,000 used', 'Open shade', '95 s', 'More than a minute after the cut', 'Wet 2026–27', '13 months', 'Reason: wrong plant', 'Juno Pellbright corrected reading 39 as reading 40']) {
       expect(text).toContain(words);
     }
     expect(el.querySelector('.versions a')?.getAttribute('href')).toBe('/readings/39');

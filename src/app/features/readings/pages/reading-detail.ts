@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, input, numberAttribute } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
@@ -13,7 +12,8 @@ import { ReadingMatch } from '../components/reading-match';
 import { CUT_SECONDS_WARN, type ReadingDetail } from '../../../../../shared/api/reading-answers.js';
 import { LIGHT_WORDS, METHOD_WORDS, STATUS_WORDS, wordsFor } from '../data/reading-words';
 import { ReadingsApi } from '../data/readings-api';
-import { ageWords, correctionText, eventDetailText } from '../data/provenance-words';
+import { ageWords, correctionText } from '../data/provenance-words';
+import { LocalDateTimePipe } from '../../../core/format/local-date-time';
 
 /** Roles that may correct anybody's reading; others only their own (issue 5, item 2). */
 const CORRECTS_ANY = 'admin';
@@ -25,7 +25,7 @@ const CORRECTS_ANY = 'admin';
  */
 @Component({
   selector: 'hl-reading-detail',
-  imports: [DatePipe, MatButtonModule, MatIconModule, MatProgressSpinnerModule, PhotoCrop, ReadingMatch, RouterLink],
+  imports: [LocalDateTimePipe, MatButtonModule, MatIconModule, MatProgressSpinnerModule, PhotoCrop, ReadingMatch, RouterLink],
   templateUrl: './reading-detail.html',
   styleUrl: './reading-detail.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -42,7 +42,6 @@ export class ReadingDetailPage {
   protected readonly lightWords = LIGHT_WORDS;
   protected readonly statusWords = STATUS_WORDS;
   protected readonly wordsFor = wordsFor;
-  protected readonly auditText = eventDetailText;
   protected readonly ageWords = ageWords;
 
   /** Whether the signed-in person may correct it: its observer or an admin, and only the newest version. */

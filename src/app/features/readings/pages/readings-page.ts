@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, DestroyRef, ErrorHandler, computed, inject, signal } from '@angular/core';
 import { rxResource, toSignal } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
@@ -22,6 +21,7 @@ import { READING_SORTS, type ReadingListQuery, type ReadingSort } from '../../..
 import { DEFAULT_SORT, PAGE_SIZES, activeFilterCount, filtersFromParams, paramsFromFilters } from '../data/reading-filters';
 import { LIGHT_WORDS, METHOD_WORDS, STATUS_WORDS, wordsFor } from '../data/reading-words';
 import { ReadingsApi, type ExportFormat } from '../data/readings-api';
+import { LocalDateTimePipe } from '../../../core/format/local-date-time';
 
 /** An export under way: which format and how far. */
 interface ExportRun {
@@ -36,7 +36,7 @@ interface ExportRun {
  */
 @Component({
   selector: 'hl-readings-page',
-  imports: [DatePipe, MatButtonModule, MatIconModule, MatPaginatorModule, MatProgressBarModule, MatSortModule, MatTableModule, ReadingFiltersPanel, RouterLink, VerdictMark],
+  imports: [LocalDateTimePipe, MatButtonModule, MatIconModule, MatPaginatorModule, MatProgressBarModule, MatSortModule, MatTableModule, ReadingFiltersPanel, RouterLink, VerdictMark],
   templateUrl: './readings-page.html',
   styleUrl: './readings-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

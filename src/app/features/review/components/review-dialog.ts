@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, ElementRef, computed, inject, signal, viewChild } from '@angular/core';
 import { rxResource, takeUntilDestroyed } from '@angular/core/rxjs-interop';
 import { FormControl, ReactiveFormsModule, Validators } from '@angular/forms';
@@ -19,6 +18,7 @@ import { CUT_SECONDS_WARN, type ReadingDetail } from '../../../../../shared/api/
 import { REVIEW_COMMENT_MAX, REVIEW_DECISION_LABELS, type ReviewAnswer, type ReviewDecision, type ReviewQueueQuery } from '../../../../../shared/api/review-answers.js';
 import { DECISION_KEYS, decisionForKey } from '../data/review-keys';
 import { ReviewsApi } from '../data/reviews-api';
+import { LocalDateTimePipe } from '../../../core/format/local-date-time';
 
 /** What the queue page opens the dialog with. */
 export interface ReviewDialogData {
@@ -45,7 +45,7 @@ const COMMENT_LABELS: Record<Exclude<ReviewDecision, 'approve'>, { label: string
  */
 @Component({
   selector: 'hl-review-dialog',
-  imports: [DatePipe, MatButtonModule, MatDialogModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressBarModule, PhotoCrop, ReactiveFormsModule, ReadingMatch, RouterLink],
+  imports: [LocalDateTimePipe, MatButtonModule, MatDialogModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressBarModule, PhotoCrop, ReactiveFormsModule, ReadingMatch, RouterLink],
   templateUrl: './review-dialog.html',
   styleUrl: './review-dialog.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

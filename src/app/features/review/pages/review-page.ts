@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { rxResource, toSignal } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
@@ -19,6 +18,7 @@ import { QueueFilters } from '../components/queue-filters';
 import { ReviewDialog, type ReviewDialogData } from '../components/review-dialog';
 import { QUEUE_DEFAULT_STATUS, QUEUE_PAGE_SIZES, paramsFromQueue, queueFromParams } from '../data/review-filters';
 import { ReviewsApi } from '../data/reviews-api';
+import { LocalDateTimePipe } from '../../../core/format/local-date-time';
 
 /**
  * Review: the queue of readings to review (submitted unless another status is picked), oldest
@@ -27,7 +27,7 @@ import { ReviewsApi } from '../data/reviews-api';
  */
 @Component({
   selector: 'hl-review-page',
-  imports: [DatePipe, MatButtonModule, MatIconModule, MatPaginatorModule, MatProgressBarModule, MatTableModule, QueueFilters, VerdictMark],
+  imports: [LocalDateTimePipe, MatButtonModule, MatIconModule, MatPaginatorModule, MatProgressBarModule, MatTableModule, QueueFilters, VerdictMark],
   templateUrl: './review-page.html',
   styleUrl: './review-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

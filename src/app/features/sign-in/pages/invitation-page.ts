@@ -1,7 +1,6 @@
 import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
 import { NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
-import { DatePipe } from '@angular/common';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressSpinnerModule } from '@angular/material/progress-spinner';
@@ -16,12 +15,12 @@ import { ROLE_DESCRIPTIONS } from '../../../core/auth/role-descriptions';
 import { ApiError } from '../../../core/http/api-error';
 import { applyFieldErrors } from '../../../core/http/field-errors';
 import { PublicFrame } from '../components/public-frame';
+import { LocalDateTimePipe } from '../../../core/format/local-date-time';
 
 /** Accept an invitation: see who it is for, choose a password, and be signed in. */
 @Component({
   selector: 'hl-invitation-page',
-  imports: [
-    DatePipe,
+  imports: [LocalDateTimePipe, 
     MatButtonModule,
     MatIconModule,
     MatProgressSpinnerModule,

@@ -1,0 +1,77 @@
+// Records in plain words (issue 17): wrap-year seasons named across both years, the reading
+// history and the audit trail as sentences, the audit trail's filters (who, what, when) and paging,
+// and From after To refused naming the field.
+import { after, before, describe, test } from 'node:test';
+import assert from 'node:assert/strict';
+import type { AuditEventRow, Page } from '../../shared/api/auth.js';
+import type { ReadingDetail, ReadingList } from '../../shared/api/reading-answers.js';
+import { seasonLabel } from '../../shared/collection/season-of.js';
+import { assertInvalidFields, assertProblem } from './assert-problem.js';
+import { addUser, Client, PASSWORD, signedInAs, startHarness, type Harness } from './harness.js';
+import { instrumentBody, readingWorld, type ReadingWorld } from './reading-fixtures.js';
+
+describe('records in plain words', () => {
+  let h: Harness;
+  let admin: Client;
+  let recorder: Client;
+  let world: ReadingWorld;
+  let readingId: number;
+  let correctionId: number;
+
+  before(async () => {
+    h = await startHarness();
+    admin = await signedInAs(h, 'admin');
+    const juno = await addUser(h.ds, 'recorder', 'juno@test.example');
+    await h.ds.query('UPDATE "user" SET name = ? WHERE id = ?', ['Juno Testbright', juno.id]);
+    recorder = await new Client(h.app).signIn('juno@test.example', PASSWORD);
+    world = await readingWorld(admin);
+    // 15 April 2025 in Fiji falls in the Wet season that began on 1 November 2024.
+    readingId = (await recorder.post('/api/readings', instrumentBody(world, { observedAt: '2025-04-15T10:00:00+12:00', lab: [32.64865165315684, 18.2, -7.4] })).expect(201)).body.id;
+    correctionId = (await recorder.post(`/api/readings/${readingId}/supersede`, { ...instrumentBody(world, { observedAt: '2025-04-15T10:00:00+12:00', lab: [33.1, 17.9, -7.0] }), reason: 'read the wrong third' }).expect(201)).body.id;
+  });
+  after(() => h.close());
+
+  test('should name a season that wraps the year end by both years: a reading of 15 April 2025 in a November–April season is "Wet 2024–25"', async () => {
+    const detail = (await recorder.get(`/api/readings/${readingId}`).expect(200)).body as ReadingDetail;
+    assert.deepEqual([detail.season, detail.seasonYear, detail.seasonLabel], ['Wet', 2024, 'Wet 2024–25']);
+    const list = (await recorder.get('/api/readings?includeSuperseded=true').expect(200)).body as ReadingList;
+    assert.equal(list.items.find((r) => r.id === readingId)?.seasonLabel, 'Wet 2024–25');
+    // A season inside one calendar year keeps one year; a wrap across a century writes both years whole.
+    assert.equal(seasonLabel('Dry', 2025, false), 'Dry 2025');
+    assert.equal(seasonLabel('Wet', 1999, true), 'Wet 1999–2000');
+    assert.equal(seasonLabel(null, null, true), null);
+  });
+
+  test("should tell a reading's history in sentences, the correction with its colours and reason", async () => {
+    const detail = (await recorder.get(`/api/readings/${readingId}`).expect(200)).body as ReadingDetail;
+    const sentences = detail.history.map((e) => e.sentence);
+    assert.match(sentences[0]!, /^Juno Testbright recorded reading \d+ by instrument: L\* 32\.65, a\* 18\.20, b\* −7\.40, nearest chip F-\d{3}\.\d{3} at ΔE00 \d\.\d{2}\.$/);
+    assert.match(sentences[1]!, new RegExp(`^Juno Testbright corrected reading ${readingId} from L\\* 32\\.65, a\\* 18\\.20, b\\* −7\\.40 \\(F-[0-9.]+\\) to L\\* 33\\.10, a\\* 17\\.90, b\\* −7\\.00 \\(F-[0-9.]+\\) as reading ${correctionId}, because "read the wrong third"\\.$`));
+    assert.ok(sentences.every((s) => !s.includes('{') && !s.includes('accessionId')), 'no raw JSON');
+  });
+
+  test('should filter the audit trail by who, what and when, page it, and write each event as a sentence', async () => {
+    const all = (await admin.get('/api/audit?pageSize=200').expect(200)).body as Page<AuditEventRow>;
+    assert.ok(all.items.every((e) => typeof e.sentence === 'string' && e.sentence.endsWith('.')));
+    const byJuno = (await admin.get('/api/audit?who=testbright&pageSize=200').expect(200)).body as Page<AuditEventRow>;
+    assert.ok(byJuno.total >= 3, 'sign-in, reading, correction');
+    assert.ok(byJuno.items.every((e) => e.actorName === 'Juno Testbright'));
+    const readings = (await admin.get('/api/audit?who=juno&action=reading').expect(200)).body as Page<AuditEventRow>;
+    assert.deepEqual(readings.items.map((e) => e.action).sort(), ['reading.created', 'reading.created', 'reading.superseded']);
+    const today = new Date().toISOString().slice(0, 10);
+    const todays = (await admin.get(`/api/audit?from=${today}&to=${today}&pageSize=200`).expect(200)).body as Page<AuditEventRow>;
+    assert.equal(todays.total, all.total, 'everything happened today');
+    const none = (await admin.get('/api/audit?from=2001-01-01&to=2001-12-31').expect(200)).body as Page<AuditEventRow>;
+    assert.equal(none.total, 0);
+    const page2 = (await admin.get('/api/audit?pageSize=2&page=2').expect(200)).body as Page<AuditEventRow>;
+    assert.deepEqual(page2.items.map((e) => e.id), all.items.slice(2, 4).map((e) => e.id));
+    const signIn = all.items.find((e) => e.action === 'auth.sign-in' && e.actorName === 'Juno Testbright');
+    assert.equal(signIn?.sentence, 'Juno Testbright signed in.');
+  });
+
+  test('should refuse From after To with a 400 naming "to", and keep the audit trail from non-admins', async () => {
+    assertInvalidFields(await admin.get('/api/audit?from=2026-05-02&to=2026-05-01'), 'to');
+    assertInvalidFields(await recorder.get('/api/readings?from=2026-05-02&to=2026-05-01'), 'to');
+    assertProblem(await recorder.get('/api/audit'), 403);
+  });
+});
