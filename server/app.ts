@@ -31,6 +31,7 @@ import { notificationRoutes, reviewQueueRoutes, reviewRoutes } from './reviews/r
 import { referenceSetRoutes } from './reference-sets/reference-sets.routes.js';
 import { ReferenceSets } from './reference-sets/reference-sets.js';
 import { userRoutes } from './users/users.routes.js';
+import { preferenceRoutes } from './users/preferences.routes.js';
 import { APP_VERSION } from './version.js';
 
 /** What createApp needs; main.ts and the tests both build one. */
@@ -95,6 +96,7 @@ export function createApp(options: AppOptions): Express {
   api.use('/auth', authRoutes(ctx, passport));
   api.use('/invitations', invitationRoutes(ctx));
   api.use('/users', userRoutes(ctx));
+  api.use('/account', preferenceRoutes(ctx));
   api.use('/api-tokens', apiTokenRoutes(ctx));
   api.use('/outbox', outboxRoutes(ctx));
   api.use('/audit', auditRoutes(ctx));

@@ -10,7 +10,7 @@ function messageFor(res: Response, field: string): string {
   assertInvalidFields(res, field);
   return (res.body as { errors: { field: string; message: string }[] }).errors.find((e) => e.field === field)!.message;
 }
-import { rowCounts, signedInAs, startHarness, type Client, type Harness } from './harness.js';
+import { addUser, Client, PASSWORD, rowCounts, signedInAs, startHarness, type Harness } from './harness.js';
 import { readingWorld, type ReadingWorld } from './reading-fixtures.js';
 
 describe('descriptor values', () => {
@@ -58,5 +58,27 @@ describe('descriptor values', () => {
     assertInvalidFields(await recorder.post('/api/observations/batch', { observations: [] }), 'observations');
     assertProblem(await reviewer.post('/api/observations/batch', { observations: [value('plant.height', 120, 'cm')] }), 403);
     assert.deepEqual(await rowCounts(h.ds), before);
+  });
+});
+
+describe('unit preference on the server', () => {
+  let h: Harness;
+
+  before(async () => {
+    h = await startHarness();
+  });
+  after(() => h.close());
+
+  test('should keep each person’s units on the server, for every device they sign in on', async () => {
+    await addUser(h.ds, 'recorder', 'two-phones@test.example');
+    const recorder = await new Client(h.app).signIn('two-phones@test.example', PASSWORD);
+    const reviewer = await signedInAs(h, 'reviewer');
+    assert.deepEqual((await recorder.get('/api/account/preferences').expect(200)).body, { unitSystem: 'metric' });
+    await recorder.put('/api/account/preferences', { unitSystem: 'imperial' }).expect(200);
+    // Another sign-in (another phone) of the same person sees it; another person does not.
+    const again = await new Client(h.app).signIn('two-phones@test.example', PASSWORD);
+    assert.deepEqual((await again.get('/api/account/preferences').expect(200)).body, { unitSystem: 'imperial' });
+    assert.deepEqual((await reviewer.get('/api/account/preferences').expect(200)).body, { unitSystem: 'metric' });
+    assertInvalidFields(await recorder.put('/api/account/preferences', { unitSystem: 'furlongs' }), 'unitSystem');
   });
 });

@@ -126,6 +126,8 @@ const ROUTES: readonly RouteCase[] = [
   { method: 'POST', path: '/api/observations', access: OBSERVERS, ok: 201, body: (f) => ({ accessionId: f.accessionId, plantId: f.plantId, descriptorId: f.descriptorId, value: 40, unit: 'in' }) },
   { method: 'POST', path: '/api/observations/batch', access: OBSERVERS, ok: 201, body: (f) => ({ observations: [{ accessionId: f.accessionId, plantId: f.plantId, descriptorId: f.descriptorId, value: 41, unit: 'in' }] }) },
   { method: 'POST', path: '/api/observations/:id/supersede', access: OBSERVERS, ok: 201, url: (f, role) => `/api/observations/${f.observationBy(role)}/supersede`, body: () => ({ value: 101.6, unit: 'cm' }) },
+  { method: 'GET', path: '/api/account/preferences', access: EVERYONE, ok: 200 },
+  { method: 'PUT', path: '/api/account/preferences', access: EVERYONE, ok: 200, body: (f) => ({ unitSystem: f.next() % 2 ? 'imperial' : 'metric' }) },
   { method: 'GET', path: '/api/plants/labels.pdf', access: EVERYONE, ok: 200, url: (f) => `/api/plants/labels.pdf?accessionId=${f.accessionId}` },
   { method: 'GET', path: '/api/plants/:id/sheet', access: EVERYONE, ok: 200, url: (f) => `/api/plants/${f.plantId}/sheet` },
   { method: 'POST', path: '/api/plants/:id/skips', access: OBSERVERS, ok: 201, url: (f) => `/api/plants/${f.plantId}/skips`, body: (f) => ({ characterId: f.characterId, reason: `Matrix skip ${f.next()}` }) },

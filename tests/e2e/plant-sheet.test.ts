@@ -5,6 +5,8 @@
 import assert from 'node:assert/strict';
 import { before, describe, test } from 'node:test';
 import type { Locator, Page } from 'playwright-core';
+import QRCode from 'qrcode';
+import sharp from 'sharp';
 import { screenshot, signIn, useApp } from './browser.js';
 import { signInOverHttp } from './http-session.js';
 
@@ -110,5 +112,20 @@ describe('the plant sheet on a phone', () => {
     assert.equal(done.progress.descriptors.done, done.progress.descriptors.total);
     await page.getByText(/Every row of this plant is done or skipped/).waitFor();
     await screenshot(page, 'plant-sheet-complete');
+  });
+
+  test('should open a plant’s sheet from a photo of its label on the Record page', async () => {
+    // The label's QR as printed (the plant sheet's address), photographed on a grainy background.
+    const qr = await QRCode.toBuffer(`${app.url}/record/plant/${plantId}`, { errorCorrectionLevel: 'M', margin: 4, width: 300 });
+    const photo = await sharp({ create: { width: 1000, height: 750, channels: 3, background: { r: 96, g: 104, b: 60 } } })
+      .composite([{ input: await sharp(qr).rotate(5, { background: '#ffffff' }).flatten({ background: '#ffffff' }).png().toBuffer(), left: 340, top: 200 }])
+      .jpeg({ quality: 80 })
+      .toBuffer();
+    await page.goto(`${app.url}/record`);
+    await page.getByRole('button', { name: 'Scan a label' }).waitFor();
+    await screenshot(page, 'record-scan-a-label');
+    await page.getByLabel('Photo of a plant label').setInputFiles({ name: 'label.jpg', mimeType: 'image/jpeg', buffer: photo });
+    await page.waitForURL(new RegExp(`/record/plant/${plantId}$`));
+    await page.getByText('HL-E2E-SHEET plant').waitFor();
   });
 });

@@ -1,3 +1,5 @@
+import { provideHttpClient } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
 
 import { UNIT_PREFERENCE_KEY, UnitPreference } from './unit-preference';
@@ -25,5 +27,23 @@ describe('UnitPreference', () => {
     expect(localStorage.getItem(UNIT_PREFERENCE_KEY)).toBe('imperial');
     TestBed.resetTestingModule();
     expect(TestBed.inject(UnitPreference).system()).toBe('imperial');
+  });
+
+  it('should keep a choice on the server and take the person’s units from it on another device', () => {
+    TestBed.configureTestingModule({ providers: [provideHttpClient(), provideHttpClientTesting()] });
+    const units = TestBed.inject(UnitPreference);
+    const http = TestBed.inject(HttpTestingController);
+    units.chooseAndKeep('imperial');
+    const put = http.expectOne('/api/account/preferences');
+    expect(put.request.method).toBe('PUT');
+    expect(put.request.body).toEqual({ unitSystem: 'imperial' });
+    put.flush({ unitSystem: 'imperial' });
+    // Another phone: its browser says metric, the server says imperial.
+    localStorage.setItem(UNIT_PREFERENCE_KEY, 'metric');
+    units.choose('metric');
+    units.loadFromServer();
+    http.expectOne({ method: 'GET', url: '/api/account/preferences' }).flush({ unitSystem: 'imperial' });
+    expect(units.system()).toBe('imperial');
+    http.verify();
   });
 });

@@ -48,8 +48,12 @@ export class AccountPage {
   protected readonly busy = signal(false);
   protected readonly problem = signal<string | null>(null);
 
+  constructor() {
+    this.unitPreference.loadFromServer();
+  }
+
   protected chooseUnits(system: UnitSystem): void {
-    this.unitPreference.choose(system);
+    this.unitPreference.chooseAndKeep(system);
   }
 
   protected changePassword(): void {

@@ -84,6 +84,7 @@ export class DescriptorEntryPage {
   protected readonly savedCount = signal(0);
 
   constructor() {
+    this.units.loadFromServer();
     // The row tapped on the plant sheet comes into view once the catalogue is drawn.
     afterRenderEffect(() => {
       const id = this.focusId();
@@ -97,7 +98,7 @@ export class DescriptorEntryPage {
   }
 
   protected chooseSystem(system: UnitSystem): void {
-    this.units.choose(system);
+    this.units.chooseAndKeep(system);
     // Rows follow the page's units; each row's own toggle can still differ afterwards.
     this.edited.update((rows) => {
       const next: Record<number, RowEntry> = {};

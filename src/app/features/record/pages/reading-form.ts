@@ -27,6 +27,7 @@ import { CharacterPicker } from '../components/character-picker';
 import { ChipPicker } from '../components/chip-picker';
 import { CutTimer } from '../components/cut-timer';
 import { LabFields } from '../components/lab-fields';
+import { LabelScanner } from '../components/label-scanner';
 import { PhotoSummary } from '../components/photo-summary';
 import { SwatchPicker } from '../components/swatch-picker';
 import { photoSourceFromParams, photoSourceParams } from '../data/photo-source';
@@ -71,6 +72,7 @@ const LEAF_CHOICES = ['2nd open leaf', '3rd open leaf', '4th open leaf'] as cons
     ChipPicker,
     CutTimer,
     LabFields,
+    LabelScanner,
     MatButtonModule,
     MatFormFieldModule,
     MatIconModule,
