@@ -1,8 +1,7 @@
-import { ChangeDetectionStrategy, Component, computed, inject, signal, viewChild } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, input, signal, viewChild } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressSpinnerModule } from '@angular/material/progress-spinner';
-import { ActivatedRoute } from '@angular/router';
 
 import type { ChipDto } from '../../../../../shared/api/reference-set-answers.js';
 import { deltaE00 } from '../../../../../shared/colour/delta-e.js';
@@ -42,9 +41,11 @@ export class PracticePage {
   private readonly chooser = viewChild(ChipChooser);
 
   protected readonly catalogue = inject(ChipCatalogue);
-  protected readonly series = seriesFrom(inject(ActivatedRoute).snapshot.queryParamMap.get('seed'));
+  /** `?seed=` from the address (component input binding): replays a series. */
+  readonly seed = input<string>();
+  protected readonly series = computed(() => seriesFrom(this.seed() ?? null));
   protected readonly round = signal(1);
-  protected readonly target = computed(() => practiceTarget(this.series + this.round() - 1));
+  protected readonly target = computed(() => practiceTarget(this.series() + this.round() - 1));
   protected readonly result = signal<PracticeResult | null>(null);
   protected readonly history = signal<PracticeResult[]>([]);
   protected readonly meanDeltaE00 = computed(() => {

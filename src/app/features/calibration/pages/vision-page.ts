@@ -1,11 +1,10 @@
-import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, type OnInit, computed, inject, input, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatProgressSpinnerModule } from '@angular/material/progress-spinner';
 import { MatSliderModule } from '@angular/material/slider';
-import { ActivatedRoute } from '@angular/router';
 
 import { ACCEPTABILITY_THRESHOLD_DE00 } from '../../../../../shared/colour/constants.js';
 import { ScreenCaution } from '../../reference-set/components/screen-caution';
@@ -33,13 +32,15 @@ const DEFAULT_CODE = 'F-001';
   templateUrl: './vision-page.html',
   styleUrl: './vision-page.scss',
 })
-export class VisionPage {
+export class VisionPage implements OnInit {
   protected readonly catalogue = inject(ChipCatalogue);
-  private readonly query = inject(ActivatedRoute).snapshot.queryParamMap;
+  /** From the address (component input binding): a specimen's colour (`?lab=L,a,b&label=…`), else a chip code. */
+  readonly lab = input<string>();
+  readonly label = input<string>();
+  readonly chip = input<string>();
 
-  /** A specimen's colour handed over in the address (`?lab=L,a,b&label=…`), else a chip code. */
-  protected readonly specimen = signal<VisionCentre | null>(labCentre(this.query.get('lab'), this.query.get('label')));
-  protected readonly code = signal(normaliseCode(this.query.get('chip') ?? '') ?? DEFAULT_CODE);
+  protected readonly specimen = signal<VisionCentre | null>(null);
+  protected readonly code = signal(DEFAULT_CODE);
   protected readonly severity = signal(1);
   protected readonly codeProblem = signal<string | null>(null);
   protected readonly labels = VISION_LABELS;
@@ -67,6 +68,11 @@ export class VisionPage {
 
   constructor() {
     this.catalogue.load();
+  }
+
+  ngOnInit(): void {
+    this.specimen.set(labCentre(this.lab() ?? null, this.label() ?? null));
+    this.code.set(normaliseCode(this.chip() ?? '') ?? DEFAULT_CODE);
   }
 
   /** Shows a chip typed as on the card ("87", "F-087.014"). */
