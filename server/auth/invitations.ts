@@ -15,7 +15,7 @@ export const INVITATION_TTL_MS = 7 * 24 * 60 * 60 * 1000;
 /** Creates an invitation and mails its link; refuses an address that already has an account. */
 export async function invite(ds: DataSource, mailer: Mailer, publicUrl: string, actor: Actor & { id: number }, body: InviteBody): Promise<InvitationRow> {
   if (await ds.getRepository(User).existsBy({ email: body.email })) {
-    throw AppError.conflict(`${body.email} already has an account.`);
+    throw new AppError(409, 'Conflict', `An account for ${body.email} already exists.`, [{ field: 'email', message: 'already has an account' }]);
   }
   const { token, hash } = newToken();
   const expiresAt = new Date(Date.now() + INVITATION_TTL_MS);

@@ -12,8 +12,8 @@ import { Site } from './site.entity.js';
 export async function assertAccessionNumberFree(m: EntityManager, accessionNumber: string, exceptId?: number): Promise<void> {
   const holder = await m.createQueryBuilder(Accession, 'a').where('LOWER(a.accessionNumber) = LOWER(:n)', { n: accessionNumber }).getOne();
   if (holder && holder.id !== exceptId) {
-    throw new AppError(409, 'Conflict', `Accession number ${accessionNumber} is already in use (as ${holder.accessionNumber}); numbers are compared regardless of case.`, [
-      { field: 'accessionNumber', message: `already in use as ${holder.accessionNumber} (case does not count)` },
+    throw new AppError(409, 'Conflict', `An accession ${holder.accessionNumber} already exists; accession numbers are compared regardless of case.`, [
+      { field: 'accessionNumber', message: `is taken: an accession ${holder.accessionNumber} already exists (letter case does not count)` },
     ]);
   }
 }
@@ -77,7 +77,7 @@ function toPlantDto(p: Plant, accessionId: number): PlantDto {
 
 async function assertLabelFree(m: EntityManager, accessionId: number, label: string, exceptId?: number): Promise<void> {
   const holder = await m.findOne(Plant, { where: { accession: { id: accessionId }, label } });
-  if (holder && holder.id !== exceptId) throw AppError.conflict(`Plant label ${label} is already in use in this accession.`);
+  if (holder && holder.id !== exceptId) throw new AppError(409, 'Conflict', `A plant ${label} already exists in this accession.`, [{ field: 'label', message: `is taken: a plant ${label} already exists in this accession` }]);
 }
 
 /** Adds a plant to an accession (at the accession's site unless another is named); 409 for a taken label. */

@@ -9,7 +9,7 @@ import { Character, toCharacterDto } from './character.entity.js';
 /** Adds a character to the catalogue, after the seeded ones; 409 for a taken code. */
 export async function createCharacter(ds: DataSource, actor: Actor, body: CreateCharacterBody): Promise<CharacterDto> {
   return ds.transaction(async (m) => {
-    if (await m.existsBy(Character, { code: body.code })) throw AppError.conflict(`Character code ${body.code} is already in use.`);
+    if (await m.existsBy(Character, { code: body.code })) throw new AppError(409, 'Conflict', `A character ${body.code} already exists.`, [{ field: 'code', message: `is taken: a character ${body.code} already exists` }]);
     // New entries join the end of the walk, which both catalogues share.
     const last = [...(await m.find(Character, { order: { sortOrder: 'DESC' }, take: 1 })), ...(await m.find(Descriptor, { order: { sortOrder: 'DESC' }, take: 1 }))].sort((a, b) => b.sortOrder - a.sortOrder);
     const character = await m.save(

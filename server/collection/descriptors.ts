@@ -14,7 +14,7 @@ export async function listDescriptors(ds: DataSource): Promise<DescriptorDto[]> 
 /** Adds a descriptor; 409 for a taken code; a ratio's parts must exist and measure the same kind. */
 export async function createDescriptor(ds: DataSource, actor: Actor, body: CreateDescriptorBody): Promise<DescriptorDto> {
   return ds.transaction(async (m) => {
-    if (await m.existsBy(Descriptor, { code: body.code })) throw AppError.conflict(`Descriptor code ${body.code} is already in use.`);
+    if (await m.existsBy(Descriptor, { code: body.code })) throw new AppError(409, 'Conflict', `A descriptor ${body.code} already exists.`, [{ field: 'code', message: `is taken: a descriptor ${body.code} already exists` }]);
     if (body.kind === 'ratio') {
       const parts = [];
       for (const field of ['numeratorCode', 'denominatorCode'] as const) {

@@ -16,8 +16,8 @@ export async function getSite(m: EntityManager, id: number): Promise<Site> {
 async function assertCodeFree(m: EntityManager, code: string, exceptId?: number): Promise<void> {
   const holder = await m.createQueryBuilder(Site, 's').where('LOWER(s.code) = LOWER(:code)', { code }).getOne();
   if (holder && holder.id !== exceptId) {
-    throw new AppError(409, 'Conflict', `Site code ${code} is already in use (as ${holder.code}); codes are compared regardless of case.`, [
-      { field: 'code', message: `already in use as ${holder.code} (case does not count)` },
+    throw new AppError(409, 'Conflict', `A site ${holder.code} already exists; site codes are compared regardless of case.`, [
+      { field: 'code', message: `is taken: a site ${holder.code} already exists (letter case does not count)` },
     ]);
   }
 }

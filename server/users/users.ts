@@ -15,7 +15,7 @@ export async function listUsers(ds: DataSource): Promise<UserRow[]> {
 export async function createUser(ds: DataSource, actor: Actor, body: CreateUserBody): Promise<UserRow> {
   const passwordHash = await hashPassword(body.password);
   return ds.transaction(async (m) => {
-    if (await m.existsBy(User, { email: body.email })) throw AppError.conflict(`${body.email} already has an account.`);
+    if (await m.existsBy(User, { email: body.email })) throw new AppError(409, 'Conflict', `An account for ${body.email} already exists.`, [{ field: 'email', message: 'already has an account' }]);
     const user = await m.save(m.create(User, { email: body.email, name: body.name, role: body.role, passwordHash, active: true, lastLoginAt: null }));
     await recordAudit(m, actor, 'user.created', `user:${user.id}`, { email: user.email, role: user.role });
     return toRow(user);

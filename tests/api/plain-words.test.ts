@@ -69,6 +69,24 @@ describe('records in plain words', () => {
     assert.equal(signIn?.sentence, 'Juno Testbright signed in.');
   });
 
+  test('should answer a conflict in words at the field that conflicts: "An accession RT-V already exists"', async () => {
+    const taken = (field: string, res: import('supertest').Response) => {
+      const problem = assertProblem(res, 409) as unknown as { detail: string; errors: { field: string; message: string }[] };
+      assert.deepEqual(problem.errors.map((e) => e.field), [field]);
+      return problem;
+    };
+    const accession = taken('accessionNumber', await admin.post('/api/accessions', { accessionNumber: 'rt-v', name: 'Twin', siteId: world.wetDry.id }));
+    assert.match(accession.detail, /^An accession RT-V already exists; accession numbers are compared regardless of case\.$/);
+    assert.equal(accession.errors[0]!.message, 'is taken: an accession RT-V already exists (letter case does not count)');
+    const site = taken('code', await admin.post('/api/sites', { code: 'rwd', name: 'Twin plot', timezone: 'Pacific/Fiji', seasons: [{ name: 'All year', start: '01-01', end: '12-31' }] }));
+    assert.match(site.detail, /^A site RWD already exists/);
+    const plant = taken('label', await admin.post(`/api/accessions/${world.violet.id}/plants`, { label: 'P1', plantedOn: '2025-04-10' }));
+    assert.equal(plant.detail, 'A plant P1 already exists in this accession.');
+    const user = taken('email', await admin.post('/api/users', { email: 'juno@test.example', name: 'Twin', role: 'recorder', password: 'a-long-passphrase' }));
+    assert.equal(user.detail, 'An account for juno@test.example already exists.');
+    taken('email', await admin.post('/api/invitations', { email: 'juno@test.example', name: 'Twin', role: 'recorder' }));
+  });
+
   test('should refuse From after To with a 400 naming "to", and keep the audit trail from non-admins', async () => {
     assertInvalidFields(await admin.get('/api/audit?from=2026-05-02&to=2026-05-01'), 'to');
     assertInvalidFields(await recorder.get('/api/readings?from=2026-05-02&to=2026-05-01'), 'to');
