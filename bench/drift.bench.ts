@@ -180,6 +180,7 @@ console.log(`| drift overview, cold, this thread (${coldSingle.value.pairs} pair
 console.log(`| drift overview, cold, worker threads (${coldPooled.value.recomputed} pairs analysed; same flags as this thread: ${agree ? 'yes' : 'NO'}) | ${ms(coldPooled.ms)} | ${(coldPooled.ms / floor.ms).toFixed(1)}× |`);
 console.log(`| drift overview, asked again, nothing changed (${warm.value.recomputed} pairs analysed) | ${ms(warm.ms)} | ${(warm.ms / floor.ms).toFixed(1)}× |`);
 console.log(`| drift overview after one new reading (${oneNew.value.recomputed} pair analysed again) | ${ms(oneNew.ms)} | ${(oneNew.ms / floor.ms).toFixed(1)}× |`);
+reportRatio(`drift overview, ${READINGS} readings, cold, this thread`, coldSingle.ms / floor.ms, 'a bare better-sqlite3 GROUP BY', '< 10×');
 reportRatio(`drift overview, ${READINGS} readings, cold, worker threads`, coldPooled.ms / floor.ms, 'a bare better-sqlite3 GROUP BY', '< 10×');
 reportRatio(`drift overview, ${READINGS} readings, after one new reading`, oneNew.ms / floor.ms, 'a bare better-sqlite3 GROUP BY', '< 10×');
 console.log(`| one drift answer, mean over the pairs (${(READINGS / pairs.length).toFixed(0)} readings each) | ${(full.ms / pairs.length).toFixed(1)} ms | |`);

@@ -5,22 +5,11 @@
 // worker threads.
 import type { DataSource } from 'typeorm';
 import type { DriftOverviewAnswer, DriftOverviewItem } from '../../shared/api/analysis-answers.js';
-import { utcFromSqlite } from './drift-query.js';
 import type { DriftPool } from './drift-pool.js';
 import { pairFlags, type PairFlags, type PairInput } from './pair-flags.js';
 
-interface Row {
-  id: number;
-  accessionId: number;
-  characterId: number;
-  siteId: number;
-  l: number;
-  a: number;
-  b: number;
-  season: string | null;
-  seasonYear: number | null;
-  observedAt: string;
-}
+/** accessionId, characterId, siteId, L*, a*, b*, season, season-year, observed at (epoch ms). */
+type RawRow = [number, number, number, number, number, number, string | null, number | null, number];
 
 interface PairSummary {
   accessionId: number;
@@ -103,32 +92,35 @@ export class DriftOverview {
       stale.map((s) => [keyOf(s), { key: keyOf(s), threshold: thresholds.get(s.characterId)!.threshold, siteId: [], l: [], a: [], b: [], season: [], seasonYear: [], observedAt: [] }]),
     );
     // One pass over the readings in force when many pairs are stale; per pair (index) when few.
-    const rows: Row[] =
+    // Rows come back as arrays from better-sqlite3 itself (TypeORM's layer would build an object
+    // per row, which dominates a 100,000-row read), with the instant as epoch milliseconds from
+    // SQLite's julianday (TypeORM stores "YYYY-MM-DD HH:MM:SS.SSS" UTC text).
+    const columns = `"accessionId", "characterId", "siteId", "l", "a", "b", "season", "seasonYear", CAST(ROUND((julianday("observedAt") - 2440587.5) * 86400000) AS INTEGER)`;
+    const rows: RawRow[] =
       stale.length > 50
-        ? await this.ds.query('SELECT "id", "accessionId", "characterId", "siteId", "l", "a", "b", "season", "seasonYear", "observedAt" FROM "reading" WHERE "supersededById" IS NULL ORDER BY "observedAt", "id"')
-        : (
-            await Promise.all(
-              stale.map((s) =>
-                this.ds.query(
-                  'SELECT "id", "accessionId", "characterId", "siteId", "l", "a", "b", "season", "seasonYear", "observedAt" FROM "reading" WHERE "accessionId" = ? AND "characterId" = ? AND +"supersededById" IS NULL ORDER BY "observedAt", "id"',
-                  [s.accessionId, s.characterId],
-                ),
-              ),
-            )
-          ).flat();
-    for (const r of rows) {
-      const key = keyOf(r);
+        ? this.raw(`SELECT ${columns} FROM "reading" WHERE "supersededById" IS NULL ORDER BY "observedAt", "id"`)
+        : stale.flatMap((s) =>
+            this.raw(`SELECT ${columns} FROM "reading" WHERE "accessionId" = ? AND "characterId" = ? AND +"supersededById" IS NULL ORDER BY "observedAt", "id"`, [s.accessionId, s.characterId]),
+          );
+    for (const [accessionId, characterId, siteId, l, a, b, season, seasonYear, at] of rows) {
+      const key = `${accessionId}:${characterId}`;
       if (!wanted.has(key)) continue;
       const p = byKey.get(key)!;
-      p.siteId.push(r.siteId);
-      p.l.push(r.l);
-      p.a.push(r.a);
-      p.b.push(r.b);
-      p.season.push(r.season);
-      p.seasonYear.push(r.seasonYear);
-      p.observedAt.push(utcFromSqlite(r.observedAt).getTime());
+      p.siteId.push(siteId);
+      p.l.push(l);
+      p.a.push(a);
+      p.b.push(b);
+      p.season.push(season);
+      p.seasonYear.push(seasonYear);
+      p.observedAt.push(at);
     }
     return stale.map((s) => byKey.get(keyOf(s))!);
+  }
+
+  /** A read straight through the data source's better-sqlite3 connection, rows as arrays. */
+  private raw(sql: string, params: unknown[] = []): RawRow[] {
+    const db = (this.ds.driver as unknown as { databaseConnection: { prepare(sql: string): { raw(on: boolean): { all(...p: unknown[]): unknown[] } } } }).databaseConnection;
+    return db.prepare(sql).raw(true).all(...params) as RawRow[];
   }
 
   /** Flagged pairs with their names, largest ΔE00 first. */
