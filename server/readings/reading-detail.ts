@@ -9,6 +9,7 @@ import type { ReferenceSets } from '../reference-sets/reference-sets.js';
 import { auditSentence } from '../audit/audit-sentence.js';
 import { toReadingDto, wrappingSeasons } from './reading-list.js';
 import { Reading } from './reading.entity.js';
+import { Review } from '../reviews/review.entity.js';
 import { nameBestChips } from '../reference-sets/chip-names.js';
 
 /** How many chips the detail lists (the same strip of five a photo sample shows). */
@@ -57,6 +58,11 @@ async function chainOf(m: EntityManager, r: Reading): Promise<ReadingVersion[]> 
   return [...older, r, ...newer].map((v) => ({ id: v.id, observedAt: v.observedAt.toISOString(), createdAt: v.createdAt.toISOString(), reason: v.supersedeReason, current: v.supersededById === null }));
 }
 
+async function latestReviewOf(m: EntityManager, readingId: number): Promise<ReadingDetail['latestReview']> {
+  const review = await m.findOne(Review, { where: { readingId }, relations: { reviewer: true }, order: { createdAt: 'DESC', id: 'DESC' } });
+  return review ? { decision: review.decision, comment: review.comment, reviewerName: review.reviewer!.name, createdAt: review.createdAt.toISOString() } : null;
+}
+
 async function historyOf(m: EntityManager, id: number): Promise<ReadingHistoryEvent[]> {
   const events = await m.find(AuditEvent, { where: { subject: readingSubject(id) }, order: { at: 'ASC', id: 'ASC' } });
   const actorIds = [...new Set(events.map((e) => e.actorId).filter((x): x is number => x !== null))];
@@ -81,5 +87,5 @@ export async function getReadingDetail(deps: { ds: DataSource; referenceSets: Re
     const other = await referenceSets.match(lab, DETAIL_MATCHES, set.id);
     otherSets.push({ setId: set.id, current: set.current, matches: other.matches, between: other.between });
   }
-  return { ...toReadingDto(r, await wrappingSeasons(m)), matches: match.matches, between: match.between, otherSets, provenance: provenanceOf(r), versions: await chainOf(m, r), history: await historyOf(m, id) };
+  return { ...toReadingDto(r, await wrappingSeasons(m)), matches: match.matches, between: match.between, otherSets, provenance: provenanceOf(r), versions: await chainOf(m, r), history: await historyOf(m, id), latestReview: await latestReviewOf(m, id) };
 }

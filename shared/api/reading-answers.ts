@@ -161,6 +161,17 @@ export interface ReadingDetail extends ReadingDto {
   /** The whole supersede chain, oldest first (this reading included). */
   versions: ReadingVersion[];
   history: ReadingHistoryEvent[];
+  /** The latest reviewer's decision and comment, shown to the recorder at the top of the reading; null when never reviewed. */
+  latestReview: LatestReview | null;
+}
+
+/** A reading's latest review, as its recorder sees it. */
+export interface LatestReview {
+  decision: 'approve' | 'flag' | 'reread';
+  comment: string | null;
+  reviewerName: string;
+  /** ISO 8601. */
+  createdAt: string;
 }
 
 export const READING_SORTS = ['observedAt', 'accession', 'character', 'site', 'observer', 'deltaE00', 'status', 'method'] as const;

@@ -87,6 +87,15 @@ describe('records in plain words', () => {
     taken('email', await admin.post('/api/invitations', { email: 'juno@test.example', name: 'Twin', role: 'recorder' }));
   });
 
+  test("should give the reading's latest review with its comment, for the recorder to read at the top", async () => {
+    const before = (await recorder.get(`/api/readings/${correctionId}`).expect(200)).body as ReadingDetail;
+    assert.equal(before.latestReview, null);
+    const reviewer = await signedInAs(h, 'reviewer');
+    await reviewer.post(`/api/readings/${correctionId}/review`, { decision: 'reread', comment: 'Read the middle third in open shade.' }).expect(201);
+    const after = (await recorder.get(`/api/readings/${correctionId}`).expect(200)).body as ReadingDetail;
+    assert.deepEqual([after.latestReview?.decision, after.latestReview?.comment, after.latestReview?.reviewerName], ['reread', 'Read the middle third in open shade.', 'Test reviewer']);
+  });
+
   test('should refuse From after To with a 400 naming "to", and keep the audit trail from non-admins', async () => {
     assertInvalidFields(await admin.get('/api/audit?from=2026-05-02&to=2026-05-01'), 'to');
     assertInvalidFields(await recorder.get('/api/readings?from=2026-05-02&to=2026-05-01'), 'to');

@@ -93,6 +93,19 @@ describe('ReadingDetailPage', () => {
     expect(el.querySelector('.versions a')?.getAttribute('href')).toBe('/readings/39');
   });
 
+  it("should put the reviewer's comment at the top of the reading, above the actions, for its recorder", async () => {
+    const el = await open({ id: 4, role: 'recorder' }, { ...DETAIL, status: 'reread-requested', latestReview: { decision: 'reread', comment: 'Read the middle third in open shade.', reviewerName: 'Caspar Thistlewood', createdAt: '2026-03-15T08:00:00Z' } });
+    const note = el.querySelector('[data-testid="review-comment"]');
+    expect(note?.textContent).toContain('Caspar Thistlewood asked for a re-read');
+    expect(note?.textContent).toContain('“Read the middle third in open shade.”');
+    expect(note!.compareDocumentPosition(el.querySelector('.actions')!) & Node.DOCUMENT_POSITION_FOLLOWING).toBeTruthy();
+  });
+
+  it('should show no review note on a reading never reviewed', async () => {
+    const el = await open({ id: 4, role: 'recorder' }, { ...DETAIL, latestReview: null });
+    expect(el.querySelector('[data-testid="review-comment"]')).toBeNull();
+  });
+
   it('should offer a correction to its observer and to an admin, not to another recorder', async () => {
     expect((await open({ id: 4, role: 'recorder' })).textContent).toContain('Correct this reading');
     TestBed.resetTestingModule();
