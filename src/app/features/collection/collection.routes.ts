@@ -9,6 +9,11 @@ export const COLLECTION_ROUTES: Routes = [
     loadComponent: () => import('./pages/collection-page').then((m) => m.CollectionPage),
   },
   {
+    path: 'progress',
+    title: 'Characterisation progress · Hueledger',
+    loadComponent: () => import('./pages/progress-page').then((m) => m.ProgressPage),
+  },
+  {
     path: 'sites/:id',
     title: 'Site · Hueledger',
     loadComponent: () => import('./pages/site-page').then((m) => m.SitePage),

@@ -9,7 +9,7 @@ import { PlantSheetApi } from '../../record/data/plant-sheet-api';
 import { progressWords, settledPercent } from '../../record/data/sheet-progress';
 
 /** Words of each progress state, with an icon so the state never rests on colour alone. */
-const STATE_WORDS = {
+export const STATE_WORDS = {
   complete: { label: 'Fully characterised', icon: 'task_alt' },
   partial: { label: 'Partly characterised', icon: 'pending' },
   'not-started': { label: 'Not started', icon: 'radio_button_unchecked' },

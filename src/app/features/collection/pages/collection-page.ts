@@ -19,6 +19,7 @@ import { AccessionList } from '../components/accession-list';
 import { CharacterDialog } from '../components/character-dialog';
 import { CharacterList } from '../components/character-list';
 import { LoadState } from '../../../shared/load-state';
+import { ProgressSummary } from '../components/progress-summary';
 import { SiteList } from '../components/site-list';
 import { CollectionApi, PASSPORT_CSV_URL } from '../data/collection-api';
 
@@ -28,7 +29,7 @@ const TABS = ['accessions', 'sites', 'characters', 'descriptors'] as const;
 /** The collection: accessions, sites and their seasons, characters, descriptors; admins also add and edit. */
 @Component({
   selector: 'hl-collection-page',
-  imports: [AccessionList, CharacterList, DescriptorList, LoadState, MatButtonModule, MatIconModule, MatTabsModule, RouterLink, SiteList],
+  imports: [AccessionList, CharacterList, DescriptorList, LoadState, MatButtonModule, MatIconModule, MatTabsModule, RouterLink, SiteList, ProgressSummary],
   templateUrl: './collection-page.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
   styles: `
