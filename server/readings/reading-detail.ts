@@ -1,7 +1,7 @@
 // A stored reading as the API shows it: the list row, and the detail with matches, provenance,
 // the supersede chain and the audit history. Reads only.
 import { In, type DataSource, type EntityManager } from 'typeorm';
-import type { ReadingDetail, ReadingHistoryEvent, ReadingProvenance, ReadingVersion } from '../../shared/api/reading-answers.js';
+import { EARLIER_READINGS_MAX, type EarlierReading, type ReadingDetail, type ReadingHistoryEvent, type ReadingProvenance, type ReadingVersion } from '../../shared/api/reading-answers.js';
 import { AuditEvent } from '../audit/audit-event.entity.js';
 import { User } from '../auth/user.entity.js';
 import { AppError } from '../core/app-error.js';
@@ -58,6 +58,19 @@ async function chainOf(m: EntityManager, r: Reading): Promise<ReadingVersion[]> 
   return [...older, r, ...newer].map((v) => ({ id: v.id, observedAt: v.observedAt.toISOString(), createdAt: v.createdAt.toISOString(), reason: v.supersedeReason, current: v.supersededById === null }));
 }
 
+/** The same plant's (else the same accession and site's) earlier readings of the character, versions in force, newest first. */
+async function earlierOf(m: EntityManager, r: Reading): Promise<EarlierReading[]> {
+  const qb = m
+    .getRepository(Reading)
+    .createQueryBuilder('x')
+    .leftJoinAndSelect('x.observer', 'o')
+    .where('x.accessionId = :a AND x.characterId = :c AND x.observedAt < :at AND x.supersededById IS NULL AND x.id != :id', { a: r.accessionId, c: r.characterId, at: r.observedAt, id: r.id });
+  if (r.plantId !== null) qb.andWhere('x.plantId = :p', { p: r.plantId });
+  else qb.andWhere('x.plantId IS NULL AND x.siteId = :s', { s: r.siteId });
+  const rows = await qb.orderBy('x.observedAt', 'DESC').addOrderBy('x.id', 'DESC').limit(EARLIER_READINGS_MAX).getMany();
+  return rows.map((x) => ({ id: x.id, observedAt: x.observedAt.toISOString(), observerName: x.observer!.name, hex: x.hex, bestChip: x.bestChipCode, status: x.status }));
+}
+
 async function latestReviewOf(m: EntityManager, readingId: number): Promise<ReadingDetail['latestReview']> {
   const review = await m.findOne(Review, { where: { readingId }, relations: { reviewer: true }, order: { createdAt: 'DESC', id: 'DESC' } });
   return review ? { decision: review.decision, comment: review.comment, reviewerName: review.reviewer!.name, createdAt: review.createdAt.toISOString() } : null;
@@ -87,5 +100,5 @@ export async function getReadingDetail(deps: { ds: DataSource; referenceSets: Re
     const other = await referenceSets.match(lab, DETAIL_MATCHES, set.id);
     otherSets.push({ setId: set.id, current: set.current, matches: other.matches, between: other.between });
   }
-  return { ...toReadingDto(r, await wrappingSeasons(m)), matches: match.matches, between: match.between, otherSets, provenance: provenanceOf(r), versions: await chainOf(m, r), history: await historyOf(m, id), latestReview: await latestReviewOf(m, id) };
+  return { ...toReadingDto(r, await wrappingSeasons(m)), matches: match.matches, between: match.between, otherSets, provenance: provenanceOf(r), versions: await chainOf(m, r), history: await historyOf(m, id), latestReview: await latestReviewOf(m, id), earlier: await earlierOf(m, r) };
 }

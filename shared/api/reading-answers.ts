@@ -163,6 +163,22 @@ export interface ReadingDetail extends ReadingDto {
   history: ReadingHistoryEvent[];
   /** The latest reviewer's decision and comment, shown to the recorder at the top of the reading; null when never reviewed. */
   latestReview: LatestReview | null;
+  /** The same plant's earlier readings of the same character (without a plant: the same accession at the same site), newest first, at most EARLIER_READINGS_MAX. */
+  earlier: EarlierReading[];
+}
+
+/** How many earlier readings a reading's detail lists (our own: enough to see a trend on a phone). */
+export const EARLIER_READINGS_MAX = 6;
+
+/** One earlier reading beside the one under review. */
+export interface EarlierReading {
+  id: number;
+  /** ISO 8601. */
+  observedAt: string;
+  observerName: string;
+  hex: string;
+  bestChip: string;
+  status: ReadingStatus;
 }
 
 /** A reading's latest review, as its recorder sees it. */

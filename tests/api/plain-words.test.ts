@@ -96,6 +96,14 @@ describe('records in plain words', () => {
     assert.deepEqual([after.latestReview?.decision, after.latestReview?.comment, after.latestReview?.reviewerName], ['reread', 'Read the middle third in open shade.', 'Test reviewer']);
   });
 
+  test("should list the plant's earlier readings of the same character for the review, newest first, without superseded versions", async () => {
+    const older = (await recorder.post('/api/readings', instrumentBody(world, { observedAt: '2025-04-01T10:00:00+12:00', lab: [34, 19, -8] })).expect(201)).body.id as number;
+    const detail = (await recorder.get(`/api/readings/${correctionId}`).expect(200)).body as ReadingDetail;
+    assert.deepEqual(detail.earlier.map((e) => e.id), [older], 'not the superseded original');
+    assert.equal(detail.earlier[0]!.observerName, 'Juno Testbright');
+    assert.match(detail.earlier[0]!.hex, /^#[0-9a-f]{6}$/);
+  });
+
   test('should refuse From after To with a 400 naming "to", and keep the audit trail from non-admins', async () => {
     assertInvalidFields(await admin.get('/api/audit?from=2026-05-02&to=2026-05-01'), 'to');
     assertInvalidFields(await recorder.get('/api/readings?from=2026-05-02&to=2026-05-01'), 'to');

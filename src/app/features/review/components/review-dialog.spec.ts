@@ -96,6 +96,17 @@ describe('ReviewDialog', () => {
     expect(button(/^\s*flag\s*Flag/i).textContent).toContain('F');
   });
 
+  it("should show the plant's earlier readings of the character with swatch, chip code, date and observer", async () => {
+    await open([11]);
+    http.expectOne('/api/readings/11').flush({ ...detail(11), plantLabel: 'P3', earlier: [{ id: 7, observedAt: '2025-12-01T09:00:00Z', observerName: 'Tamsin Orrowby', hex: '#6d4a66', bestChip: 'F-101.002', status: 'approved' }] });
+    await settle();
+    const earlier = pane().querySelector('[data-testid="earlier-readings"]')!;
+    expect(earlier.textContent).toContain('Plant P3: earlier readings of');
+    expect(earlier.textContent).toContain('F-101.002');
+    expect(earlier.textContent).toContain('Tamsin Orrowby');
+    expect(earlier.querySelector('.hl-swatch-surround .earlier-swatch')).not.toBeNull();
+  });
+
   it('should approve on A and open the next reading', async () => {
     await open([11, 12]);
     http.expectOne('/api/readings/11').flush(detail(11));
