@@ -33,6 +33,8 @@ describe('ReadingForm', () => {
 
   afterEach(() => {
     vi.useRealTimers();
+    // The match preview loads the chips once a colour is typed; these tests do not look at it.
+    http.match((r) => r.url.startsWith('/api/reference-sets')).forEach((r) => r.flush([]));
     http.verify();
   });
 

@@ -28,6 +28,9 @@ import { ChipPicker } from '../components/chip-picker';
 import { CutTimer } from '../components/cut-timer';
 import { LabFields } from '../components/lab-fields';
 import { LabelScanner } from '../components/label-scanner';
+import { MatchPreview } from '../components/match-preview';
+import { parseHex } from '../../../../../shared/colour/parse.js';
+import type { Lab } from '../../../../../shared/colour/lab.js';
 import { PhotoSummary } from '../components/photo-summary';
 import { SwatchPicker } from '../components/swatch-picker';
 import { photoSourceFromParams, photoSourceParams } from '../data/photo-source';
@@ -73,6 +76,7 @@ const LEAF_CHOICES = ['2nd open leaf', '3rd open leaf', '4th open leaf'] as cons
     CutTimer,
     LabFields,
     LabelScanner,
+    MatchPreview,
     MatButtonModule,
     MatFormFieldModule,
     MatIconModule,
@@ -141,6 +145,17 @@ export class ReadingForm {
   protected readonly plants = computed<Plant[]>(() => this.accession()?.plants ?? []);
   protected readonly character = computed(() => (this.characters.hasValue() ? (this.characters.value().find((c) => c.id === this.formValue().characterId) ?? null) : null));
   protected readonly cut = computed(() => isCutCharacter(this.character()));
+  /** The colour typed or set so far (instrument, swatch), matched before saving; null while incomplete. */
+  protected readonly previewLab = computed<Lab | null>(() => {
+    const v = this.formValue();
+    if (v.method === 'instrument') {
+      const { l, a, b } = v.lab;
+      return [l, a, b].every((n) => n !== null && Number.isFinite(n)) ? { l: l!, a: a!, b: b! } : null;
+    }
+    if (v.method === 'swatch' && v.hex) return parseHex(v.hex) ?? null;
+    return null;
+  });
+  protected readonly eyeChip = computed(() => this.formValue().eyeChipCode);
   protected readonly photoMissing = computed(() => photoProblem(this.method(), this.photo()));
 
   constructor() {
