@@ -20,6 +20,7 @@ import { pValueText } from '../data/drift-words';
   imports: [MatButtonModule, MatIconModule, MatProgressSpinnerModule, RouterLink],
   changeDetection: ChangeDetectionStrategy.OnPush,
   template: `
+    <p class="hl-muted pick">Pick an accession and a colour character above to see how its colour moves from season to season, or open one flagged below.</p>
     <h2>Where colour moves</h2>
     @if (overview.error()) {
       <div class="hl-notice hl-notice-error" role="alert">
@@ -29,7 +30,7 @@ import { pValueText } from '../data/drift-words';
     } @else if (overview.value(); as o) {
       <p class="hl-muted">
         {{ o.items.length }} of {{ o.pairs }} accession × character {{ o.pairs === 1 ? 'pair' : 'pairs' }} ({{ o.readings }} readings in force) flagged: a season change, or two sites apart within the same season,
-        each by the character's threshold and a permutation test. Pick one to see its detail, or choose above.
+        each by the character's threshold and a permutation test.
       </p>
       @if (o.items.length === 0) {
         <p class="hl-empty"><mat-icon aria-hidden="true">check_circle</mat-icon> Nothing flagged: every character holds its colour across seasons and sites.</p>
