@@ -28,4 +28,9 @@ describe('readingSummary', () => {
     const s = readingSummary(base, { accession: null, character: null, method: 'x' }, null);
     expect([s.accession, s.character]).toEqual(['Accession 3', 'Character 11']);
   });
+
+  it('should name the plant, so a walk round one plant reads as that plant in the waiting list', () => {
+    const s = readingSummary({ ...base, plantId: 12 }, { ...names, plant: { label: 'P3' } }, null);
+    expect(s.accession).toBe('HL-0917 Dusk Purple · plant P3');
+  });
 });

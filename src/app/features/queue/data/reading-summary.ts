@@ -11,6 +11,8 @@ export interface SummaryNames {
   accession: { accessionNumber: string; name: string } | null;
   character: { label: string } | null;
   method: string;
+  /** The plant read, so the waiting list tells one plant's readings from another's. */
+  plant?: { label: string } | null;
 }
 
 /**
@@ -20,7 +22,7 @@ export interface SummaryNames {
  */
 export function readingSummary(body: QueuedReadingBody, names: SummaryNames, chips: ChipSet | null, photoPreview: { lab: LabTuple; hex: string } | null = null): ReadingSummary {
   const base = {
-    accession: names.accession ? `${names.accession.accessionNumber} ${names.accession.name}` : `Accession ${body.accessionId}`,
+    accession: `${names.accession ? `${names.accession.accessionNumber} ${names.accession.name}` : `Accession ${body.accessionId}`}${names.plant ? ` · plant ${names.plant.label}` : ''}`,
     character: names.character?.label ?? `Character ${body.characterId}`,
     method: names.method,
   };

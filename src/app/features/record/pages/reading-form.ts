@@ -232,7 +232,7 @@ export class ReadingForm {
       const photo = this.photo();
       const local = body.method === 'photo' ? photo?.localPhotoId : undefined;
       const queued: QueuedReadingBody = local && photo ? { ...body, photo: { localPhotoId: local, region: photo.region, ...(photo.neutral ? { neutral: { region: photo.neutral } } : {}) } } : body;
-      const names = { accession: this.accession(), character: this.character(), method: METHOD_WORDS[body.method].label };
+      const names = { accession: this.accession(), character: this.character(), method: METHOD_WORDS[body.method].label, plant: this.plants().find((p) => p.id === body.plantId) ?? null };
       (local ? this.queue.photo(local).then((p) => p?.preview ?? null) : Promise.resolve(null))
         .then((preview) => this.queue.submitReading(queued, readingSummary(queued, names, this.chips.set(), preview)))
         .then(
