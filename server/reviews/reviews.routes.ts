@@ -1,10 +1,10 @@
 import { Router } from 'express';
-import { reviewBody, reviewQueueQuery } from '../../shared/api/reviews.js';
+import { bulkApproveBody, reviewBody, reviewQueueQuery } from '../../shared/api/reviews.js';
 import { actorOf, allow, currentUser, signedIn } from '../core/access.js';
 import type { AppContext } from '../core/context.js';
 import { idParam, parse } from '../core/validate.js';
 import { markNotificationRead, listNotifications } from './notifications.js';
-import { reviewQueue, reviewReading, reviewsOf } from './reviews.js';
+import { bulkApprove, reviewQueue, reviewReading, reviewsOf } from './reviews.js';
 
 const reviewers = allow('reviewer', 'admin');
 
@@ -31,6 +31,11 @@ export function reviewQueueRoutes(ctx: AppContext): Router {
 
   router.get('/queue', reviewers, async (req, res) => {
     res.json(await reviewQueue(ctx.ds, parse(reviewQueueQuery, req.query, 'query')));
+  });
+
+  router.post('/approve', reviewers, async (req, res) => {
+    const body = parse(bulkApproveBody, req.body);
+    res.json(await bulkApprove(ctx.ds, actorOf(req), currentUser(req), body.ids));
   });
 
   return router;

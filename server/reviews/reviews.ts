@@ -78,6 +78,23 @@ export async function reviewReading(deps: ReviewDeps, actor: Actor, reviewer: Us
 }
 
 /**
+ * Approves every reading named in one transaction, all or nothing: a reading that may not be
+ * reviewed (missing, superseded, one's own) refuses the whole request naming it, and nothing is
+ * written. Approvals send no notice or mail.
+ */
+export async function bulkApprove(ds: DataSource, actor: Actor, reviewer: User, ids: readonly number[]): Promise<{ approved: number }> {
+  const unique = [...new Set(ids)];
+  await ds.transaction(async (m) => {
+    for (const id of unique) {
+      const r = await loadReading(m, id);
+      assertReviewable(r, reviewer);
+      await recordReview(m, actor, reviewer, r, { decision: 'approve', comment: null });
+    }
+  });
+  return { approved: unique.length };
+}
+
+/**
  * The writes of one decision inside the caller's transaction (the API's and the demo's): the
  * review, the status of `r` (updated in place too), the audit event, and the observer's notice for
  * a flag or a re-read. The caller has checked that `r` may be reviewed.

@@ -24,6 +24,20 @@ export const reviewBody = z
   });
 export type ReviewBody = z.infer<typeof reviewBody>;
 
+/** Most readings approved in one bulk request (our own: one queue page at its largest). */
+export const BULK_APPROVE_MAX = 200;
+
+/** `POST /api/reviews/approve`: approve every reading named, all or nothing (one confirmation in the client). */
+export const bulkApproveBody = z
+  .object({
+    ids: z
+      .array(z.number({ message: 'must be reading ids' }).int({ message: 'must be whole numbers' }).positive({ message: 'must be positive ids' }), { message: 'must be a list of reading ids' })
+      .min(1, { message: 'must name at least one reading' })
+      .max(BULK_APPROVE_MAX, { message: `may name at most ${BULK_APPROVE_MAX} readings` }),
+  })
+  .strict();
+export type BulkApproveBody = z.infer<typeof bulkApproveBody>;
+
 /** `GET /api/reviews/queue`: the readings filter, status `submitted` unless another is asked for. */
 export const reviewQueueQuery = listReadingsQuery.transform((q) => ({ ...q, status: q.status ?? ('submitted' as const) }));
 export type ReviewQueueQueryParsed = z.infer<typeof reviewQueueQuery>;

@@ -7,7 +7,7 @@ import type { AuditEventRow, Page } from '../../shared/api/auth.js';
 import type { ReadingDetail, ReadingList } from '../../shared/api/reading-answers.js';
 import { seasonLabel } from '../../shared/collection/season-of.js';
 import { assertInvalidFields, assertProblem } from './assert-problem.js';
-import { addUser, Client, PASSWORD, signedInAs, startHarness, type Harness } from './harness.js';
+import { addUser, Client, PASSWORD, rowCounts, signedInAs, startHarness, type Harness } from './harness.js';
 import { instrumentBody, readingWorld, type ReadingWorld } from './reading-fixtures.js';
 
 describe('records in plain words', () => {
@@ -102,6 +102,18 @@ describe('records in plain words', () => {
     assert.deepEqual(detail.earlier.map((e) => e.id), [older], 'not the superseded original');
     assert.equal(detail.earlier[0]!.observerName, 'Juno Testbright');
     assert.match(detail.earlier[0]!.hex, /^#[0-9a-f]{6}$/);
+  });
+
+  test('should approve a filtered set in one request, all or nothing', async () => {
+    const reviewer = await signedInAs(h, 'reviewer');
+    const a = (await recorder.post('/api/readings', instrumentBody(world, { observedAt: '2025-03-01T10:00:00+12:00' })).expect(201)).body.id as number;
+    const b = (await recorder.post('/api/readings', instrumentBody(world, { observedAt: '2025-03-02T10:00:00+12:00' })).expect(201)).body.id as number;
+    const before = await rowCounts(h.ds);
+    assertProblem(await reviewer.post('/api/reviews/approve', { ids: [a, readingId] }), 409);
+    assert.deepEqual(await rowCounts(h.ds), before, 'a superseded reading refuses the whole set');
+    assertInvalidFields(await reviewer.post('/api/reviews/approve', { ids: [] }), 'ids');
+    assert.deepEqual((await reviewer.post('/api/reviews/approve', { ids: [a, b] }).expect(200)).body, { approved: 2 });
+    for (const id of [a, b]) assert.equal(((await recorder.get(`/api/readings/${id}`).expect(200)).body as ReadingDetail).status, 'approved');
   });
 
   test('should refuse From after To with a 400 naming "to", and keep the audit trail from non-admins', async () => {

@@ -168,6 +168,7 @@ const ROUTES: readonly RouteCase[] = [
   { method: 'POST', path: '/api/readings/:id/review', access: REVIEWERS, ok: 201, url: (f) => `/api/readings/${f.reviewTargetId}/review`, body: () => ({ decision: 'approve' }) },
   { method: 'GET', path: '/api/readings/:id/reviews', access: EVERYONE, ok: 200, url: (f) => `/api/readings/${f.reviewTargetId}/reviews` },
   { method: 'GET', path: '/api/reviews/queue', access: REVIEWERS, ok: 200 },
+  { method: 'POST', path: '/api/reviews/approve', access: REVIEWERS, ok: 200, body: (f) => ({ ids: [f.reviewTargetId] }) },
   { method: 'GET', path: '/api/notifications', access: EVERYONE, ok: 200 },
   { method: 'POST', path: '/api/notifications/:id/read', access: EVERYONE, ok: 204, url: (f, role) => `/api/notifications/${f.noticeOf(role)}/read` },
   { method: 'GET', path: '/api/analysis/overview', access: EVERYONE, ok: 200 },
