@@ -75,4 +75,18 @@ describe('records in plain words', () => {
     await recorder.goto(`${app.url}/readings`);
     await recorder.getByRole('link', { name: 'New reading' }).waitFor();
   });
+
+  test('should approve the filtered queue page with one confirmation', async () => {
+    const reviewer = await app.newPage();
+    await signIn(reviewer, app.url, 'reviewer@demo.test');
+    await reviewer.goto(`${app.url}/review`);
+    const button = reviewer.getByRole('button', { name: /^done_all Approve all \d+ shown$/ });
+    await button.waitFor();
+    const count = Number(/Approve all (\d+) shown/.exec(await button.innerText())![1]);
+    await button.click();
+    await reviewer.getByRole('dialog').getByText(`Approve ${count} readings?`).waitFor();
+    await reviewer.getByRole('dialog').getByRole('button', { name: `Approve ${count}` }).click();
+    await reviewer.getByText(`${count} readings approved.`).waitFor();
+    await screenshot(reviewer, 'plain-words-bulk-approve-desktop');
+  });
 });

@@ -30,6 +30,11 @@ export class ReviewsApi {
     return this.http.post<ReviewAnswer>(`/api/readings/${id}/review`, body);
   }
 
+  /** Approves every reading named in one request, all or nothing. */
+  approveAll(ids: readonly number[]): Observable<{ approved: number }> {
+    return this.http.post<{ approved: number }>('/api/reviews/approve', { ids });
+  }
+
   /** Every review of a reading, oldest first. */
   reviewsOf(id: number): Observable<ReviewDto[]> {
     return this.http.get<ReviewDto[]>(`/api/readings/${id}/reviews`);

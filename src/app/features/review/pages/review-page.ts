@@ -19,6 +19,8 @@ import { ReviewDialog, type ReviewDialogData } from '../components/review-dialog
 import { QUEUE_DEFAULT_STATUS, QUEUE_PAGE_SIZES, paramsFromQueue, queueFromParams } from '../data/review-filters';
 import { ReviewsApi } from '../data/reviews-api';
 import { LocalDateTimePipe } from '../../../core/format/local-date-time';
+import { ConfirmDialog, type ConfirmDialogData } from '../../../shared/confirm-dialog';
+import { ApiError } from '../../../core/http/api-error';
 
 /**
  * Review: the queue of readings to review (submitted unless another status is picked), oldest
@@ -59,6 +61,38 @@ export class ReviewPage {
   protected readonly characters = rxResource({ stream: () => this.collection.characters() });
   protected readonly sites = rxResource({ stream: () => this.collection.sites() });
   protected readonly observerName = signal<string | null>(null);
+  protected readonly approving = signal(false);
+  /** What the last bulk approval did, or why it was refused. */
+  protected readonly bulkDone = signal<string | null>(null);
+
+  /** Approves every reading shown (the filtered page) after one confirmation, all or nothing. */
+  protected approveShown(): void {
+    const ids = this.rows().map((r) => r.id);
+    if (!ids.length) return;
+    const data: ConfirmDialogData = {
+      title: `Approve ${ids.length} ${ids.length === 1 ? 'reading' : 'readings'}?`,
+      message: `Every reading shown with the current filters is approved at once (readings ${ids.slice(0, 5).join(', ')}${ids.length > 5 ? ` and ${ids.length - 5} more` : ''}). If any of them can no longer be approved, none is.`,
+      confirmLabel: `Approve ${ids.length}`,
+    };
+    this.dialog
+      .open(ConfirmDialog, { data })
+      .afterClosed()
+      .subscribe((yes) => {
+        if (!yes) return;
+        this.approving.set(true);
+        this.api.approveAll(ids).subscribe({
+          next: ({ approved }) => {
+            this.approving.set(false);
+            this.bulkDone.set(`${approved} ${approved === 1 ? 'reading' : 'readings'} approved.`);
+            this.queue.reload();
+          },
+          error: (error: unknown) => {
+            this.approving.set(false);
+            this.bulkDone.set(error instanceof ApiError ? `Nothing was approved: ${error.message}` : 'Nothing was approved. Try again.');
+          },
+        });
+      });
+  }
 
   protected filter(change: Partial<ReviewQueueQuery>): void {
     if ('observerId' in change && change.observerId === undefined) this.observerName.set(null);
