@@ -6,6 +6,7 @@ import { ActivatedRoute, provideRouter } from '@angular/router';
 
 import { AuthStore } from '../../../core/auth/auth-store';
 import { errorInterceptor } from '../../../core/http/error-interceptor';
+import { IS_ONLINE } from '../../../core/offline/offline-queue';
 import { CUT_SECONDS_WARN } from '../../../../../shared/api/reading-answers.js';
 import { READING_DRAFT_KEY, READING_MEMORY_KEY } from '../data/reading-memory';
 import { TEST_ACCESSIONS, TEST_CHARACTERS, TEST_SITES } from '../testing/collection-fixtures';
@@ -142,6 +143,17 @@ describe('ReadingForm', () => {
     fixture.detectChanges();
     expect(f.getRawValue()).toMatchObject({ accessionId: 1, plantId: 11, characterId: 7, method: 'instrument', light: 'overcast', instrument: 'Bench spectro A', lab: { l: null, a: null, b: null } });
     expect(el.textContent).toContain('Save reading');
+  });
+
+  it('should say there is no connection before anything is saved, and drop the notice once it is back', async () => {
+    let online = false;
+    TestBed.overrideProvider(IS_ONLINE, { useValue: () => online });
+    const { fixture, el } = await open();
+    expect(el.querySelector('.offline-banner')?.textContent).toContain('No connection');
+    online = true;
+    window.dispatchEvent(new Event('online'));
+    fixture.detectChanges();
+    expect(el.querySelector('.offline-banner')).toBeNull();
   });
 
   it('should show the server’s refusal beside the field it names', async () => {

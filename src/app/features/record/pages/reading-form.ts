@@ -12,7 +12,7 @@ import { startWith } from 'rxjs';
 
 import type { Accession, Plant } from '../../../../../shared/api/collection-answers.js';
 import { ApiError } from '../../../core/http/api-error';
-import { OfflineQueue } from '../../../core/offline/offline-queue';
+import { IS_ONLINE, OfflineQueue } from '../../../core/offline/offline-queue';
 import type { QueuedReadingBody } from '../../../core/offline/queue-item';
 import { readingSummary } from '../../queue/data/reading-summary';
 import { ChipCatalogue } from '../../reference-set/data/chip-catalogue';
@@ -106,6 +106,7 @@ export class ReadingForm {
   private readonly queue = inject(OfflineQueue);
   private readonly chips = inject(ChipCatalogue);
   private readonly sheets = inject(PlantSheetApi);
+  private readonly isOnline = inject(IS_ONLINE);
 
   protected readonly form = buildReadingForm();
   protected readonly methods = READING_METHODS;
@@ -132,6 +133,8 @@ export class ReadingForm {
   protected readonly saved = signal<ReadingDetail | null>(null);
   /** Whether the last save is waiting on this phone to be sent (no connection). */
   protected readonly queued = signal(false);
+  /** Whether the phone has no connection now, so the recorder knows before saving that it will wait on the phone. */
+  protected readonly offline = signal(!this.isOnline());
   /** Refusals that name no field on the form, shown above the save button. */
   protected readonly problems = signal<string[]>([]);
 
@@ -172,6 +175,7 @@ export class ReadingForm {
       this.form.controls.method.setValue('photo');
     }
     this.followChanges();
+    this.followConnection();
     // A remembered or drafted accession is known before the list arrives: its site follows once it does.
     effect(() => {
       const accession = this.accession();
@@ -284,6 +288,17 @@ export class ReadingForm {
     this.saving.set(false);
     this.queued.set(true);
     this.host.nativeElement.scrollIntoView?.({ block: 'start' });
+  }
+
+  private followConnection(): void {
+    if (typeof window === 'undefined') return;
+    const update = () => this.offline.set(!this.isOnline());
+    window.addEventListener('online', update);
+    window.addEventListener('offline', update);
+    this.destroyRef.onDestroy(() => {
+      window.removeEventListener('online', update);
+      window.removeEventListener('offline', update);
+    });
   }
 
   private rememberChoices(): void {
