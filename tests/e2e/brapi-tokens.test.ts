@@ -49,6 +49,8 @@ describe('BrAPI tokens on a phone', () => {
     assert.ok(body.result.data.some((g) => g.accessionNumber === 'HL-0001'), 'the demo accession is there');
 
     await page.getByRole('button', { name: 'Done' }).click();
+    // The panel closes in the app's own time after the click: wait for it to go, then check.
+    await page.getByTestId('issued-token').waitFor({ state: 'detached' });
     assert.equal(await page.getByTestId('issued-token').count(), 0, 'the token is gone from the screen once done');
     await page.reload();
     await page.locator('li.token', { hasText: 'Genebank sync script' }).getByText(/last used/).waitFor();

