@@ -28,29 +28,8 @@ export interface ProfileReading {
   photoHeight: number | null;
 }
 
-interface Row {
-  id: number;
-  accessionId: number;
-  characterId: number;
-  siteId: number;
-  siteCode: string;
-  plantId: number | null;
-  plantLabel: string | null;
-  observerId: number;
-  observerName: string;
-  status: string;
-  l: number;
-  a: number;
-  b: number;
-  hex: string;
-  season: string | null;
-  seasonYear: number | null;
-  observedAt: string;
-  photoId: number | null;
-  region: string | null;
-  photoWidth: number | null;
-  photoHeight: number | null;
-}
+/** A row as SQL gives it: CIELAB in three columns, the instant and the region as text. */
+type Row = Omit<ProfileReading, 'lab' | 'observedAt' | 'region'> & { l: number; a: number; b: number; observedAt: string; region: string | null };
 
 /**
  * The readings in force (not superseded) of one accession, or of the whole collection, with the
