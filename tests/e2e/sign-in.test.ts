@@ -41,11 +41,14 @@ describe('signing in as each demo role in Chromium', () => {
       await page.getByRole('heading', { name: LANDING[role].heading, exact: true }).waitFor();
       await page.locator('mat-toolbar', { hasText: role }).waitFor();
       if (role !== 'admin') await page.goto(`${app.url}/collection`);
+      // After a full page load the shell draws its navigation once the session is known: wait for
+      // the collection's first row, then read the links.
+      await page.getByRole('tab', { name: /Accessions/ }).waitFor();
+      await page.locator('text=HL-0001').first().waitFor();
+      await page.locator('mat-sidenav a', { hasText: 'Collection' }).waitFor();
       const nav = (await page.locator('mat-sidenav a').allInnerTexts()).join(' | ');
       for (const label of EXPECTED_NAV[role].shows) assert.match(nav, new RegExp(`\\b${label}\\b`), `${role} should see ${label}`);
       for (const label of EXPECTED_NAV[role].hides) assert.doesNotMatch(nav, new RegExp(`\\b${label}\\b`), `${role} should not see ${label}`);
-      await page.getByRole('tab', { name: /Accessions/ }).waitFor();
-      await page.locator('text=HL-0001').first().waitFor();
       await screenshot(page, `sign-in-${role}-desktop`);
 
       await page.getByRole('button', { name: 'Account menu' }).click();
