@@ -7,6 +7,8 @@ import { Site } from './site.entity.js';
  * (Alercia, Diulgheroff & Mackay 2015); see shared/api/collection.ts for the tag of each.
  */
 @Entity('accession')
+/** Unique on LOWER(accessionNumber): numbers differing only in case are refused (migration 1765030000000). */
+@Index('IDX_accession_number_lower', { synchronize: false })
 export class Accession {
   @PrimaryGeneratedColumn('increment') id: number;
   @Column('varchar', { length: 40, unique: true }) accessionNumber: string;

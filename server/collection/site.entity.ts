@@ -1,8 +1,10 @@
-import { Column, Entity, ManyToOne, OneToMany, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, Entity, Index, ManyToOne, OneToMany, PrimaryGeneratedColumn } from 'typeorm';
 import type { Season as SeasonDto, Site as SiteDto } from '../../shared/api/collection.js';
 
 /** A plot or garden, with its season scheme. */
 @Entity('site')
+/** Unique on LOWER(code): codes differing only in case are refused (migration 1765030000000). */
+@Index('IDX_site_code_lower', { synchronize: false })
 export class Site {
   @PrimaryGeneratedColumn('increment') id: number;
   @Column('varchar', { length: 20, unique: true }) code: string;

@@ -2,6 +2,8 @@
 // "HL-0001" is refused with a 409 problem naming the field, and nothing is written.
 import { after, before, describe, test } from 'node:test';
 import assert from 'node:assert/strict';
+import { Accession } from '../../server/collection/accession.entity.js';
+import { Site } from '../../server/collection/site.entity.js';
 import { assertProblem } from './assert-problem.js';
 import { rowCounts, signedInAs, startHarness, type Client, type Harness } from './harness.js';
 
@@ -41,5 +43,29 @@ describe('codes unique regardless of case', () => {
     conflictOn(await admin.post('/api/sites', { code: 'case', name: 'Lower plot', timezone: 'UTC', seasons }), 'code');
     const other = (await admin.post('/api/sites', { code: 'OTHR', name: 'Other plot', timezone: 'UTC', seasons }).expect(201)).body;
     conflictOn(await admin.patch(`/api/sites/${other.id}`, { code: 'Case' }), 'code');
+  });
+
+  // The database holds the same rule (unique indexes on LOWER(...)), so a writer that goes around the API is refused too.
+  const refusedByIndex = (err: unknown, index: string) => {
+    const e = err as { code?: string; message?: string };
+    assert.equal(e.code, 'SQLITE_CONSTRAINT_UNIQUE');
+    assert.ok(e.message?.includes(`index '${index}'`), e.message);
+    return true;
+  };
+
+  test('should refuse, in the database, an accession saved around the API whose number differs only in case', async () => {
+    const before = await rowCounts(h.ds);
+    const site = await h.ds.getRepository(Site).findOneByOrFail({ id: siteId });
+    await assert.rejects(h.ds.getRepository(Accession).save({ accessionNumber: 'hL-0001', name: 'Around the API', otherNames: [], site }), (e) => refusedByIndex(e, 'IDX_accession_number_lower'));
+    assert.deepEqual(await rowCounts(h.ds), before);
+    // The index compares case only: a different number still saves.
+    const saved = await h.ds.getRepository(Accession).save({ accessionNumber: 'HL-0009', name: 'Different number', otherNames: [], site });
+    await h.ds.getRepository(Accession).delete(saved.id);
+  });
+
+  test('should refuse, in the database, a site saved around the API whose code differs only in case', async () => {
+    const before = await rowCounts(h.ds);
+    await assert.rejects(h.ds.getRepository(Site).save({ code: 'cAsE', name: 'Around the API', timezone: 'UTC', latitude: null, longitude: null, elevationM: null }), (e) => refusedByIndex(e, 'IDX_site_code_lower'));
+    assert.deepEqual(await rowCounts(h.ds), before);
   });
 });
