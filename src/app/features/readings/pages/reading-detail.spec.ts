@@ -125,6 +125,27 @@ describe('ReadingDetailPage', () => {
     expect(el.querySelector('[data-testid="other-set-v2"]')?.textContent).toContain('In set v2 (current): F-201.004, plum L32 C30, ΔE00 0.6');
   });
 
+  it("should show the plant's earlier readings of the character on the grey surround, each with its code, day and observer, linked", async () => {
+    const earlier = [
+      { id: 31, observedAt: '2025-12-01T09:00:00Z', observerName: 'Tamsin Orrowby', hex: '#6d4a66', bestChip: 'F-101.002', status: 'approved' },
+      { id: 22, observedAt: '2025-06-01T09:00:00Z', observerName: 'Juno Pellbright', hex: '#6a4060', bestChip: 'F-101.004', status: 'approved' },
+    ];
+    const el = await open({ id: 4, role: 'recorder' }, { ...DETAIL, earlier } as ReadingDetail);
+    const section = el.querySelector('[data-testid="earlier-readings"]')!;
+    expect(section.textContent).toContain('Plant P1: earlier readings of Corm flesh, centre');
+    const items = section.querySelectorAll('.hl-swatch-surround li');
+    expect(items.length).toBe(2);
+    expect(items[0].textContent).toContain('F-101.002');
+    expect(items[0].textContent).toContain('Tamsin Orrowby');
+    expect(items[0].querySelector('time')?.getAttribute('datetime')).toBe('2025-12-01T09:00:00Z');
+    expect(items[1].querySelector('a')?.getAttribute('href')).toBe('/readings/22');
+  });
+
+  it('should say so when the plant has no earlier reading of the character', async () => {
+    const el = await open({ id: 4, role: 'recorder' }, { ...DETAIL, earlier: [] } as ReadingDetail);
+    expect(el.querySelector('[data-testid="earlier-readings"]')?.textContent).toContain('No earlier reading of this character.');
+  });
+
   it('should point a superseded reading to its correction and offer no correction of it', async () => {
     const el = await open({ id: 4, role: 'recorder' }, { ...DETAIL, supersededById: 41 });
     expect(el.textContent).toContain('Superseded by a correction');

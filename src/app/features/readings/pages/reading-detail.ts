@@ -7,6 +7,7 @@ import { RouterLink } from '@angular/router';
 
 import { AuthStore } from '../../../core/auth/auth-store';
 import { cutWarning, limitWords } from '../../record/data/cut-clock';
+import { EarlierReadings } from '../components/earlier-readings';
 import { PhotoCrop } from '../components/photo-crop';
 import { ReadingMatch } from '../components/reading-match';
 import { CUT_SECONDS_WARN, type ReadingDetail } from '../../../../../shared/api/reading-answers.js';
@@ -25,7 +26,7 @@ const CORRECTS_ANY = 'admin';
  */
 @Component({
   selector: 'hl-reading-detail',
-  imports: [LocalDateTimePipe, MatButtonModule, MatIconModule, MatProgressSpinnerModule, PhotoCrop, ReadingMatch, RouterLink],
+  imports: [EarlierReadings, LocalDateTimePipe, MatButtonModule, MatIconModule, MatProgressSpinnerModule, PhotoCrop, ReadingMatch, RouterLink],
   templateUrl: './reading-detail.html',
   styleUrl: './reading-detail.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

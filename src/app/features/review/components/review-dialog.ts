@@ -10,6 +10,7 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
 
 import { ApiError } from '../../../core/http/api-error';
+import { EarlierReadings } from '../../readings/components/earlier-readings';
 import { PhotoCrop } from '../../readings/components/photo-crop';
 import { ReadingMatch } from '../../readings/components/reading-match';
 import { LIGHT_WORDS, METHOD_WORDS, STATUS_WORDS, wordsFor } from '../../readings/data/reading-words';
@@ -45,7 +46,7 @@ const COMMENT_LABELS: Record<Exclude<ReviewDecision, 'approve'>, { label: string
  */
 @Component({
   selector: 'hl-review-dialog',
-  imports: [LocalDateTimePipe, MatButtonModule, MatDialogModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressBarModule, PhotoCrop, ReactiveFormsModule, ReadingMatch, RouterLink],
+  imports: [EarlierReadings, LocalDateTimePipe, MatButtonModule, MatDialogModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressBarModule, PhotoCrop, ReactiveFormsModule, ReadingMatch, RouterLink],
   templateUrl: './review-dialog.html',
   styleUrl: './review-dialog.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
