@@ -11,6 +11,8 @@ import {
   type ProfileFlag,
   type ProfileOutlier,
   type ProfilePhoto,
+  type ProfileChip,
+  type ProfileSetChip,
 } from '../../shared/api/profile-answers.js';
 import { deltaE00 } from '../../shared/colour/delta-e.js';
 import { displayHex } from '../../shared/colour/display-hex.js';
@@ -50,6 +52,7 @@ export async function accessionProfile(deps: ProfileDeps, accessionId: number, s
   const readings = await profileReadings(deps.ds, accessionId);
   const byCharacter = groupBy(readings, (r) => r.characterId);
   const siteCodes = new Map(readings.map((r) => [r.siteId, r.siteCode]));
+  const sets = (await deps.referenceSets.list()).sort((a, b) => a.version - b.version);
 
   const profiles: CharacterProfile[] = [];
   for (const [characterId, rows] of byCharacter) {
@@ -57,7 +60,12 @@ export async function accessionProfile(deps: ProfileDeps, accessionId: number, s
     if (!character.colour) continue;
     const centre = labMedian(basisOf(rows).readings.map((r) => r.lab));
     const match = await deps.referenceSets.match(centre, 1, set.summary.id);
-    profiles.push(characterProfile(character, rows, match.matches[0]!, siteCodes));
+    const setChips: ProfileSetChip[] = [];
+    for (const s of sets) {
+      const best = s.id === set.summary.id ? match.matches[0]! : (await deps.referenceSets.match(centre, 1, s.id)).matches[0]!;
+      setChips.push({ setId: s.id, current: s.current, shown: s.id === set.summary.id, chip: profileChip(best) });
+    }
+    profiles.push({ ...characterProfile(character, rows, match.matches[0]!, siteCodes), setChips });
   }
   const order = [...characters.values()].sort((a, b) => a.sortOrder - b.sortOrder || a.id - b.id).map((c) => c.id);
   profiles.sort((a, b) => order.indexOf(a.characterId) - order.indexOf(b.characterId));
@@ -72,6 +80,11 @@ export async function accessionProfile(deps: ProfileDeps, accessionId: number, s
     descriptors: await describeDescriptors(deps.ds, accessionId),
     computedAt: new Date().toISOString(),
   };
+}
+
+/** A matched chip as the record shows it, with its verdict. */
+function profileChip(chip: { code: string; name: string; hex: string; deltaE00: number }): ProfileChip {
+  return { code: chip.code, name: chip.name, hex: chip.hex, deltaE00: chip.deltaE00, verdict: verdictFor(chip.deltaE00) };
 }
 
 interface CharacterLike {
@@ -89,7 +102,7 @@ export function characterProfile(
   rows: readonly ProfileReading[],
   chip: { code: string; name: string; hex: string; deltaE00: number },
   siteCodes: ReadonlyMap<number, string>,
-): CharacterProfile {
+): Omit<CharacterProfile, 'setChips'> {
   const { basis, readings } = basisOf(rows);
   const centre = labMedian(readings.map((r) => r.lab));
   const threshold = character.driftThreshold;
@@ -137,7 +150,7 @@ export function characterProfile(
     threshold,
     basis,
     centre: profileColour(centre),
-    chip: { code: chip.code, name: chip.name, hex: chip.hex, deltaE00: chip.deltaE00, verdict: verdictFor(chip.deltaE00) },
+    chip: profileChip(chip),
     spreadDeltaE00: spread,
     nReadings: readings.length,
     nObservers: new Set(readings.map((r) => r.observerId)).size,

@@ -31,6 +31,16 @@ export interface ProfileChip {
   verdict: Verdict;
 }
 
+/** The nearest chip to a centre in one stored reference set. */
+export interface ProfileSetChip {
+  setId: string;
+  /** Whether this is the set new readings are matched against now. */
+  current: boolean;
+  /** Whether this is the set the record's `chip` comes from (the one asked for, else the current one). */
+  shown: boolean;
+  chip: ProfileChip;
+}
+
 /** The centre of one season group (a season of one season-year). */
 export interface ProfileSeason {
   season: string;
@@ -97,6 +107,8 @@ export interface CharacterProfile {
   basis: ProfileBasis;
   centre: ProfileColour;
   chip: ProfileChip;
+  /** The accepted colour's nearest chip in every stored set, oldest version first, so v1 and v2 codes are both at hand. */
+  setChips: ProfileSetChip[];
   /** Mean ΔE00 of the basis readings from the centre. */
   spreadDeltaE00: number;
   nReadings: number;

@@ -69,6 +69,23 @@ describe('the characterisation record of an accession', () => {
   });
   after(() => h.close());
 
+  test("should give the accepted colour's nearest chip in v1 and in v2, marking the set the record is shown in and the current one", async () => {
+    for (const query of ['', '?setId=v2']) {
+      const p = await profile(reviewer, ids.accession, query);
+      const c = characterOf(p, ids.character);
+      assert.deepEqual(c.setChips.map((s) => [s.setId, s.current, s.shown]), [['v1', true, p.referenceSet.id === 'v1'], ['v2', false, p.referenceSet.id === 'v2']], `profile${query}`);
+      for (const s of c.setChips) {
+        // The same exact search the Match page runs, asked of each set in turn.
+        const best = (await reviewer.post('/api/match', { lab: c.centre.lab, setId: s.setId, k: 1 }).expect(200)).body.matches[0];
+        assert.equal(s.chip.code, best.code, `${s.setId} chip`);
+        close(s.chip.deltaE00, colorjsDE00(c.centre.lab, best.lab), 1e-6, `${s.setId} ΔE00 against colorjs.io`);
+      }
+      assert.equal(c.setChips.find((s) => s.shown)!.chip.code, c.chip.code);
+      // v2 codes never reuse v1's (reference-colors/README.md): v1 field chips end at F-189.
+      assert.ok(Number(c.setChips[1]!.chip.code.slice(2, 5)) > 189, c.setChips[1]!.chip.code);
+    }
+  });
+
   test('should centre a character on the per-channel median, not the mean, and match the centre to the nearest chip', async () => {
     const c = characterOf(await profile(reviewer, ids.accession), ids.character);
     assert.equal(c.basis, 'current');

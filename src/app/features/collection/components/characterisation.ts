@@ -9,7 +9,7 @@ import type { CharacterProfile, ProfilePhoto } from '../../../../../shared/api/p
 import { UnitPreference } from '../../../core/units/unit-preference';
 import { deltaEText, labText, lchText } from '../../reference-set/data/chip-words';
 import { CHARACTERISATION_XLSX_URL, ProfileApi, profilePdfUrl } from '../data/profile-api';
-import { chipText, countsText, cropStyle, descriptorText, stabilityText } from '../data/profile-words';
+import { chipText, countsText, cropStyle, descriptorText, setChipText, stabilityText } from '../data/profile-words';
 
 /** How many outliers a character lists before "and n more" (the rest are on the Readings page). */
 const OUTLIERS_SHOWN = 5;
@@ -43,6 +43,7 @@ export class Characterisation {
   protected readonly labText = labText;
   protected readonly lchText = lchText;
   protected readonly chipText = chipText;
+  protected readonly setChipText = setChipText;
   protected readonly countsText = countsText;
   protected readonly stabilityText = stabilityText;
   protected readonly descriptorText = descriptorText;

@@ -1,5 +1,5 @@
 import type { CharacterProfile, DescriptorSummary, ProfilePhoto } from '../../../../../shared/api/profile-answers.js';
-import { chipText, countsText, cropStyle, descriptorText, stabilityText } from './profile-words';
+import { chipText, countsText, cropStyle, descriptorText, setChipText, stabilityText } from './profile-words';
 
 const flag = (kind: 'season-drift' | 'site-difference') => ({ kind, label: 'x', deltaE00: 3, pValue: 0.001, reason: 'r' });
 
@@ -12,6 +12,13 @@ describe('profile words', () => {
   it('should name the chip with its ΔE00 and verdict', () => {
     const chip = { code: 'F-182.063', name: 'deep red-purple', hex: '#6a2050', deltaE00: 0.617, verdict: 'indistinguishable' as const };
     expect(chipText({ chip })).toBe('F-182.063 deep red-purple, ΔE00 0.62 (indistinguishable)');
+  });
+
+  it("should name each set's nearest chip, marking the current set and the one shown above", () => {
+    const chip = { code: 'F-301.017', name: 'plum 40 · 22', hex: '#6a2050', deltaE00: 0.414, verdict: 'indistinguishable' as const };
+    expect(setChipText({ setId: 'v2', current: true, shown: false, chip })).toBe('In set v2 (current): F-301.017 plum 40 · 22, ΔE00 0.41');
+    expect(setChipText({ setId: 'v1', current: true, shown: true, chip })).toBe('In set v1 (current, shown above): F-301.017 plum 40 · 22, ΔE00 0.41');
+    expect(setChipText({ setId: 'v1', current: false, shown: false, chip })).toBe('In set v1: F-301.017 plum 40 · 22, ΔE00 0.41');
   });
 
   it('should call a character steady when nothing is flagged, else count each kind of flag', () => {

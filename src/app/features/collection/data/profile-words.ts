@@ -1,5 +1,5 @@
 // Words for the characterisation record, kept out of the templates so they can be tested.
-import type { CharacterProfile, DescriptorSummary, ProfilePhoto } from '../../../../../shared/api/profile-answers.js';
+import type { CharacterProfile, DescriptorSummary, ProfilePhoto, ProfileSetChip } from '../../../../../shared/api/profile-answers.js';
 import type { UnitSystem } from '../../../../../shared/units/units.js';
 import { deltaEText, formatNumber } from '../../reference-set/data/chip-words';
 
@@ -13,6 +13,12 @@ export function countsText(c: Pick<CharacterProfile, 'basis' | 'nReadings' | 'nO
 /** "F-182.063 deep red-purple, ΔE00 0.62 (indistinguishable)". */
 export function chipText(c: Pick<CharacterProfile, 'chip'>): string {
   return `${c.chip.code} ${c.chip.name}, ΔE00 ${deltaEText(c.chip.deltaE00)} (${c.chip.verdict})`;
+}
+
+/** "In set v2 (current): F-301.017 plum 40 · 22, ΔE00 0.41", saying which set the record above is shown in. */
+export function setChipText(s: ProfileSetChip): string {
+  const marks = [s.current ? 'current' : '', s.shown ? 'shown above' : ''].filter(Boolean);
+  return `In set ${s.setId}${marks.length ? ` (${marks.join(', ')})` : ''}: ${s.chip.code} ${s.chip.name}, ΔE00 ${deltaEText(s.chip.deltaE00)}`;
 }
 
 /** "steady across 3 season groups and 2 sites", or how many differences are flagged. */
