@@ -1,12 +1,12 @@
 import { readFileSync } from 'node:fs';
-import { createChipIndex } from '../shared/colour/chip-index.js';
 import { chipName, pickerOrder } from '../shared/colour/chip-name.js';
 import { OBSERVER_NAME, WHITE_NAME } from '../shared/colour/constants.js';
 import { displayHex } from '../shared/colour/display-hex.js';
-import { labFromTuple, labToLch, type Lab, type LabTuple } from '../shared/colour/lab.js';
-import { FIELD_CODE_PATTERN, type ReferenceChip, type ReferenceSetFile } from '../shared/colour/reference-set.js';
+import { labFromTuple, labToLch, type Lab } from '../shared/colour/lab.js';
+import { FIELD_CODE_PATTERN, type ReferenceSetFile } from '../shared/colour/reference-set.js';
 import { fieldChipPositions, type FieldChipSettings } from './field-chips.js';
 import { latticePoints } from './lattice-v2.js';
+import { distinct, fineUnderField, numberChips, roundLab, type ChipMaker } from './set-assembly.js';
 import { inTissueRegion, TISSUE_REGIONS_V2 } from '../shared/colour/tissue-regions.js';
 
 /** Identity of set v2. A later change is a new id and file, never an edit of this one. */
@@ -35,34 +35,6 @@ export const SET_V2 = {
   field: { seed: 0x46494532, candidates: 40000, tissueSpacing: 7.6, otherSpacing: 9.6 } satisfies FieldChipSettings,
 } as const;
 
-/** Largest number of chips a three-digit code can count. */
-const CODE_CAPACITY = 999;
-
-function round2(v: number): number {
-  const r = Math.round(v * 100) / 100;
-  return r === 0 ? 0 : r;
-}
-
-function roundLab(lab: Lab): LabTuple {
-  return [round2(lab.l), round2(lab.a), round2(lab.b)];
-}
-
-function pad3(n: number): string {
-  if (n > CODE_CAPACITY) throw new Error(`more than ${CODE_CAPACITY} chips in one group`);
-  return String(n).padStart(3, '0');
-}
-
-/** Removes repeats of the same rounded CIELAB, keeping the first. */
-function distinct(tuples: LabTuple[]): LabTuple[] {
-  const seen = new Set<string>();
-  return tuples.filter((t) => {
-    const key = t.join(',');
-    if (seen.has(key)) return false;
-    seen.add(key);
-    return true;
-  });
-}
-
 function inTissue(lab: Lab): boolean {
   const lch = labToLch(lab);
   return TISSUE_REGIONS_V2.some((region) => inTissueRegion(lch, region));
@@ -89,22 +61,11 @@ export function fineChipsV2(): Lab[] {
  */
 export function buildReferenceSetV2(): ReferenceSetFile {
   const field = distinct(fieldChipPositions(SET_V2.field, TISSUE_REGIONS_V2).map(roundLab)).sort(pickerOrder);
-  const fieldKeys = new Set(field.map((t) => t.join(',')));
-  const fine = distinct(fineChipsV2().map(roundLab)).filter((t) => !fieldKeys.has(t.join(',')));
-  const fieldIndex = createChipIndex(field.map(labFromTuple));
-  const byParent: LabTuple[][] = field.map(() => []);
-  for (const t of fine) byParent[fieldIndex.nearest(labFromTuple(t), 1)[0].index].push(t);
-
-  const first = lastV1FieldNumber() + 1;
-  const chips: ReferenceChip[] = [];
-  const chip = (code: string, parent: string | null, lab: LabTuple, parentLab: LabTuple | null): ReferenceChip => {
+  const byParent = fineUnderField(field, fineChipsV2());
+  const chip: ChipMaker = (code, parent, lab, parentLab) => {
     const shown = displayHex(labFromTuple(lab));
     return { code, parent, name: chipName(labFromTuple(lab), parentLab && labFromTuple(parentLab)), lab, hex: shown.hex, inGamut: shown.inGamut };
   };
-  field.forEach((lab, f) => {
-    const code = `F-${pad3(first + f)}`;
-    chips.push(chip(code, null, lab, null));
-    byParent[f].sort(pickerOrder).forEach((fineLab, i) => chips.push(chip(`${code}.${pad3(i + 1)}`, code, fineLab, lab)));
-  });
+  const chips = numberChips(field, byParent, lastV1FieldNumber() + 1, pickerOrder, chip);
   return { ...SET_V2_IDENTITY, white: WHITE_NAME, observer: OBSERVER_NAME, chips };
 }

@@ -1,10 +1,10 @@
-import { createChipIndex } from '../shared/colour/chip-index.js';
 import { OBSERVER_NAME, WHITE_NAME } from '../shared/colour/constants.js';
 import { displayHex } from '../shared/colour/display-hex.js';
-import { labFromTuple, labToLch, type Lab, type LabTuple } from '../shared/colour/lab.js';
+import { labFromTuple, labToLch, type LabTuple } from '../shared/colour/lab.js';
 import type { ReferenceChip, ReferenceSetFile } from '../shared/colour/reference-set.js';
 import { fieldChipPositions } from './field-chips.js';
 import { fineLatticeChips } from './fine-lattice.js';
+import { distinct, fineUnderField, numberChips, roundLab } from './set-assembly.js';
 import { v1HueFamilyOfLch, V1_HUE_FAMILY_ORDER, v1StoredName } from './v1-names.js';
 
 /** Identity of the set this generator writes. A new version is a new id and file, never an edit. */
@@ -14,19 +14,6 @@ export const SET_IDENTITY = {
   name: 'Hueledger reference set, version 1',
   generatedBy: 'reference-colors/generate.ts',
 } as const;
-
-/** Largest number of chips a three-digit code can count. */
-const CODE_CAPACITY = 999;
-
-/** Rounds to two decimals as the file stores them (−0 written as 0). */
-function round2(v: number): number {
-  const r = Math.round(v * 100) / 100;
-  return r === 0 ? 0 : r;
-}
-
-function roundLab(lab: Lab): LabTuple {
-  return [round2(lab.l), round2(lab.a), round2(lab.b)];
-}
 
 /**
  * Card order: v1's hue family (V1_HUE_FAMILY_ORDER), then lightness from light to dark, then chroma from
@@ -45,25 +32,9 @@ function cardOrder(p: LabTuple, q: LabTuple): number {
   );
 }
 
-function pad3(n: number): string {
-  if (n > CODE_CAPACITY) throw new Error(`more than ${CODE_CAPACITY} chips in one group`);
-  return String(n).padStart(3, '0');
-}
-
 function chip(code: string, parent: string | null, lab: LabTuple): ReferenceChip {
   const display = displayHex(labFromTuple(lab));
   return { code, parent, name: v1StoredName(labFromTuple(lab)), lab, hex: display.hex, inGamut: display.inGamut };
-}
-
-/** Removes repeats of the same rounded CIELAB, keeping the first. */
-function distinct(tuples: LabTuple[]): LabTuple[] {
-  const seen = new Set<string>();
-  return tuples.filter((t) => {
-    const key = t.join(',');
-    if (seen.has(key)) return false;
-    seen.add(key);
-    return true;
-  });
 }
 
 /**
@@ -72,20 +43,8 @@ function distinct(tuples: LabTuple[]): LabTuple[] {
  */
 export function buildReferenceSet(): ReferenceSetFile {
   const field = distinct(fieldChipPositions().map(roundLab)).sort(cardOrder);
-  const fieldKeys = new Set(field.map((t) => t.join(',')));
-  const fine = distinct(fineLatticeChips().map(roundLab)).filter((t) => !fieldKeys.has(t.join(',')));
-
-  // Each fine chip's parent is its nearest field chip by ΔE00 (ties: the earlier field code).
-  const fieldIndex = createChipIndex(field.map(labFromTuple));
-  const byParent: LabTuple[][] = field.map(() => []);
-  for (const t of fine) byParent[fieldIndex.nearest(labFromTuple(t), 1)[0].index].push(t);
-
-  const chips: ReferenceChip[] = [];
-  field.forEach((lab, f) => {
-    const code = `F-${pad3(f + 1)}`;
-    chips.push(chip(code, null, lab));
-    byParent[f].sort(cardOrder).forEach((fineLab, i) => chips.push(chip(`${code}.${pad3(i + 1)}`, code, fineLab)));
-  });
+  const byParent = fineUnderField(field, fineLatticeChips());
+  const chips = numberChips(field, byParent, 1, cardOrder, chip);
   return { ...SET_IDENTITY, white: WHITE_NAME, observer: OBSERVER_NAME, chips };
 }
 

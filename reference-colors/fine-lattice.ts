@@ -1,6 +1,7 @@
 import { isInSrgbGamut } from '../shared/colour/display-hex.js';
 import { labToLch, type Lab } from '../shared/colour/lab.js';
 import { inTissueRegion, TISSUE_REGIONS } from '../shared/colour/tissue-regions.js';
+import { BCC_STEPS, CHROMA_REACH, COVERING_FRACTION } from './bcc-lattice.js';
 import { unwarp, X_MAX } from './warp.js';
 
 /*
@@ -26,21 +27,8 @@ export const FINE_LATTICE = {
   /** Dense cube edge in warped units (≈ ΔE00): covering radius 0.559·e. */
   denseEdge: 2.78,
   /** Largest |y|, |z| in warped units: beyond the chroma of any sRGB colour. */
-  chromaReach: 48,
+  chromaReach: CHROMA_REACH,
 } as const;
-
-/** Covering radius of the BCC lattice as a fraction of its cube edge, √5/4. */
-const COVERING_FRACTION = Math.sqrt(5) / 4;
-
-const DENSE_STEPS: readonly (readonly [number, number, number])[] = [
-  ...[-1, 1].flatMap((i) => [-1, 1].flatMap((j) => [-1, 1].map((k) => [i, j, k] as const))),
-  [2, 0, 0],
-  [-2, 0, 0],
-  [0, 2, 0],
-  [0, -2, 0],
-  [0, 0, 2],
-  [0, 0, -2],
-];
 
 interface Site {
   lab: Lab;
@@ -80,7 +68,7 @@ export function fineLatticeChips(edge: number = FINE_LATTICE.denseEdge): Lab[] {
   // than that from a region (or from the gamut) is never any of its colours' nearest: probing the
   // 14 neighbour directions at that distance decides whether the point is needed at the edge.
   const probe = (i: number, j: number, k: number, scale: number, test: (lab: Lab) => boolean) =>
-    DENSE_STEPS.some(([di, dj, dk]) => {
+    BCC_STEPS.some(([di, dj, dk]) => {
       const f = (COVERING_FRACTION * scale * 2) / Math.hypot(di, dj, dk);
       return test(unwarp([(i + f * di) * half, (j + f * dj) * half, (k + f * dk) * half]));
     });
@@ -95,7 +83,7 @@ export function fineLatticeChips(edge: number = FINE_LATTICE.denseEdge): Lab[] {
         const site = sites.get(key(i, j, k));
         if (!site) continue;
         const near = (scale: number) =>
-          DENSE_STEPS.map(([di, dj, dk]) => sites.get(key(i + scale * di, j + scale * dj, k + scale * dk))).filter((s) => s !== undefined);
+          BCC_STEPS.map(([di, dj, dk]) => sites.get(key(i + scale * di, j + scale * dj, k + scale * dk))).filter((s) => s !== undefined);
         const dense =
           site.inTissue || (near(1).some((s) => s.inTissue) && probe(i, j, k, 1, inAnyRegion));
         if (!dense && !onSparse(i, j, k)) continue;

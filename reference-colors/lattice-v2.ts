@@ -1,5 +1,6 @@
 import { isInSrgbGamut } from '../shared/colour/display-hex.js';
 import type { Lab } from '../shared/colour/lab.js';
+import { BCC_STEPS, CHROMA_REACH, COVERING_FRACTION } from './bcc-lattice.js';
 import { unwarp, X_MAX } from './warp.js';
 
 /*
@@ -15,23 +16,6 @@ import { unwarp, X_MAX } from './warp.js';
  * radius of the part it lies in: there is no seam to mend, only a few extra chips at the borders.
  * The two edges need not be in a whole ratio, unlike v1's dense and sparse sub-lattice.
  */
-
-/** Covering radius of the BCC lattice as a fraction of its cube edge, √5/4. */
-const COVERING_FRACTION = Math.sqrt(5) / 4;
-
-/** Largest |y|, |z| in warped units: beyond the chroma of any sRGB colour. */
-const CHROMA_REACH = 48;
-
-/** The 14 nearest-neighbour directions of the BCC lattice, in half-edge steps. */
-const STEPS: readonly (readonly [number, number, number])[] = [
-  ...[-1, 1].flatMap((i) => [-1, 1].flatMap((j) => [-1, 1].map((k) => [i, j, k] as const))),
-  [2, 0, 0],
-  [-2, 0, 0],
-  [0, 2, 0],
-  [0, -2, 0],
-  [0, 0, 2],
-  [0, 0, -2],
-];
 
 interface Site {
   lab: Lab;
@@ -65,9 +49,9 @@ export function latticePoints(edge: number, wanted: (lab: Lab) => boolean, offse
     }
   }
   const neighbours = (i: number, j: number, k: number) =>
-    STEPS.map(([di, dj, dk]) => sites.get(key(i + di, j + dj, k + dk))).filter((s) => s !== undefined);
+    BCC_STEPS.map(([di, dj, dk]) => sites.get(key(i + di, j + dj, k + dk))).filter((s) => s !== undefined);
   const probe = (i: number, j: number, k: number, test: (lab: Lab) => boolean) =>
-    STEPS.some(([di, dj, dk]) => {
+    BCC_STEPS.some(([di, dj, dk]) => {
       const f = (COVERING_FRACTION * 2) / Math.hypot(di, dj, dk);
       return test(at(i + f * di, j + f * dj, k + f * dk));
     });

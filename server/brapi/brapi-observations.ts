@@ -66,33 +66,29 @@ function planOf(f: ObservationFilter): Plan {
     if (id === null) return none;
     if (id !== undefined) both(rSql, oSql, id);
   }
+  // A variable or an observation id names one side: a colour part of readings, or descriptor values.
+  const onlyReadings = (sql: string, value: number, part: ColourPart) => {
+    values = false;
+    r.where.push(sql);
+    r.params.push(value);
+    r.parts = r.parts.filter((p) => p === part);
+  };
+  const onlyValues = (sql: string, value: number) => {
+    readings = false;
+    o.where.push(sql);
+    o.params.push(value);
+  };
   if (f.observationVariableDbId !== undefined) {
     const v = parseVariableDbId(f.observationVariableDbId);
     if (!v) return none;
-    if (v.kind === 'colour') {
-      values = false;
-      r.where.push('r."characterId" = ?');
-      r.params.push(v.characterId);
-      r.parts = r.parts.filter((p) => p === v.part);
-    } else {
-      readings = false;
-      o.where.push('o."descriptorId" = ?');
-      o.params.push(v.descriptorId);
-    }
+    if (v.kind === 'colour') onlyReadings('r."characterId" = ?', v.characterId, v.part);
+    else onlyValues('o."descriptorId" = ?', v.descriptorId);
   }
   if (f.observationDbId !== undefined) {
     const id = parseObservationDbId(f.observationDbId);
     if (!id) return none;
-    if (id.kind === 'r') {
-      values = false;
-      r.where.push('r."id" = ?');
-      r.params.push(id.id);
-      r.parts = r.parts.filter((p) => p === id.part);
-    } else {
-      readings = false;
-      o.where.push('o."id" = ?');
-      o.params.push(id.id);
-    }
+    if (id.kind === 'r') onlyReadings('r."id" = ?', id.id, id.part);
+    else onlyValues('o."id" = ?', id.id);
   }
   if (f.seasonDbId !== undefined) {
     const season = parseSeasonDbId(f.seasonDbId);

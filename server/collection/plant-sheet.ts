@@ -20,25 +20,24 @@ async function findPlant(m: EntityManager, id: number): Promise<Plant> {
   return plant;
 }
 
-function skipDto(s: PlantSkip | undefined): SheetSkip | null {
-  return s ? { id: s.id, reason: s.reason, at: s.createdAt.toISOString() } : null;
+function skipDto(s: PlantSkip): SheetSkip {
+  return { id: s.id, reason: s.reason, at: s.createdAt.toISOString() };
+}
+
+/**
+ * What a colour row and a descriptor row share: done when this season has an entry (a reading or a
+ * value), else skipped when a skip is recorded, else to do; the skip is shown only when not done.
+ */
+function entryState<E, V>(entry: E | undefined, skip: PlantSkip | undefined, show: (entry: E) => V): { status: SheetColour['status']; value: V | null; skip: SheetSkip | null } {
+  if (entry) return { status: 'done', value: show(entry), skip: null };
+  return { status: skip ? 'skipped' : 'todo', value: null, skip: skip ? skipDto(skip) : null };
 }
 
 function colourRow(c: Character, state: PlantState): SheetColour {
-  const r = state.readings.get(c.id);
-  const skip = state.characterSkips.get(c.id);
-  return {
-    characterId: c.id,
-    code: c.code,
-    label: c.label,
-    organ: c.organ,
-    caution: c.caution,
-    status: r ? 'done' : skip ? 'skipped' : 'todo',
-    reading: r
-      ? { id: r.id, method: r.method, hex: r.hex, bestChipCode: r.bestChipCode, bestChipName: r.bestChipName, bestChipHex: r.bestChipHex, deltaE00: r.deltaE00, observedAt: r.observedAt.toISOString() }
-      : null,
-    skip: r ? null : skipDto(skip),
-  };
+  const { status, value, skip } = entryState(state.readings.get(c.id), state.characterSkips.get(c.id), (r) => ({
+    id: r.id, method: r.method, hex: r.hex, bestChipCode: r.bestChipCode, bestChipName: r.bestChipName, bestChipHex: r.bestChipHex, deltaE00: r.deltaE00, observedAt: r.observedAt.toISOString(),
+  }));
+  return { characterId: c.id, code: c.code, label: c.label, organ: c.organ, caution: c.caution, status, reading: value, skip };
 }
 
 function formattedValue(d: Descriptor, o: Observation) {
@@ -51,18 +50,10 @@ function formattedValue(d: Descriptor, o: Observation) {
 }
 
 function descriptorRow(d: Descriptor, state: PlantState): SheetDescriptor {
-  const o = state.observations.get(d.id);
-  const skip = state.descriptorSkips.get(d.id);
-  return {
-    descriptorId: d.id,
-    code: d.code,
-    label: d.label,
-    kind: d.kind,
-    caution: d.caution,
-    status: o ? 'done' : skip ? 'skipped' : 'todo',
-    value: o ? { observationId: o.id, formatted: formattedValue(d, o), observedAt: o.observedAt.toISOString() } : null,
-    skip: o ? null : skipDto(skip),
-  };
+  const { status, value, skip } = entryState(state.observations.get(d.id), state.descriptorSkips.get(d.id), (o) => ({
+    observationId: o.id, formatted: formattedValue(d, o), observedAt: o.observedAt.toISOString(),
+  }));
+  return { descriptorId: d.id, code: d.code, label: d.label, kind: d.kind, caution: d.caution, status, value, skip };
 }
 
 /**
@@ -134,6 +125,6 @@ export async function createSkip(ds: DataSource, actor: Actor, user: User, plant
       m.create(PlantSkip, { plantId, characterId: body.characterId ?? null, descriptorId: body.descriptorId ?? null, season: window.season, seasonYear: window.seasonYear, reason: body.reason, userId: user.id }),
     );
     await recordAudit(m, actor, 'plant.skip.created', `plant:${plantId}`, { skipId: skip.id, characterId: skip.characterId, descriptorId: skip.descriptorId, reason: skip.reason, ...window });
-    return skipDto(skip)!;
+    return skipDto(skip);
   });
 }
