@@ -33,6 +33,7 @@ function provenanceOf(r: Reading): ReadingProvenance {
     uniform: r.uniform,
     correction: r.correction,
     pipeline: r.pipeline,
+    cluster: r.cluster,
     instrument: r.instrument,
     source: r.source,
   };

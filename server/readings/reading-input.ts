@@ -17,6 +17,7 @@ import { Site } from '../collection/site.entity.js';
 import { AppError, type FieldError } from '../core/app-error.js';
 import type { PhotoFiles } from '../photos/photo-files.js';
 import { Photo } from '../photos/photo.entity.js';
+import type { PhotoSample } from '../../shared/api/photo-answers.js';
 import { samplePhoto } from '../photos/photos.js';
 import type { LoadedSet, ReferenceSets } from '../reference-sets/reference-sets.js';
 import type { Reading } from './reading.entity.js';
@@ -37,12 +38,12 @@ export type ReadingFields = CreateReadingBody;
 interface TakenColour {
   lab: Lab;
   source: string | null;
-  provenance: Pick<ReadingValues, 'photoId' | 'region' | 'neutralRegion' | 'pixelCount' | 'pixelsDropped' | 'spreadDeltaE00' | 'uniform' | 'correction' | 'pipeline'>;
+  provenance: Pick<ReadingValues, 'photoId' | 'region' | 'neutralRegion' | 'pixelCount' | 'pixelsDropped' | 'spreadDeltaE00' | 'uniform' | 'correction' | 'pipeline' | 'cluster'>;
   /** A photo's sample has matched already (against the same set). */
   best?: { code: string; name: string; hex: string; deltaE00: number; inputHex: string; inGamut: boolean };
 }
 
-const NO_PHOTO: TakenColour['provenance'] = { photoId: null, region: null, neutralRegion: null, pixelCount: null, pixelsDropped: null, spreadDeltaE00: null, uniform: null, correction: null, pipeline: null };
+const NO_PHOTO: TakenColour['provenance'] = { photoId: null, region: null, neutralRegion: null, pixelCount: null, pixelsDropped: null, spreadDeltaE00: null, uniform: null, correction: null, pipeline: null, cluster: null };
 
 function refuse(errors: FieldError[]): AppError {
   return AppError.badRequest(`The reading is not valid: ${errors.map((e) => `${e.field} ${e.message}`).join('; ')}.`, errors);
@@ -106,6 +107,7 @@ async function takeColour(m: EntityManager, src: ColourSources, set: LoadedSet, 
       const sample = await samplePhoto(m.connection, src.photos, (lab, k) => src.referenceSets.match(lab, k, set.summary.id), photo.photoId, { region: photo.region, neutral: photo.neutral, k: 1 }).catch((err: unknown) => {
         throw asPhotoFieldError(err);
       });
+      if (photo.cluster !== undefined) return clusterColour(photo, sample);
       const best = sample.matches[0]!;
       return {
         lab: labFromTuple(sample.lab),
@@ -120,11 +122,43 @@ async function takeColour(m: EntityManager, src: ColourSources, set: LoadedSet, 
           uniform: sample.uniform,
           correction: sample.correction,
           pipeline: sample.pipeline,
+          cluster: null,
         },
         best: { code: best.code, name: best.name, hex: best.hex, deltaE00: best.deltaE00, inputHex: sample.hex, inGamut: sample.inGamut },
       };
     }
   }
+}
+
+/**
+ * One colour of a region that is not even, as the photo page listed it: the sampling is seeded and
+ * deterministic, so the index the recorder chose names the same colour here. 400 on `photo.cluster`
+ * when the region is even or holds fewer colours.
+ */
+function clusterColour(photo: NonNullable<ReadingFields['photo']>, sample: PhotoSample): TakenColour {
+  const index = photo.cluster!;
+  const cluster = sample.clusters[index];
+  if (!cluster) {
+    const held = sample.clusters.length === 0 ? 'the region is one colour (or too even to split)' : `the region holds ${sample.clusters.length} colours, numbered from 0`;
+    throw refuse([{ field: 'photo.cluster', message: `names colour ${index}, but ${held}` }]);
+  }
+  return {
+    lab: labFromTuple(cluster.lab),
+    source: null,
+    provenance: {
+      photoId: photo.photoId,
+      region: photo.region,
+      neutralRegion: photo.neutral?.region ?? null,
+      pixelCount: sample.pixelCount,
+      pixelsDropped: sample.pixelsDropped,
+      spreadDeltaE00: sample.spreadDeltaE00,
+      uniform: sample.uniform,
+      correction: sample.correction,
+      pipeline: sample.pipeline,
+      cluster: { index, of: sample.clusters.length, share: cluster.share, spreadDeltaE00: cluster.spreadDeltaE00 },
+    },
+    best: { code: cluster.chip.code, name: cluster.chip.name, hex: cluster.chip.hex, deltaE00: cluster.chip.deltaE00, inputHex: cluster.hex, inGamut: cluster.inGamut },
+  };
 }
 
 /**

@@ -1,5 +1,5 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, OneToOne, PrimaryGeneratedColumn } from 'typeorm';
-import type { Light, ReadingMethod, ReadingStatus } from '../../shared/api/reading-answers.js';
+import type { Light, ReadingCluster, ReadingMethod, ReadingStatus } from '../../shared/api/reading-answers.js';
 import type { SampleCorrection } from '../../shared/api/photo-answers.js';
 import type { Region } from '../../shared/photo/region.js';
 import { User } from '../auth/user.entity.js';
@@ -68,6 +68,8 @@ export class Reading {
   @Column('simple-json', { nullable: true }) correction: SampleCorrection | null;
   /** Sampling rules version of a photo reading. */
   @Column('varchar', { length: 40, nullable: true }) pipeline: string | null;
+  /** A photo reading of one colour of a region that held several (a stripe, the ground); null for the whole region's mean. */
+  @Column('simple-json', { nullable: true }) cluster: ReadingCluster | null;
   /** instrument: its make or name. */
   @Column('varchar', { length: 80, nullable: true }) instrument: string | null;
   /** chip: the code picked; swatch: the hex tapped. */

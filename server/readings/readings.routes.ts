@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { createReadingBody, listReadingsQuery, supersedeReadingBody } from '../../shared/api/readings.js';
+import { createReadingBody, createReadingsBody, listReadingsQuery, supersedeReadingBody } from '../../shared/api/readings.js';
 import { actorOf, allow, currentUser, signedIn } from '../core/access.js';
 import { AppError } from '../core/app-error.js';
 import type { AppContext } from '../core/context.js';
@@ -10,7 +10,7 @@ import { readingsXlsx, writeReadingsCsv } from './reading-export.js';
 import { importReadings } from './reading-import.js';
 import { getReadingDetail } from './reading-detail.js';
 import { listReadings } from './reading-list.js';
-import { createReading, supersedeReading, type ReadingsDeps } from './readings.js';
+import { createReading, createReadings, supersedeReading, type ReadingsDeps } from './readings.js';
 
 /** The multipart field of the import file. */
 export const IMPORT_FIELD = 'file';
@@ -41,6 +41,11 @@ export function readingsRoutes(ctx: AppContext): Router {
   router.post('/', OBSERVERS, idempotent(ctx), async (req, res) => {
     const reading = await createReading(deps, actorOf(req), currentUser(req), parse(createReadingBody, req.body));
     res.status(201).location(`/api/readings/${reading.id}`).json(reading);
+  });
+
+  // Several readings of one plant at once (the colours of a striped region), all or nothing.
+  router.post('/batch', OBSERVERS, idempotent(ctx), async (req, res) => {
+    res.status(201).json(await createReadings(deps, actorOf(req), currentUser(req), parse(createReadingsBody, req.body)));
   });
 
   router.get('/export.csv', signedIn, async (req, res) => {

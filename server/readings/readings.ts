@@ -3,10 +3,11 @@
 // keeps its row; every change is an audit event. No req/res here.
 import type { EntityManager } from 'typeorm';
 import type { ReadingDetail } from '../../shared/api/reading-answers.js';
-import type { CreateReadingBody, SupersedeReadingBody } from '../../shared/api/readings.js';
+import type { CreateReadingBody, CreateReadingsBody, SupersedeReadingBody } from '../../shared/api/readings.js';
 import { recordAudit, type Actor } from '../audit/audit.js';
 import type { User } from '../auth/user.entity.js';
 import { AppError } from '../core/app-error.js';
+import type { CreatedReadings } from '../../shared/api/reading-answers.js';
 import { getReadingDetail } from './reading-detail.js';
 import { prepareReading, type ColourSources, type ReadingValues } from './reading-input.js';
 import { Reading } from './reading.entity.js';
@@ -50,6 +51,34 @@ export async function createReading(deps: ReadingsDeps, actor: Actor, observer: 
   const values = await prepareReading(deps.ds.manager, deps, body, observer.id);
   const id = await deps.ds.transaction((m) => insertReading(m, actor, values));
   return getReadingDetail(deps, id);
+}
+
+/**
+ * Records several readings together, all or nothing: every one is prepared (checked, sampled,
+ * matched) before any is written, and a refusal of any names its field under `readings.<i>.`, so
+ * the ground colour of a striped region is never saved without its stripe.
+ */
+export async function createReadings(deps: ReadingsDeps, actor: Actor, observer: User, body: CreateReadingsBody): Promise<CreatedReadings> {
+  const prepared: ReadingValues[] = [];
+  for (const [i, reading] of body.readings.entries()) {
+    prepared.push(await prepareReading(deps.ds.manager, deps, reading, observer.id).catch((err: unknown) => { throw underReading(err, i); }));
+  }
+  const batch = prepared.length > 1 ? { batchOf: prepared.length } : {};
+  const ids = await deps.ds.transaction(async (m) => {
+    const created: number[] = [];
+    for (const values of prepared) created.push(await insertReading(m, actor, values, batch));
+    return created;
+  });
+  const readings: ReadingDetail[] = [];
+  for (const id of ids) readings.push(await getReadingDetail(deps, id));
+  return { readings };
+}
+
+/** A refusal of one reading of a batch, its fields named under `readings.<i>.`. */
+function underReading(err: unknown, i: number): unknown {
+  if (!(err instanceof AppError) || !err.errors) return err;
+  const errors = err.errors.map((e) => ({ ...e, field: `readings.${i}.${e.field}` }));
+  return new AppError(err.status, err.title, `Reading ${i + 1} of the batch: ${err.detail ?? err.title} Nothing was saved.`, errors, err.slug, err.extensions);
 }
 
 /** Whether a user may correct a reading: admins any; recorders and trainers only their own; reviewers none. */

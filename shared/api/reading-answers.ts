@@ -44,6 +44,28 @@ export interface ReadingPhotoSource {
   photoId: number;
   region: Region;
   neutral?: { region: Region; lab?: LabTuple };
+  /** One colour of a region that is not even: the index into the sample's `clusters` (0 = the largest share). */
+  cluster?: number;
+}
+
+/** The most readings one batch saves together (a region splits into at most three colours). */
+export const READINGS_BATCH_MAX = 3;
+
+/** `POST /api/readings/batch` answer: every reading saved, in the order sent. */
+export interface CreatedReadings {
+  readings: ReadingDetail[];
+}
+
+/** Which colour of a region a photo reading took, when the region held several (`ReadingPhotoSource.cluster`). */
+export interface ReadingCluster {
+  /** Index among the region's colours, largest share first (0 = the ground of a striped petiole). */
+  index: number;
+  /** How many colours the region split into. */
+  of: number;
+  /** Share of the region's kept pixels in this colour, 0–1. */
+  share: number;
+  /** Mean ΔE00 of the colour's pixels from it. */
+  spreadDeltaE00: number;
 }
 
 /** `POST /api/readings` body. Which colour field is needed depends on `method`. */
@@ -113,6 +135,8 @@ export interface ReadingProvenance {
   uniform: boolean | null;
   correction: SampleCorrection | null;
   pipeline: string | null;
+  /** A photo reading of one colour of a region that held several; null for a reading of the whole region. */
+  cluster: ReadingCluster | null;
   instrument: string | null;
   /** chip: the chip picked; swatch: the hex tapped. */
   source: string | null;

@@ -11,6 +11,7 @@ import {
   READING_NOTES_MAX,
   READING_SORTS,
   READING_STATUSES,
+  READINGS_BATCH_MAX,
   READINGS_PAGE_SIZE_DEFAULT,
   READINGS_PAGE_SIZE_MAX,
   SUPERSEDE_REASON_MAX,
@@ -42,7 +43,14 @@ const readingFields = z.object({
   hex: z.string().refine(isHex, { message: 'must be a colour like #7b3f6e' }).optional(),
   chipCode: chipCode.optional(),
   eyeChipCode: chipCode.nullish(),
-  photo: z.object({ photoId: id, region: regionSchema, neutral: z.object({ region: regionSchema, lab: labTuple.optional() }).optional() }).optional(),
+  photo: z
+    .object({
+      photoId: id,
+      region: regionSchema,
+      neutral: z.object({ region: regionSchema, lab: labTuple.optional() }).optional(),
+      cluster: z.number({ message: 'must be a whole number (0 = the colour with the largest share)' }).int({ message: 'must be a whole number (0 = the colour with the largest share)' }).min(0, { message: 'must be 0 or more' }).max(READINGS_BATCH_MAX - 1, { message: `must be at most ${READINGS_BATCH_MAX - 1}` }).optional(),
+    })
+    .optional(),
   instrument: optionalText(80),
   light: z.enum(LIGHTS, { message: `must be one of ${LIGHTS.join(', ')}` }),
   secondsSinceCut: z.number({ message: 'must be a number of seconds' }).int({ message: 'must be whole seconds' }).min(0).max(CUT_SECONDS_MAX).nullish(),
@@ -68,6 +76,27 @@ function methodRules<T extends z.infer<typeof readingFields>>(body: T, ctx: z.Re
 /** `POST /api/readings`. */
 export const createReadingBody = readingFields.strict().superRefine(methodRules);
 export type CreateReadingBody = z.infer<typeof createReadingBody>;
+
+/**
+ * `POST /api/readings/batch`: up to three readings saved together, all or nothing, such as the
+ * ground and the stripe colour of one photo region; each names its own character, never the same
+ * one twice.
+ */
+export const createReadingsBody = z
+  .object({
+    readings: z
+      .array(createReadingBody, { message: 'must be a list of readings' })
+      .min(1, { message: 'must hold at least one reading' })
+      .max(READINGS_BATCH_MAX, { message: `must hold at most ${READINGS_BATCH_MAX} readings` }),
+  })
+  .strict()
+  .superRefine((body, ctx) => {
+    body.readings.forEach((r, i) => {
+      const first = body.readings.findIndex((o) => o.characterId === r.characterId);
+      if (first < i) ctx.addIssue({ code: 'custom', path: ['readings', i, 'characterId'], message: `is the character of reading ${first + 1} too: each colour is a reading of its own character` });
+    });
+  });
+export type CreateReadingsBody = z.infer<typeof createReadingsBody>;
 
 /** `POST /api/readings/:id/supersede`. */
 export const supersedeReadingBody = readingFields

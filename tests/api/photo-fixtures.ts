@@ -92,3 +92,15 @@ export function filesUnder(dir: string): string[] {
     return statSync(p).isDirectory() ? filesUnder(p).map((f) => path.join(name, f)) : [name];
   });
 }
+
+/** Vertical stripes repeating the given colours and widths (pixels) across a raw RGB image, as on a striped petiole. */
+export function stripedPixels(width: number, height: number, pattern: readonly { rgb: Rgb8; width: number }[]): Buffer {
+  const period = pattern.reduce((n, p) => n + p.width, 0);
+  const px = Buffer.alloc(width * height * 3);
+  for (let x = 0; x < width; x++) {
+    let offset = x % period;
+    const band = pattern.find((p) => (offset -= p.width) < 0)!;
+    for (let y = 0; y < height; y++) px.set(band.rgb, (y * width + x) * 3);
+  }
+  return px;
+}

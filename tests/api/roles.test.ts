@@ -160,6 +160,7 @@ const ROUTES: readonly RouteCase[] = [
   { method: 'POST', path: '/api/calibration/screenings', access: EVERYONE, ok: 201, body: () => ({ screenedOn: '2026-01-05', method: 'other', result: 'normal' }) },
   { method: 'GET', path: '/api/readings', access: EVERYONE, ok: 200 },
   { method: 'POST', path: '/api/readings', access: OBSERVERS, ok: 201, body: (f) => f.readingBody() },
+  { method: 'POST', path: '/api/readings/batch', access: OBSERVERS, ok: 201, body: (f) => ({ readings: [f.readingBody()] }) },
   { method: 'GET', path: '/api/readings/export.csv', access: EVERYONE, ok: 200 },
   { method: 'GET', path: '/api/readings/export.xlsx', access: EVERYONE, ok: 200 },
   { method: 'POST', path: '/api/readings/import', access: OBSERVERS, ok: 201, csv: (f) => f.readingsCsv() },
