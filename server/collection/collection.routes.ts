@@ -16,6 +16,7 @@ import { idParam, parse } from '../core/validate.js';
 import { createPlant, getAccession, updateAccession, updatePlant } from './accessions.js';
 import { createCharacter, updateCharacter } from './characters.js';
 import { createAccession, listAccessions, listCharacters, listSites } from './collection.js';
+import { noQuery } from '../../shared/api/profile.js';
 import { mcpdCsv } from './mcpd-export.js';
 import { createSite, replaceSeasons, updateSite } from './sites.js';
 
@@ -64,7 +65,8 @@ export function collectionRoutes(ctx: AppContext): Router {
   });
 
   // Fixed paths before `/accessions/:id`, or ":id" would swallow them.
-  router.get('/accessions/mcpd.csv', signedIn, async (_req, res) => {
+  router.get('/accessions/mcpd.csv', signedIn, async (req, res) => {
+    parse(noQuery, req.query, 'query');
     const csv = await mcpdCsv(ctx.ds);
     res.setHeader('Content-Disposition', `attachment; filename="accessions-mcpd-${new Date().toISOString().slice(0, 10)}.csv"`);
     res.type('text/csv; charset=utf-8').send(csv);

@@ -32,10 +32,10 @@ const timezone = z
   .regex(/^[A-Za-z][A-Za-z0-9_+-]*(\/[A-Za-z0-9_+-]+)*$/, { message: 'must be an IANA time zone like Pacific/Fiji' })
   .refine(isTimeZone, { message: 'is not a time zone this server knows (IANA names like Pacific/Fiji)' });
 
-const latitude = z.number({ message: 'must be a number of degrees' }).min(-90, { message: 'must be from −90 to 90' }).max(90, { message: 'must be from −90 to 90' });
-const longitude = z.number({ message: 'must be a number of degrees' }).min(-180, { message: 'must be from −180 to 180' }).max(180, { message: 'must be from −180 to 180' });
+const latitude = z.number({ message: 'must be a number of degrees' }).min(-90, { message: 'must be from −90 to 90 degrees' }).max(90, { message: 'must be from −90 to 90 degrees' });
+const longitude = z.number({ message: 'must be a number of degrees' }).min(-180, { message: 'must be from −180 to 180 degrees' }).max(180, { message: 'must be from −180 to 180 degrees' });
 /** Metres above sea level: from the Dead Sea shore to above any cropland (our own bounds). */
-const elevationM = z.number({ message: 'must be a number of metres' }).min(-500, { message: 'must be from −500 to 9000' }).max(9000, { message: 'must be from −500 to 9000' });
+const elevationM = z.number({ message: 'must be a number of metres' }).min(-500, { message: 'must be from −500 to 9000 metres' }).max(9000, { message: 'must be from −500 to 9000 metres' });
 
 const seasonInput = z.object({ name: text(40), start: monthDay, end: monthDay }, { message: 'must be {name, start, end}' });
 

@@ -5,8 +5,8 @@
 import { after, before, describe, test } from 'node:test';
 import assert from 'node:assert/strict';
 import { parse } from 'csv-parse/sync';
-import { assertProblem } from './assert-problem.js';
-import { Client, signedInAs, startHarness, type Harness } from './harness.js';
+import { assertInvalidFields, assertProblem } from './assert-problem.js';
+import { Client, rowCounts, signedInAs, startHarness, type Harness } from './harness.js';
 
 /** MCPD V.2.1 field names in the order the standard lists them, typed out again here rather than imported. */
 const MCPD_V21 = 'PUID,INSTCODE,ACCENUMB,COLLNUMB,COLLCODE,COLLNAME,COLLINSTADDRESS,COLLMISSID,GENUS,SPECIES,SPAUTHOR,SUBTAXA,SUBTAUTHOR,CROPNAME,ACCENAME,ACQDATE,ORIGCTY,COLLSITE,DECLATITUDE,LATITUDE,DECLONGITUDE,LONGITUDE,COORDUNCERT,COORDDATUM,GEOREFMETH,ELEVATION,COLLDATE,BREDCODE,BREDNAME,SAMPSTAT,ANCEST,COLLSRC,DONORCODE,DONORNAME,DONORNUMB,OTHERNUMB,DUPLSITE,DUPLINSTNAME,STORAGE,MLSSTAT,ACCEURL,REMARKS';
@@ -114,5 +114,29 @@ describe('GET /api/accessions/mcpd.csv', () => {
 
   test('should not be taken for an accession id, and need a session', async () => {
     assertProblem(await (await new Client(h.app).prime()).get('/api/accessions/mcpd.csv'), 401);
+  });
+
+  test('should refuse parameters it does not take with problem+json', async () => {
+    assertInvalidFields(await reviewer.get('/api/accessions/mcpd.csv?site=MCP'), 'query');
+  });
+
+  test('should refuse collecting coordinates out of range on create and update, naming the field and unit, writing nothing', async () => {
+    const admin = await signedInAs(h, 'admin');
+    const siteId = (await admin.get('/api/sites').expect(200)).body.find((s: { code: string }) => s.code === 'MCP').id;
+    const before = await rowCounts(h.ds);
+    const created = await admin.post('/api/accessions', { accessionNumber: 'MC-0099', name: 'Out of range', siteId, collectingLatitude: 91, collectingLongitude: -180.5, collectingElevationM: 9500 });
+    assertInvalidFields(created, 'collectingLatitude', 'collectingLongitude', 'collectingElevationM');
+    const messages = Object.fromEntries(assertProblem(created, 400).errors!.map((e) => [e.field, e.message]));
+    assert.match(messages['collectingLatitude']!, /degrees/);
+    assert.match(messages['collectingLongitude']!, /degrees/);
+    assert.match(messages['collectingElevationM']!, /metres/);
+    assert.deepEqual(await rowCounts(h.ds), before);
+    const typed = await admin.post('/api/accessions', { accessionNumber: 'MC-0099', name: 'Wrong type', siteId, collectingLatitude: '16 S' });
+    assert.ok(assertProblem(typed, 400).errors?.some((e) => e.field === 'collectingLatitude' && /degrees/.test(e.message)), typed.text);
+    const id = (await admin.get('/api/accessions').expect(200)).body.find((a: { accessionNumber: string }) => a.accessionNumber === 'MC-0001').id;
+    assertInvalidFields(await admin.patch(`/api/accessions/${id}`, { collectingElevationM: -600, name: 'Renamed' }), 'collectingElevationM');
+    assert.deepEqual(await rowCounts(h.ds), before);
+    const after = (await admin.get(`/api/accessions/${id}`).expect(200)).body;
+    assert.deepEqual([after.name, after.collectingElevationM], ['Comma, the Elder', 240.4]);
   });
 });
