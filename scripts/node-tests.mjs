@@ -31,9 +31,10 @@ if (!files.length) {
   process.exit(1);
 }
 
-// The browser-test files of this run share one freshly seeded demo data folder, copied per server
-// (tests/e2e/server-process.ts makes it on first use); removed at the end.
-const templateDir = mkdtempSync(path.join(tmpdir(), 'hueledger-e2e-template-'));
+// The files of this run share seeded data folders (an API database, with and without the demo, and
+// a browser-test server's folder), each made by the first file that needs it and copied by the
+// others (tests/shared-template.ts); removed at the end.
+const templateDir = mkdtempSync(path.join(tmpdir(), 'hueledger-test-template-'));
 
 /** Runs one file in node:test (TAP) and resolves with its output, counts and wall time. */
 function runFile(file) {
@@ -41,7 +42,7 @@ function runFile(file) {
     const started = Date.now();
     const child = spawn(process.execPath, ['--import', 'tsx', '--test', '--test-reporter=tap', file], {
       cwd: root,
-      env: { ...process.env, TSX_TSCONFIG_PATH: 'server/tsconfig.json', HUELEDGER_E2E_TEMPLATE_DIR: templateDir },
+      env: { ...process.env, TSX_TSCONFIG_PATH: 'server/tsconfig.json', HUELEDGER_TEST_TEMPLATE_DIR: templateDir },
       stdio: ['ignore', 'pipe', 'pipe'],
     });
     let out = '';

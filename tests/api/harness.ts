@@ -1,4 +1,4 @@
-import { mkdtempSync, rmSync } from 'node:fs';
+import { cpSync, mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import request from 'supertest';
@@ -14,6 +14,7 @@ import { openDatabase } from '../../server/data-source.js';
 import { loadReferenceSets } from '../../server/reference-sets/load-reference-sets.js';
 import { seedDemo } from '../../server/demo/seed-demo.js';
 import { startMailer, type Mailer } from '../../server/mail/mailer.js';
+import { sharedTemplate } from '../shared-template.js';
 
 /** A real app on a fresh SQLite file in a temporary folder, with the real fake-SMTP mailer. */
 export interface Harness {
@@ -41,21 +42,48 @@ export interface HarnessOptions {
   logError?: (err: unknown) => void;
 }
 
-/** Starts a harness on a fresh SQLite file (or the one in `dir`). */
-export async function startHarness(opts: HarnessOptions = {}): Promise<Harness> {
-  const dir = opts.dir ?? mkdtempSync(path.join(tmpdir(), 'hueledger-test-'));
-  const dbFile = path.join(dir, 'hueledger.sqlite');
-  const ds = await openDatabase(dbFile);
+/** Migrates the database in `ds` and loads the catalogue, the reference sets and, when asked, the demo. */
+async function seed(ds: DataSource, demo: boolean): Promise<void> {
   await seedCharacterCatalogue(ds);
   await seedDescriptorCatalogue(ds);
   await loadReferenceSets(ds, { log: () => {} });
-  if (opts.demo) await seedDemo(ds);
+  if (demo) await seedDemo(ds);
+}
+
+/**
+ * A seeded data folder shared by the run's test files (tests/shared-template.ts): the same database
+ * `seed` makes, made once per run instead of once per harness; null when the file runs alone.
+ */
+function seededTemplate(demo: boolean): Promise<string | null> {
+  return sharedTemplate(demo ? 'api-demo' : 'api', async (into) => {
+    const ds = await openDatabase(path.join(into, 'hueledger.sqlite'));
+    await seed(ds, demo);
+    await ds.destroy(); // closing the last connection checkpoints SQLite's write-ahead log into the file
+  });
+}
+
+/** Starts a harness on a fresh SQLite file (or the one in `dir`). */
+export async function startHarness(opts: HarnessOptions = {}): Promise<Harness> {
+  let dir = opts.dir;
+  let seeded = false;
+  if (!dir) {
+    dir = mkdtempSync(path.join(tmpdir(), 'hueledger-test-'));
+    const template = await seededTemplate(opts.demo ?? false);
+    if (template) {
+      cpSync(template, dir, { recursive: true });
+      seeded = true;
+    }
+  }
+  const dbFile = path.join(dir, 'hueledger.sqlite');
+  const ds = await openDatabase(dbFile);
+  if (!seeded) await seed(ds, opts.demo ?? false);
   const mailer = await startMailer(ds, null, 'Hueledger <no-reply@hueledger.invalid>');
   const app = createApp({ dataSource: ds, mailer, sessionSecret: TEST_SECRET, publicUrl: PUBLIC_URL, logError: opts.logError ?? (() => {}), dataDir: dir });
   const shutdown = async () => {
     await mailer.close();
     await ds.destroy();
   };
+  const harnessDir = dir;
   return {
     dir,
     dbFile,
@@ -68,7 +96,7 @@ export async function startHarness(opts: HarnessOptions = {}): Promise<Harness> 
     },
     async restart() {
       await shutdown();
-      return startHarness({ dir, logError: opts.logError });
+      return startHarness({ dir: harnessDir, logError: opts.logError });
     },
   };
 }

@@ -4,6 +4,7 @@ import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { sharedTemplate } from '../shared-template.js';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 
@@ -100,39 +101,18 @@ export async function startServerProcess(opts: ServerOptions = {}): Promise<Serv
 }
 
 /**
- * Where scripts/node-tests.mjs lets the browser-test files of one run share a freshly seeded demo
- * data folder: migrating, loading the reference sets and seeding the demo is the slowest part of a
- * server's start, and its result is the same for every file of the run. Unset when a file runs alone.
- */
-const TEMPLATE_ENV = 'HUELEDGER_E2E_TEMPLATE_DIR';
-
-/**
  * A data folder as the real server leaves it after its first start with the demo scenario, made once
- * per run by whichever file asks first (mkdir is the lock); null when there is none to share.
+ * per run and copied by every browser-test file (tests/shared-template.ts); null when there is none to share.
  */
-async function demoTemplate(): Promise<string | null> {
-  const base = process.env[TEMPLATE_ENV];
-  if (!base) return null;
-  const data = path.join(base, 'data');
-  const ready = path.join(base, 'ready');
-  const failed = path.join(base, 'failed');
-  try {
-    mkdirSync(path.join(base, 'lock'), { recursive: false });
-  } catch {
-    // Another file is making it: wait for its word.
-    const deadline = Date.now() + START_LIMIT_MS;
-    while (!existsSync(ready) && !existsSync(failed) && Date.now() < deadline) await new Promise((r) => setTimeout(r, 250));
-    return existsSync(ready) ? data : null;
-  }
-  try {
-    const server = await startServerProcess({ dataDir: data });
-    await server.stop(); // a clean stop checkpoints SQLite's write-ahead log into the file
-    writeFileSync(ready, '');
-    return data;
-  } catch (err) {
-    writeFileSync(failed, String(err));
-    return null;
-  }
+function demoTemplate(): Promise<string | null> {
+  return sharedTemplate(
+    'e2e-demo',
+    async (data) => {
+      const server = await startServerProcess({ dataDir: data });
+      await server.stop(); // a clean stop checkpoints SQLite's write-ahead log into the file
+    },
+    START_LIMIT_MS,
+  );
 }
 
 /** Starts the built app with the demo scenario (from the run's seeded copy when there is one); needs `npm run build` first. */
