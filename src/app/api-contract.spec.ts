@@ -3,11 +3,11 @@
 // specs) when a client method's parameter drifts from the schema; vitest runs them as no-ops.
 import type { AdminApi } from './features/admin/data/admin-api';
 import type { CalibrationApi } from './features/calibration/data/calibration-api';
-import type { CollectionApi } from './features/collection/data/collection-api';
-import type { DescriptorsApi } from './features/descriptors/data/descriptors-api';
-import type { ReadingsApi } from './features/readings/data/readings-api';
-import type { PhotosApi } from './features/record/data/photos-api';
-import type { ReferenceSetApi } from './features/reference-set/data/reference-set-api';
+import type { CollectionApi } from './shared/collection/collection-api';
+import type { DescriptorsApi } from './shared/descriptors/descriptors-api';
+import type { ReadingsApi } from './shared/readings/readings-api';
+import type { PhotosApi } from './shared/photos/photos-api';
+import type { ReferenceSetApi } from './shared/chips/reference-set-api';
 import type { ReviewsApi } from './features/review/data/reviews-api';
 import type { AuthApi } from './core/auth/auth-api';
 import type { AcceptInvitationBody, ChangePasswordBody, ConfirmResetBody, InviteBody, LoginBody, UpdateUserBody } from '../../shared/api/auth.js';

@@ -38,6 +38,12 @@ export const routes: Routes = [
         loadChildren: () => import('./features/collection/collection.routes').then((m) => m.COLLECTION_ROUTES),
       },
       {
+        path: 'record/descriptors',
+        title: 'Descriptors · Hueledger',
+        canActivate: [roleGuard('recorder', 'admin', 'trainer')],
+        loadComponent: () => import('./features/descriptors/pages/descriptor-entry-page').then((m) => m.DescriptorEntryPage),
+      },
+      {
         path: 'record',
         canActivate: [roleGuard('recorder', 'admin', 'trainer')],
         loadChildren: () => import('./features/record/record.routes').then((m) => m.RECORD_ROUTES),

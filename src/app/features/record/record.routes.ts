@@ -1,6 +1,6 @@
 import { Routes } from '@angular/router';
 
-/** The Record section: the reading form, the photo page it sends photo readings through, the plant sheet and descriptor entry; the parent route limits the roles. */
+/** The Record section: the reading form, the photo page it sends photo readings through, and the plant sheet (descriptor entry, under the same address, is its own feature); the parent route limits the roles. */
 export const RECORD_ROUTES: Routes = [
   {
     path: '',
@@ -17,10 +17,5 @@ export const RECORD_ROUTES: Routes = [
     path: 'plant/:plantId',
     title: 'Plant sheet · Hueledger',
     loadComponent: () => import('./pages/plant-sheet').then((m) => m.PlantSheetPage),
-  },
-  {
-    path: 'descriptors',
-    title: 'Descriptors · Hueledger',
-    loadComponent: () => import('../descriptors/pages/descriptor-entry-page').then((m) => m.DescriptorEntryPage),
   },
 ];

@@ -2,7 +2,7 @@ import { ChangeDetectionStrategy, Component, computed, input, signal } from '@an
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 
 import type { ObserverResult } from '../../../../../shared/api/calibration-answers.js';
-import { formatNumber } from '../../reference-set/data/chip-words';
+import { formatNumber } from '../../../shared/chips/chip-words';
 import { biasWords } from '../data/bias-words';
 import { biasPlot, plotCoordinate, PLOT_MARGIN, PLOT_SIZE } from '../data/bias-plot';
 

@@ -1,7 +1,7 @@
 import { TestBed } from '@angular/core/testing';
 
-import { ChipSet } from '../../reference-set/data/chip-catalogue';
-import { TEST_CHIPS, TEST_SETS } from '../../reference-set/testing/chip-fixtures';
+import { ChipSet } from '../../../shared/chips/chip-catalogue';
+import { TEST_CHIPS, TEST_SETS } from '../../../shared/testing/chip-fixtures';
 import { ChipChooser } from './chip-chooser';
 
 describe('ChipChooser', () => {

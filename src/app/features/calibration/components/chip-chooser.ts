@@ -3,9 +3,9 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 
 import type { ChipDto } from '../../../../../shared/api/reference-set-answers.js';
-import { SwatchGrid } from '../../reference-set/components/swatch-grid';
-import type { ChipSet } from '../../reference-set/data/chip-catalogue';
-import { familyLabel } from '../../reference-set/data/chip-words';
+import { SwatchGrid } from '../../../shared/chips/swatch-grid';
+import type { ChipSet } from '../../../shared/chips/chip-catalogue';
+import { familyLabel } from '../../../shared/chips/chip-words';
 
 /**
  * Two steps to one chip: the field chips by hue family, then the fine chips of the field chip

@@ -3,8 +3,8 @@ import { MatIconModule } from '@angular/material/icon';
 
 import type { MyCalibrationResult } from '../../../../../shared/api/calibration-answers.js';
 import { verdictFor } from '../../../../../shared/colour/verdict.js';
-import { VerdictMark } from '../../reference-set/components/verdict-mark';
-import { deltaEText } from '../../reference-set/data/chip-words';
+import { VerdictMark } from '../../../shared/chips/verdict-mark';
+import { deltaEText } from '../../../shared/chips/chip-words';
 import { biasNumbers, biasWords } from '../data/bias-words';
 import { certificatePdfUrl } from '../data/calibration-api';
 import { kappaWords } from '../data/session-words';

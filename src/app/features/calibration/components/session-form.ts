@@ -11,7 +11,7 @@ import { catchError, of } from 'rxjs';
 
 import { CALIBRATION_DEFAULT_THRESHOLDS, CALIBRATION_TITLE_MAX } from '../../../../../shared/api/calibration-answers.js';
 import { refusalMessage } from '../../../core/http/field-errors';
-import { ReferenceSetApi } from '../../reference-set/data/reference-set-api';
+import { ReferenceSetApi } from '../../../shared/chips/reference-set-api';
 import { CalibrationApi } from '../data/calibration-api';
 
 /** Today as YYYY-MM-DD in the browser's own time zone (the day the trainer sees). */

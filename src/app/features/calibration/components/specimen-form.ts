@@ -13,9 +13,9 @@ import { LAB_INPUT_LIMITS } from '../../../../../shared/api/reference-set-answer
 import type { Region } from '../../../../../shared/photo/region.js';
 import { ApiError } from '../../../core/http/api-error';
 import { refusalMessage } from '../../../core/http/field-errors';
-import { PhotoCanvas } from '../../record/components/photo-canvas';
-import { PhotosApi } from '../../record/data/photos-api';
-import { normaliseCode } from '../../reference-set/data/chip-words';
+import { PhotoCanvas } from '../../../shared/photos/photo-canvas';
+import { PhotosApi } from '../../../shared/photos/photos-api';
+import { normaliseCode } from '../../../shared/chips/chip-words';
 import { CalibrationApi } from '../data/calibration-api';
 
 /** Adds one specimen to a session: a label and its reference colour from an instrument's L*a*b*, a chip code, or a photo region. */

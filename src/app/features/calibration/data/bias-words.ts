@@ -1,6 +1,6 @@
 // An observer's bias (mean picked chip minus reference, [ΔL*, Δa*, Δb*]) in plain words.
 import type { LabTuple } from '../../../../../shared/colour/lab.js';
-import { formatNumber } from '../../reference-set/data/chip-words';
+import { formatNumber } from '../../../shared/chips/chip-words';
 
 /**
  * A shift smaller than this (CIELAB units on one axis) is not called a bias. Our own choice: about

@@ -1,8 +1,8 @@
 import { Injectable, inject } from '@angular/core';
 import { Observable, map, shareReplay, switchMap } from 'rxjs';
 
-import { ChipSet } from '../../reference-set/data/chip-catalogue';
-import { ReferenceSetApi } from '../../reference-set/data/reference-set-api';
+import { ChipSet } from '../../../shared/chips/chip-catalogue';
+import { ReferenceSetApi } from '../../../shared/chips/reference-set-api';
 
 /** The chips of the set a session was run against (not always the current one), loaded once per set. */
 @Injectable({ providedIn: 'root' })

@@ -2,7 +2,7 @@
 import type { CalibrationSessionSummary } from '../../../../../shared/api/calibration-answers.js';
 import type { Role } from '../../../../../shared/api/roles.js';
 import { KAPPA_BAND_LABELS, type KappaBand } from '../../../../../shared/stats/landis-koch.js';
-import { formatNumber } from '../../reference-set/data/chip-words';
+import { formatNumber } from '../../../shared/chips/chip-words';
 
 /** Whether a role runs sessions and reads everybody's results. */
 export function runsSessions(role: Role | null): boolean {

@@ -5,7 +5,7 @@ import { ACCEPTABILITY_THRESHOLD_DE00 } from '../../../../../shared/colour/const
 import { deltaE00 } from '../../../../../shared/colour/delta-e.js';
 import { displayHex } from '../../../../../shared/colour/display-hex.js';
 import { labFromTuple, type Lab } from '../../../../../shared/colour/lab.js';
-import { formatNumber } from '../../reference-set/data/chip-words';
+import { formatNumber } from '../../../shared/chips/chip-words';
 import { simulate, VISION_KINDS, VISION_LABELS, type VisionKind } from './vision-simulation';
 
 /** One neighbour as seen by one kind of observer. */

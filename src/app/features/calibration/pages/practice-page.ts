@@ -7,10 +7,10 @@ import type { ChipDto } from '../../../../../shared/api/reference-set-answers.js
 import { deltaE00 } from '../../../../../shared/colour/delta-e.js';
 import { labFromTuple } from '../../../../../shared/colour/lab.js';
 import { verdictFor, type Verdict } from '../../../../../shared/colour/verdict.js';
-import { ScreenCaution } from '../../reference-set/components/screen-caution';
-import { VerdictMark } from '../../reference-set/components/verdict-mark';
-import { ChipCatalogue } from '../../reference-set/data/chip-catalogue';
-import { deltaEText } from '../../reference-set/data/chip-words';
+import { ScreenCaution } from '../../../shared/chips/screen-caution';
+import { VerdictMark } from '../../../shared/chips/verdict-mark';
+import { ChipCatalogue } from '../../../shared/chips/chip-catalogue';
+import { deltaEText } from '../../../shared/chips/chip-words';
 import { CalibrationTabs } from '../components/calibration-tabs';
 import { ChipChooser } from '../components/chip-chooser';
 import { newSeed, practiceTarget, type PracticeTarget } from '../data/practice-round';

@@ -6,7 +6,7 @@ import { catchError, forkJoin, of } from 'rxjs';
 
 import { SCREENING_METHOD_LABELS, type Certification, type ObserverStandingRow, type Screening } from '../../../../../shared/api/calibration-answers.js';
 import { AuthStore } from '../../../core/auth/auth-store';
-import { deltaEText, formatNumber } from '../../reference-set/data/chip-words';
+import { deltaEText, formatNumber } from '../../../shared/chips/chip-words';
 import { CalibrationTabs } from '../components/calibration-tabs';
 import { ScreeningForm } from '../components/screening-form';
 import { CalibrationApi, certificatePdfUrl } from '../data/calibration-api';

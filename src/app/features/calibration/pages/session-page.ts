@@ -11,7 +11,7 @@ import type { CalibrationResults, CalibrationSessionDetail, SpecimenView } from 
 import { AuthStore } from '../../../core/auth/auth-store';
 import { ApiError } from '../../../core/http/api-error';
 import { ConfirmDialog, type ConfirmDialogData } from '../../../shared/confirm-dialog';
-import { labText } from '../../reference-set/data/chip-words';
+import { labText } from '../../../shared/chips/chip-words';
 import { CalibrationTabs } from '../components/calibration-tabs';
 import { InvitePanel } from '../components/invite-panel';
 import { ResultsView } from '../components/results-view';

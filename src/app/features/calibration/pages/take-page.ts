@@ -7,8 +7,8 @@ import { RouterLink } from '@angular/router';
 
 import type { CalibrationSessionDetail, MyCalibrationResult, MyPick } from '../../../../../shared/api/calibration-answers.js';
 import { ApiError } from '../../../core/http/api-error';
-import { ScreenCaution } from '../../reference-set/components/screen-caution';
-import type { ChipSet } from '../../reference-set/data/chip-catalogue';
+import { ScreenCaution } from '../../../shared/chips/screen-caution';
+import type { ChipSet } from '../../../shared/chips/chip-catalogue';
 import { CalibrationTabs } from '../components/calibration-tabs';
 import { ChipChooser } from '../components/chip-chooser';
 import { MyResultView } from '../components/my-result-view';

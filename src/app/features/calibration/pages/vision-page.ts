@@ -7,9 +7,9 @@ import { MatProgressSpinnerModule } from '@angular/material/progress-spinner';
 import { MatSliderModule } from '@angular/material/slider';
 
 import { ACCEPTABILITY_THRESHOLD_DE00 } from '../../../../../shared/colour/constants.js';
-import { ScreenCaution } from '../../reference-set/components/screen-caution';
-import { ChipCatalogue } from '../../reference-set/data/chip-catalogue';
-import { formatNumber, normaliseCode } from '../../reference-set/data/chip-words';
+import { ScreenCaution } from '../../../shared/chips/screen-caution';
+import { ChipCatalogue } from '../../../shared/chips/chip-catalogue';
+import { formatNumber, normaliseCode } from '../../../shared/chips/chip-words';
 import { CalibrationTabs } from '../components/calibration-tabs';
 import { chipCentre, visionRows, type VisionCentre } from '../data/vision-rows';
 import { VISION_LABELS } from '../data/vision-simulation';

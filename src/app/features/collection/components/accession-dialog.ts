@@ -10,8 +10,8 @@ import { MatSelectModule } from '@angular/material/select';
 
 import { MCPD_DATE, type Accession, type Site } from '../../../../../shared/api/collection-answers.js';
 import { refusalMessage } from '../../../core/http/field-errors';
-import { CollectionApi } from '../data/collection-api';
-import { PASSPORT_LABELS, SAMPLE_STATUSES } from '../data/passport-fields';
+import { CollectionApi } from '../../../shared/collection/collection-api';
+import { PASSPORT_LABELS, SAMPLE_STATUSES } from '../../../shared/collection/passport-fields';
 import { passportBody } from '../data/passport-body';
 
 /** What the accession dialog needs: the accession to edit (null: a new one) and the sites to choose from. */

@@ -11,7 +11,7 @@ import { TextFieldModule } from '@angular/cdk/text-field';
 
 import { CHARACTER_CODE, DEFAULT_DRIFT_THRESHOLD, ORGANS, type Character, type Organ } from '../../../../../shared/api/collection-answers.js';
 import { refusalMessage } from '../../../core/http/field-errors';
-import { CollectionApi } from '../data/collection-api';
+import { CollectionApi } from '../../../shared/collection/collection-api';
 
 /** Adds a character to the catalogue, or edits one (code and organ stay: readings refer to them). Closes with the saved character. */
 @Component({

@@ -7,7 +7,7 @@ import { RouterLink } from '@angular/router';
 
 import type { CharacterProfile, ProfilePhoto } from '../../../../../shared/api/profile-answers.js';
 import { UnitPreference } from '../../../core/units/unit-preference';
-import { deltaEText, labText, lchText } from '../../reference-set/data/chip-words';
+import { deltaEText, labText, lchText } from '../../../shared/chips/chip-words';
 import { CHARACTERISATION_XLSX_URL, ProfileApi, profilePdfUrl } from '../data/profile-api';
 import { chipText, countsText, cropStyle, descriptorText, setChipText, stabilityText } from '../data/profile-words';
 

@@ -9,8 +9,8 @@ import { MatSelectModule } from '@angular/material/select';
 
 import type { Accession, Plant, Site } from '../../../../../shared/api/collection-answers.js';
 import { refusalMessage } from '../../../core/http/field-errors';
-import { CollectionApi } from '../data/collection-api';
-import { plantAgeWords } from '../data/passport-fields';
+import { CollectionApi } from '../../../shared/collection/collection-api';
+import { plantAgeWords } from '../../../shared/collection/passport-fields';
 
 /** What the plant dialog needs: the accession, the plant to edit (null: a new one) and the sites. */
 export interface PlantDialogData {

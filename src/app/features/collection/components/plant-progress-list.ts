@@ -5,8 +5,8 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
 
-import { PlantSheetApi } from '../../record/data/plant-sheet-api';
-import { progressWords, settledPercent } from '../../record/data/sheet-progress';
+import { PlantSheetApi } from '../../../shared/collection/plant-sheet-api';
+import { progressWords, settledPercent } from '../../../shared/collection/sheet-progress';
 
 /** Words of each progress state, with an icon so the state never rests on colour alone. */
 export const STATE_WORDS = {

@@ -3,7 +3,7 @@ import { rxResource } from '@angular/core/rxjs-interop';
 import { MatIconModule } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
 
-import { PlantSheetApi } from '../../record/data/plant-sheet-api';
+import { PlantSheetApi } from '../../../shared/collection/plant-sheet-api';
 
 /** This season's count of plants fully, partly and not yet characterised, leading to the progress table. */
 @Component({

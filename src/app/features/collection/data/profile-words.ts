@@ -1,7 +1,7 @@
 // Words for the characterisation record, kept out of the templates so they can be tested.
 import type { CharacterProfile, DescriptorSummary, ProfilePhoto, ProfileSetChip } from '../../../../../shared/api/profile-answers.js';
 import type { UnitSystem } from '../../../../../shared/units/units.js';
-import { deltaEText, formatNumber } from '../../reference-set/data/chip-words';
+import { deltaEText, formatNumber } from '../../../shared/chips/chip-words';
 
 /** "8 readings by 2 observers on 3 plants" (the basis), with how many are approved when that is the basis. */
 export function countsText(c: Pick<CharacterProfile, 'basis' | 'nReadings' | 'nObservers' | 'nPlants' | 'nCurrent'>): string {

@@ -1,6 +1,6 @@
 // Sorting the collection progress table, kept apart from the page so it is tested alone.
 import type { PlantProgress, ProgressState } from '../../../../../shared/api/plant-sheet-answers.js';
-import { settledPercent } from '../../record/data/sheet-progress';
+import { settledPercent } from '../../../shared/collection/sheet-progress';
 
 /** The columns the table sorts by. */
 export type ProgressColumn = 'accession' | 'plant' | 'site' | 'state' | 'colour' | 'descriptors' | 'percent';

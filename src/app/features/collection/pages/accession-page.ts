@@ -11,13 +11,13 @@ import { filter } from 'rxjs';
 import type { Accession, Plant } from '../../../../../shared/api/collection-answers.js';
 import { AuthStore } from '../../../core/auth/auth-store';
 import { UnitPreference } from '../../../core/units/unit-preference';
-import { PlantValues } from '../../descriptors/components/plant-values';
+import { PlantValues } from '../../../shared/descriptors/plant-values';
 import { PlantProgressList } from '../components/plant-progress-list';
 import { AccessionDialog, type AccessionDialogData } from '../components/accession-dialog';
 import { Characterisation } from '../components/characterisation';
 import { PlantDialog, type PlantDialogData } from '../components/plant-dialog';
-import { CollectionApi } from '../data/collection-api';
-import { PASSPORT_LABELS, type PassportField, mcpdDateWords, plantAgeWords, sampleStatusWords } from '../data/passport-fields';
+import { CollectionApi } from '../../../shared/collection/collection-api';
+import { PASSPORT_LABELS, type PassportField, mcpdDateWords, plantAgeWords, sampleStatusWords } from '../../../shared/collection/passport-fields';
 
 /** Passport fields in the order the page lists them. */
 const SHOWN: readonly PassportField[] = [

@@ -11,9 +11,9 @@ import { filter } from 'rxjs';
 import type { Accession, Character } from '../../../../../shared/api/collection-answers.js';
 import type { Descriptor } from '../../../../../shared/api/descriptor-answers.js';
 import { AuthStore } from '../../../core/auth/auth-store';
-import { DescriptorDialog, type DescriptorDialogData } from '../../descriptors/components/descriptor-dialog';
-import { DescriptorList } from '../../descriptors/components/descriptor-list';
-import { DescriptorsApi } from '../../descriptors/data/descriptors-api';
+import { DescriptorDialog, type DescriptorDialogData } from '../components/descriptor-dialog';
+import { DescriptorList } from '../components/descriptor-list';
+import { DescriptorsApi } from '../../../shared/descriptors/descriptors-api';
 import { AccessionDialog, type AccessionDialogData } from '../components/accession-dialog';
 import { AccessionList } from '../components/accession-list';
 import { CharacterDialog } from '../components/character-dialog';
@@ -21,7 +21,7 @@ import { CharacterList } from '../components/character-list';
 import { LoadState } from '../../../shared/load-state';
 import { ProgressSummary } from '../components/progress-summary';
 import { SiteList } from '../components/site-list';
-import { CollectionApi, PASSPORT_CSV_URL } from '../data/collection-api';
+import { CollectionApi, PASSPORT_CSV_URL } from '../../../shared/collection/collection-api';
 
 /** The tabs, in order, by the name used in `?tab=`. */
 const TABS = ['accessions', 'sites', 'characters', 'descriptors'] as const;

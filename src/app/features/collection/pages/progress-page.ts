@@ -9,11 +9,11 @@ import { MatTableModule } from '@angular/material/table';
 import { RouterLink } from '@angular/router';
 
 import type { PlantProgress, ProgressState } from '../../../../../shared/api/plant-sheet-answers.js';
-import { PlantSheetApi } from '../../record/data/plant-sheet-api';
-import { settledPercent } from '../../record/data/sheet-progress';
+import { PlantSheetApi } from '../../../shared/collection/plant-sheet-api';
+import { settledPercent } from '../../../shared/collection/sheet-progress';
 import { LoadState } from '../../../shared/load-state';
 import { STATE_WORDS } from '../components/plant-progress-list';
-import { CollectionApi } from '../data/collection-api';
+import { CollectionApi } from '../../../shared/collection/collection-api';
 import { sortProgress, type ProgressColumn } from '../data/progress-sort';
 
 /** Collection → Progress: every plant's characterisation this season, fully, partly or not started, in a table that sorts. */

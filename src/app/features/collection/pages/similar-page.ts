@@ -6,7 +6,7 @@ import { MatProgressSpinnerModule } from '@angular/material/progress-spinner';
 import { RouterLink } from '@angular/router';
 
 import type { SharedCharacterDistance } from '../../../../../shared/api/profile-answers.js';
-import { deltaEText, formatNumber } from '../../reference-set/data/chip-words';
+import { deltaEText, formatNumber } from '../../../shared/chips/chip-words';
 import { ProfileApi } from '../data/profile-api';
 
 /** How many look-alikes the page lists (our own). */

@@ -16,7 +16,7 @@ import { applyFieldErrors } from '../../../core/http/field-errors';
 import { SeasonEditor } from '../components/season-editor';
 import { TimeZoneField, knownTimeZone } from '../components/time-zone-field';
 import { YearRing } from '../components/year-ring';
-import { CollectionApi } from '../data/collection-api';
+import { CollectionApi } from '../../../shared/collection/collection-api';
 import { type SeasonDraft, seasonGroup, seasonLengthWords } from '../data/season-form';
 import { schemeProblems } from '../data/season-problems';
 import { siteBody } from '../data/site-body';

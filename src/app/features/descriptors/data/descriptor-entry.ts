@@ -2,7 +2,7 @@ import type { Descriptor, DescriptorKind, Unit, UnitSystem } from '../../../../.
 import { KIND_QUANTITY } from '../../../../../shared/api/descriptor-answers.js';
 import { implausibleValue } from '../../../../../shared/units/plausible-ranges.js';
 import { formatRatio, fromSi, toSi } from '../../../../../shared/units/units.js';
-import type { NewObservation } from './descriptors-api';
+import type { NewObservation } from '../../../shared/descriptors/descriptors-api';
 
 /** A measured value as the recorder typed it: the number and the unit it was typed in. */
 export interface TypedValue {

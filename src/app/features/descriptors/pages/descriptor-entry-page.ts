@@ -11,12 +11,12 @@ import { Router, RouterLink } from '@angular/router';
 import { ApiError } from '../../../core/http/api-error';
 import { UnitPreference, type UnitSystem } from '../../../core/units/unit-preference';
 import { LoadState } from '../../../shared/load-state';
-import { CollectionApi } from '../../collection/data/collection-api';
-import { plantAgeWords } from '../../collection/data/passport-fields';
+import { CollectionApi } from '../../../shared/collection/collection-api';
+import { plantAgeWords } from '../../../shared/collection/passport-fields';
 import { DescriptorRow } from '../components/descriptor-row';
-import { PlantValues } from '../components/plant-values';
+import { PlantValues } from '../../../shared/descriptors/plant-values';
 import { type RowEntry, blankEntry, defaultUnit, observationOf, orderForEntry, ratioOf, ratioSource, switchUnit } from '../data/descriptor-entry';
-import { DescriptorsApi } from '../data/descriptors-api';
+import { DescriptorsApi } from '../../../shared/descriptors/descriptors-api';
 
 /**
  * The recorder's descriptor entry: choose accession and plant, then type each descriptor of the

@@ -2,7 +2,7 @@ import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, input, signal } from '@angular/core';
 import { RouterLink } from '@angular/router';
 
-import { formatNumber } from '../../reference-set/data/chip-words';
+import { formatNumber } from '../../../shared/chips/chip-words';
 import { abPlaneConfig } from '../data/drift-charts';
 import type { GroupSeries } from '../data/drift-series';
 import { ELLIPSE_SIGMAS, ellipseCoverage } from '../data/spread-ellipse';

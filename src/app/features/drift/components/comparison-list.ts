@@ -2,7 +2,7 @@ import { ChangeDetectionStrategy, Component, computed, input } from '@angular/co
 import { MatIconModule } from '@angular/material/icon';
 
 import type { DriftAnswer } from '../../../../../shared/api/analysis-answers.js';
-import { deltaEText } from '../../reference-set/data/chip-words';
+import { deltaEText } from '../../../shared/chips/chip-words';
 import { DRIFT_STATE_WORDS, driftState, groupLabel, kindWords, pValueText } from '../data/drift-words';
 
 /** Each comparison between season groups: from → to, kind, ΔE00, p-value, the verdict as an icon and a word, and the server's reason. */

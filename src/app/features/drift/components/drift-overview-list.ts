@@ -6,7 +6,7 @@ import { MatProgressSpinnerModule } from '@angular/material/progress-spinner';
 import { RouterLink } from '@angular/router';
 
 import type { DriftOverviewFlag, DriftOverviewItem } from '../../../../../shared/api/analysis-answers.js';
-import { deltaEText } from '../../reference-set/data/chip-words';
+import { deltaEText } from '../../../shared/chips/chip-words';
 import { AnalysisApi } from '../data/analysis-api';
 import { pValueText } from '../data/drift-words';
 

@@ -2,7 +2,7 @@ import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, input } from '@angular/core';
 
 import type { DriftGroup } from '../../../../../shared/api/analysis-answers.js';
-import { deltaEText, formatNumber } from '../../reference-set/data/chip-words';
+import { deltaEText, formatNumber } from '../../../shared/chips/chip-words';
 import { hueText, tooSmall } from '../data/drift-words';
 
 /** The season groups: season, year, n, mean CIELAB, C*, h°, spread ΔE00 and the dates they span. */

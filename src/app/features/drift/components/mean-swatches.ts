@@ -1,6 +1,6 @@
 import { ChangeDetectionStrategy, Component, input } from '@angular/core';
 
-import { deltaEText, formatNumber } from '../../reference-set/data/chip-words';
+import { deltaEText, formatNumber } from '../../../shared/chips/chip-words';
 
 /** One mean colour in the strip. */
 export interface MeanSwatch {

@@ -1,7 +1,7 @@
 import { ChangeDetectionStrategy, Component, computed, input, signal } from '@angular/core';
 import { RouterLink } from '@angular/router';
 
-import { formatNumber } from '../../reference-set/data/chip-words';
+import { formatNumber } from '../../../shared/chips/chip-words';
 import { timeConfig } from '../data/drift-charts';
 import { TIME_QUANTITIES, dayText, type GroupSeries } from '../data/drift-series';
 import { hueText } from '../data/drift-words';

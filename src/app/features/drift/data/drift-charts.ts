@@ -2,7 +2,7 @@
 // the library itself loads with the first chart). Big legend text and markers for a phone.
 import type { ChartConfiguration, ChartDataset, LegendItem, TooltipItem } from 'chart.js';
 
-import { formatNumber } from '../../reference-set/data/chip-words';
+import { formatNumber } from '../../../shared/chips/chip-words';
 import { dayText, monthText, squareRange, type GroupSeries, type TimeQuantity } from './drift-series';
 import { ELLIPSE_SIGMAS } from './spread-ellipse';
 

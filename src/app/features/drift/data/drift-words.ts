@@ -1,6 +1,6 @@
 // Plain words and icons for the drift view, so a verdict never rests on colour alone.
 import type { DriftAnswer, DriftComparison, DriftGroup, GroupKey } from '../../../../../shared/api/analysis-answers.js';
-import { formatNumber } from '../../reference-set/data/chip-words';
+import { formatNumber } from '../../../shared/chips/chip-words';
 
 /** What a comparison between two season groups says. */
 export type DriftState = 'drift' | 'steady' | 'too-few';

@@ -1,7 +1,7 @@
 // The site-by-site ΔE00 table: each cell's number, and whether it reaches the character's
 // threshold, marked by an icon and a word as well as by shading.
 import type { SiteComparisonAnswer } from '../../../../../shared/api/analysis-answers.js';
-import { deltaEText } from '../../reference-set/data/chip-words';
+import { deltaEText } from '../../../shared/chips/chip-words';
 import { pValueText } from './drift-words';
 
 /** One cell of the matrix. */

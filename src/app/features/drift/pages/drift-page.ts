@@ -5,7 +5,7 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { ActivatedRoute, Router, RouterLink } from '@angular/router';
 
-import { CollectionApi } from '../../collection/data/collection-api';
+import { CollectionApi } from '../../../shared/collection/collection-api';
 import { AbPlane } from '../components/ab-plane';
 import { ComparisonList } from '../components/comparison-list';
 import { DriftOverviewList } from '../components/drift-overview-list';

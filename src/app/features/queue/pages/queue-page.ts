@@ -10,7 +10,7 @@ import { AuthStore } from '../../../core/auth/auth-store';
 import { OfflineQueue } from '../../../core/offline/offline-queue';
 import type { PendingReading } from '../../../core/offline/queue-item';
 import { ConfirmDialog, type ConfirmDialogData } from '../../../shared/confirm-dialog';
-import { CollectionApi } from '../../collection/data/collection-api';
+import { CollectionApi } from '../../../shared/collection/collection-api';
 import { QueuedReading, type ReadingChange } from '../components/queued-reading';
 import { savedAt, waitingWords } from '../data/queue-words';
 

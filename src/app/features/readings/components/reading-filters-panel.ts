@@ -8,7 +8,7 @@ import { MatSelectModule } from '@angular/material/select';
 
 import type { Accession, Character, Site } from '../../../../../shared/api/collection-answers.js';
 import { READING_METHODS, READING_STATUSES, type ReadingListQuery } from '../../../../../shared/api/reading-answers.js';
-import { METHOD_WORDS, STATUS_WORDS } from '../data/reading-words';
+import { METHOD_WORDS, STATUS_WORDS } from '../../../shared/readings/reading-words';
 
 /** The readings table's filters; each change is sent up and goes into the URL. */
 @Component({

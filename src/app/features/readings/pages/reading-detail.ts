@@ -6,13 +6,13 @@ import { MatProgressSpinnerModule } from '@angular/material/progress-spinner';
 import { RouterLink } from '@angular/router';
 
 import { AuthStore } from '../../../core/auth/auth-store';
-import { cutWarning, limitWords } from '../../record/data/cut-clock';
 import { EarlierReadings } from '../components/earlier-readings';
-import { PhotoCrop } from '../components/photo-crop';
-import { ReadingMatch } from '../components/reading-match';
+import { cutWarning, limitWords } from '../../../shared/readings/cut-clock';
+import { PhotoCrop } from '../../../shared/photos/photo-crop';
+import { ReadingMatch } from '../../../shared/readings/reading-match';
 import { CUT_SECONDS_WARN, type ReadingDetail } from '../../../../../shared/api/reading-answers.js';
-import { LIGHT_WORDS, METHOD_WORDS, STATUS_WORDS, wordsFor } from '../data/reading-words';
-import { ReadingsApi } from '../data/readings-api';
+import { LIGHT_WORDS, METHOD_WORDS, STATUS_WORDS, wordsFor } from '../../../shared/readings/reading-words';
+import { ReadingsApi } from '../../../shared/readings/readings-api';
 import { ageWords, correctionText } from '../data/provenance-words';
 import { LocalDateTimePipe } from '../../../core/format/local-date-time';
 

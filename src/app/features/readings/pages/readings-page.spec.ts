@@ -5,7 +5,7 @@ import { Router, provideRouter } from '@angular/router';
 import { RouterTestingHarness } from '@angular/router/testing';
 
 import { errorInterceptor } from '../../../core/http/error-interceptor';
-import { TEST_ACCESSIONS, TEST_CHARACTERS, TEST_SITES } from '../../record/testing/collection-fixtures';
+import { TEST_ACCESSIONS, TEST_CHARACTERS, TEST_SITES } from '../../../shared/testing/collection-fixtures';
 import type { ReadingDto } from '../../../../../shared/api/reading-answers.js';
 import { ReadingsPage } from './readings-page';
 

@@ -12,15 +12,15 @@ import type { Subscription } from 'rxjs';
 import { AuthStore } from '../../../core/auth/auth-store';
 import { NAV_ITEMS } from '../../../core/layout/nav-items';
 import { Viewport } from '../../../core/layout/viewport';
-import { CollectionApi } from '../../collection/data/collection-api';
-import { VerdictMark } from '../../reference-set/components/verdict-mark';
-import { deltaEText } from '../../reference-set/data/chip-words';
+import { CollectionApi } from '../../../shared/collection/collection-api';
+import { VerdictMark } from '../../../shared/chips/verdict-mark';
+import { deltaEText } from '../../../shared/chips/chip-words';
 import { ReadingFiltersPanel } from '../components/reading-filters-panel';
-import { saveBlob } from '../data/blob-download';
+import { saveBlob } from '../../../shared/readings/blob-download';
 import { READING_SORTS, type ReadingListQuery, type ReadingSort } from '../../../../../shared/api/reading-answers.js';
 import { DEFAULT_SORT, PAGE_SIZES, activeFilterCount, filtersFromParams, paramsFromFilters } from '../data/reading-filters';
-import { LIGHT_WORDS, METHOD_WORDS, STATUS_WORDS, wordsFor } from '../data/reading-words';
-import { ReadingsApi, type ExportFormat } from '../data/readings-api';
+import { LIGHT_WORDS, METHOD_WORDS, STATUS_WORDS, wordsFor } from '../../../shared/readings/reading-words';
+import { ReadingsApi, type ExportFormat } from '../../../shared/readings/readings-api';
 import { LocalDateTimePipe } from '../../../core/format/local-date-time';
 
 /** An export under way: which format and how far. */

@@ -5,10 +5,10 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatProgressSpinnerModule } from '@angular/material/progress-spinner';
 
-import { ScreenCaution } from '../../reference-set/components/screen-caution';
-import { SwatchGrid } from '../../reference-set/components/swatch-grid';
-import { ChipCatalogue } from '../../reference-set/data/chip-catalogue';
-import { familyLabel, normaliseCode } from '../../reference-set/data/chip-words';
+import { ScreenCaution } from '../../../shared/chips/screen-caution';
+import { SwatchGrid } from '../../../shared/chips/swatch-grid';
+import { ChipCatalogue } from '../../../shared/chips/chip-catalogue';
+import { familyLabel, normaliseCode } from '../../../shared/chips/chip-words';
 
 /**
  * The chip picked by eye on the printed field card: the field chips as a large grid of swatches

@@ -5,7 +5,7 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 
-import { CUT_TICK_MS, cutWarning, elapsedSeconds, stopwatchText } from '../data/cut-clock';
+import { CUT_TICK_MS, cutWarning, elapsedSeconds, stopwatchText } from '../../../shared/readings/cut-clock';
 
 /**
  * Seconds since cut for corm and sap: a big "Cut now" button that counts up from the cut into the

@@ -6,7 +6,7 @@ import { MatInputModule } from '@angular/material/input';
 
 import { LAB_INPUT_LIMITS } from '../../../../../shared/api/reference-set-answers.js';
 import { displayHex } from '../../../../../shared/colour/display-hex.js';
-import { labQuery } from '../../reference-set/data/colour-query';
+import { labQuery } from '../../../shared/chips/colour-query';
 import { SignedNumberInput } from './signed-number-input';
 
 /** The three CIELAB fields of an instrument reading. */

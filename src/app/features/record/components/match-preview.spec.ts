@@ -1,8 +1,8 @@
 import { signal } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
 
-import { ChipCatalogue, ChipSet } from '../../reference-set/data/chip-catalogue';
-import { TEST_CHIPS, TEST_SETS } from '../../reference-set/testing/chip-fixtures';
+import { ChipCatalogue, ChipSet } from '../../../shared/chips/chip-catalogue';
+import { TEST_CHIPS, TEST_SETS } from '../../../shared/testing/chip-fixtures';
 import { MatchPreview } from './match-preview';
 
 describe('MatchPreview', () => {

@@ -4,7 +4,7 @@ import { MatIconModule } from '@angular/material/icon';
 import { DEFAULT_DRIFT_THRESHOLD } from '../../../../../shared/api/collection-answers.js';
 import { deltaE00 } from '../../../../../shared/colour/delta-e.js';
 import { labFromTuple, type Lab } from '../../../../../shared/colour/lab.js';
-import { ChipCatalogue } from '../../reference-set/data/chip-catalogue';
+import { ChipCatalogue } from '../../../shared/chips/chip-catalogue';
 
 /** ΔE00 above which an eye-picked chip is called far from the measured colour: the acceptability threshold (Paravina et al. 2015). */
 export const EYE_PICK_WARN = DEFAULT_DRIFT_THRESHOLD;

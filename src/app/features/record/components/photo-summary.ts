@@ -4,10 +4,10 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressSpinnerModule } from '@angular/material/progress-spinner';
 
-import { PhotoCrop } from '../../readings/components/photo-crop';
-import { VerdictMark } from '../../reference-set/components/verdict-mark';
-import { deltaEText } from '../../reference-set/data/chip-words';
-import { PhotosApi } from '../data/photos-api';
+import { PhotoCrop } from '../../../shared/photos/photo-crop';
+import { VerdictMark } from '../../../shared/chips/verdict-mark';
+import { deltaEText } from '../../../shared/chips/chip-words';
+import { PhotosApi } from '../../../shared/photos/photos-api';
 import type { PhotoSource } from '../data/reading-draft';
 
 /** The photo region a photo reading will save: the crop with the region drawn, and the server's sample of it. */

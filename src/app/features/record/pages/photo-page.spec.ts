@@ -7,7 +7,7 @@ import { provideRouter, Router } from '@angular/router';
 
 import type { PhotoDto, PhotoSample } from '../../../../../shared/api/photo-answers.js';
 import { errorInterceptor } from '../../../core/http/error-interceptor';
-import { PhotoCanvas } from '../components/photo-canvas';
+import { PhotoCanvas } from '../../../shared/photos/photo-canvas';
 import { PhotoPage } from './photo-page';
 
 const photo: PhotoDto = {

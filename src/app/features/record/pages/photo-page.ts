@@ -12,13 +12,13 @@ import type { PhotoDto, PhotoSample } from '../../../../../shared/api/photo-answ
 import type { Region } from '../../../../../shared/photo/region.js';
 import { ApiError } from '../../../core/http/api-error';
 import { OfflineQueue } from '../../../core/offline/offline-queue';
-import { PhotoCanvas } from '../components/photo-canvas';
+import { PhotoCanvas } from '../../../shared/photos/photo-canvas';
 import { RecordCautions } from '../components/record-cautions';
 import { SampleResult } from '../components/sample-result';
 import { previewRegion, type Pixels } from '../data/photo-preview';
-import { PhotosApi } from '../data/photos-api';
+import { PhotosApi } from '../../../shared/photos/photos-api';
 import { photoSourceFromParams, photoSourceParams } from '../data/photo-source';
-import { defaultRadius, describeRegion, type Tool } from '../data/region-drawing';
+import { defaultRadius, describeRegion, type Tool } from '../../../shared/photos/region-drawing';
 
 /** What the next stroke marks. */
 type Marking = 'tissue' | 'card';

@@ -13,9 +13,9 @@ import { RouterLink } from '@angular/router';
 import type { SheetRow } from '../../../../../shared/api/plant-sheet-answers.js';
 import { ApiError } from '../../../core/http/api-error';
 import { UnitPreference } from '../../../core/units/unit-preference';
-import { METHOD_WORDS } from '../../readings/data/reading-words';
-import { PlantSheetApi, type NewSkip } from '../data/plant-sheet-api';
-import { firstTodo, progressWords, settledPercent } from '../data/sheet-progress';
+import { METHOD_WORDS } from '../../../shared/readings/reading-words';
+import { PlantSheetApi, type NewSkip } from '../../../shared/collection/plant-sheet-api';
+import { firstTodo, progressWords, settledPercent } from '../../../shared/collection/sheet-progress';
 
 /** Which half of a row a skip is being written for. */
 interface SkipTarget {

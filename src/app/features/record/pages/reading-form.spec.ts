@@ -9,7 +9,7 @@ import { errorInterceptor } from '../../../core/http/error-interceptor';
 import { IS_ONLINE } from '../../../core/offline/offline-queue';
 import { CUT_SECONDS_WARN } from '../../../../../shared/api/reading-answers.js';
 import { READING_DRAFT_KEY, READING_MEMORY_KEY } from '../data/reading-memory';
-import { TEST_ACCESSIONS, TEST_CHARACTERS, TEST_SITES } from '../testing/collection-fixtures';
+import { TEST_ACCESSIONS, TEST_CHARACTERS, TEST_SITES } from '../../../shared/testing/collection-fixtures';
 import { ReadingForm } from './reading-form';
 
 describe('ReadingForm', () => {

@@ -14,14 +14,14 @@ import type { Accession, Plant } from '../../../../../shared/api/collection-answ
 import { ApiError } from '../../../core/http/api-error';
 import { IS_ONLINE, OfflineQueue } from '../../../core/offline/offline-queue';
 import type { QueuedReadingBody } from '../../../core/offline/queue-item';
-import { readingSummary } from '../../queue/data/reading-summary';
-import { ChipCatalogue } from '../../reference-set/data/chip-catalogue';
+import { readingSummary } from '../../../shared/readings/reading-summary';
+import { ChipCatalogue } from '../../../shared/chips/chip-catalogue';
 import { applyFieldErrors } from '../../../core/http/field-errors';
-import { CollectionApi } from '../../collection/data/collection-api';
+import { CollectionApi } from '../../../shared/collection/collection-api';
 import { CUT_SECONDS_WARN, LIGHTS, READING_METHODS, type ReadingDetail, type ReadingMethod } from '../../../../../shared/api/reading-answers.js';
-import { ReadingMatch } from '../../readings/components/reading-match';
-import { ReadingsApi, newIdempotencyKey } from '../../readings/data/readings-api';
-import { LIGHT_WORDS, METHOD_WORDS } from '../../readings/data/reading-words';
+import { ReadingMatch } from '../../../shared/readings/reading-match';
+import { ReadingsApi, newIdempotencyKey } from '../../../shared/readings/readings-api';
+import { LIGHT_WORDS, METHOD_WORDS } from '../../../shared/readings/reading-words';
 import { AccessionPicker } from '../components/accession-picker';
 import { CharacterPicker } from '../components/character-picker';
 import { ChipPicker } from '../components/chip-picker';
@@ -48,8 +48,8 @@ import {
   type ReadingFormValue,
 } from '../data/reading-draft';
 import { prefillFrom } from '../data/reading-prefill';
-import { PlantSheetApi } from '../data/plant-sheet-api';
-import { nextColourTodo } from '../data/sheet-progress';
+import { PlantSheetApi } from '../../../shared/collection/plant-sheet-api';
+import { nextColourTodo } from '../../../shared/collection/sheet-progress';
 
 /** What the draft store keeps: the form's value and the reading it corrects, if any. */
 type KeptDraft = ReadingFormValue & { correcting: number | null };

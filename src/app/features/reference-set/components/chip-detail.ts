@@ -5,7 +5,7 @@ import { MatIconModule } from '@angular/material/icon';
 import type { ChipDto } from '../../../../../shared/api/reference-set-answers.js';
 import { labFromTuple, labToLch } from '../../../../../shared/colour/lab.js';
 import type { ChipMatch } from '../../../../../shared/colour/nearest.js';
-import { deltaEText, labText, lchText } from '../data/chip-words';
+import { deltaEText, labText, lchText } from '../../../shared/chips/chip-words';
 import { GamutMark } from './gamut-mark';
 
 /** One chip: its swatch on the grey surround, CIELAB, LCh, display hex, gamut, parent and nearest neighbours. */

@@ -10,7 +10,7 @@ import { merge } from 'rxjs';
 
 import { LAB_INPUT_LIMITS } from '../../../../../shared/api/reference-set-answers.js';
 import { isHex } from '../../../../../shared/colour/parse.js';
-import { hexQuery, labQuery, type ColourQuery, type EntryMode } from '../data/colour-query';
+import { hexQuery, labQuery, type ColourQuery, type EntryMode } from '../../../shared/chips/colour-query';
 
 function hexValidator(control: AbstractControl<string>): ValidationErrors | null {
   return control.value.trim() === '' || isHex(control.value) ? null : { hex: true };

@@ -3,7 +3,7 @@ import { HttpTestingController, provideHttpClientTesting } from '@angular/common
 import { TestBed } from '@angular/core/testing';
 
 import type { ReferenceSetSummary } from '../../../../../shared/api/reference-set-answers.js';
-import { TEST_SETS } from '../testing/chip-fixtures';
+import { TEST_SETS } from '../../../shared/testing/chip-fixtures';
 import { CurrentSetChooser } from './current-set-chooser';
 
 describe('CurrentSetChooser', () => {

@@ -5,7 +5,7 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatSelectModule } from '@angular/material/select';
 
 import type { ReferenceSetSummary } from '../../../../../shared/api/reference-set-answers.js';
-import { ReferenceSetApi } from '../data/reference-set-api';
+import { ReferenceSetApi } from '../../../shared/chips/reference-set-api';
 
 /**
  * The admin's setting of which reference set new readings are matched against. Switching splits

@@ -11,12 +11,12 @@ import { AuthStore } from '../../../core/auth/auth-store';
 import { Viewport } from '../../../core/layout/viewport';
 import { ChipDetail } from '../components/chip-detail';
 import { CurrentSetChooser } from '../components/current-set-chooser';
-import { ScreenCaution } from '../components/screen-caution';
+import { ScreenCaution } from '../../../shared/chips/screen-caution';
 import { ReferenceSetTabs } from '../components/reference-set-tabs';
-import { SwatchGrid } from '../components/swatch-grid';
-import { ChipCatalogue } from '../data/chip-catalogue';
-import { familyLabel, normaliseCode } from '../data/chip-words';
-import { ReferenceSetApi } from '../data/reference-set-api';
+import { SwatchGrid } from '../../../shared/chips/swatch-grid';
+import { ChipCatalogue } from '../../../shared/chips/chip-catalogue';
+import { familyLabel, normaliseCode } from '../../../shared/chips/chip-words';
+import { ReferenceSetApi } from '../../../shared/chips/reference-set-api';
 
 /** A code typed out in full ("F-087", "F-087.014"): the search jumps to it without waiting for Enter. */
 const FULL_CODE = /^\s*F-\d{3}(?:\.\d{3})?\s*$/i;

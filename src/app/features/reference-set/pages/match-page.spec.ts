@@ -4,7 +4,7 @@ import { ComponentFixture, TestBed } from '@angular/core/testing';
 import { provideRouter } from '@angular/router';
 
 import type { MatchAnswer } from '../../../../../shared/api/reference-set-answers.js';
-import { TEST_CHIPS, TEST_SETS } from '../testing/chip-fixtures';
+import { TEST_CHIPS, TEST_SETS } from '../../../shared/testing/chip-fixtures';
 import { MatchPage } from './match-page';
 
 describe('MatchPage', () => {

@@ -7,16 +7,16 @@ import { catchError, debounce, map, of, switchMap, timer } from 'rxjs';
 
 import { MATCH_K_DEFAULT, type MatchAnswer } from '../../../../../shared/api/reference-set-answers.js';
 import { ApiError } from '../../../core/http/api-error';
-import { BetweenBar } from '../components/between-bar';
+import { BetweenBar } from '../../../shared/chips/between-bar';
 import { ColourEntry } from '../components/colour-entry';
 import { GamutMark } from '../components/gamut-mark';
-import { MatchStrip } from '../components/match-strip';
-import { ScreenCaution } from '../components/screen-caution';
+import { MatchStrip } from '../../../shared/chips/match-strip';
+import { ScreenCaution } from '../../../shared/chips/screen-caution';
 import { ReferenceSetTabs } from '../components/reference-set-tabs';
-import { ChipCatalogue } from '../data/chip-catalogue';
-import { labText, lchText } from '../data/chip-words';
-import type { ColourQuery } from '../data/colour-query';
-import { ReferenceSetApi } from '../data/reference-set-api';
+import { ChipCatalogue } from '../../../shared/chips/chip-catalogue';
+import { labText, lchText } from '../../../shared/chips/chip-words';
+import type { ColourQuery } from '../../../shared/chips/colour-query';
+import { ReferenceSetApi } from '../../../shared/chips/reference-set-api';
 
 /** How long typing must pause before the server is asked (our own; the device answers at once). */
 const SERVER_DELAY_MS = 300;

@@ -8,7 +8,7 @@ import { MatSelectModule } from '@angular/material/select';
 import type { Accession, Character, Site } from '../../../../../shared/api/collection-answers.js';
 import { READING_STATUSES } from '../../../../../shared/api/reading-answers.js';
 import type { ReviewQueueQuery } from '../../../../../shared/api/review-answers.js';
-import { STATUS_WORDS } from '../../readings/data/reading-words';
+import { STATUS_WORDS } from '../../../shared/readings/reading-words';
 import { QUEUE_DEFAULT_STATUS } from '../data/review-filters';
 
 /** The review queue's filters: accession, character, site, status, observed date range, and the observer picked from a row. */

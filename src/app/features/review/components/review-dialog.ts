@@ -11,10 +11,10 @@ import { RouterLink } from '@angular/router';
 
 import { ApiError } from '../../../core/http/api-error';
 import { EarlierReadings } from '../../readings/components/earlier-readings';
-import { PhotoCrop } from '../../readings/components/photo-crop';
-import { ReadingMatch } from '../../readings/components/reading-match';
-import { LIGHT_WORDS, METHOD_WORDS, STATUS_WORDS, wordsFor } from '../../readings/data/reading-words';
-import { ReadingsApi } from '../../readings/data/readings-api';
+import { PhotoCrop } from '../../../shared/photos/photo-crop';
+import { ReadingMatch } from '../../../shared/readings/reading-match';
+import { LIGHT_WORDS, METHOD_WORDS, STATUS_WORDS, wordsFor } from '../../../shared/readings/reading-words';
+import { ReadingsApi } from '../../../shared/readings/readings-api';
 import { CUT_SECONDS_WARN, type ReadingDetail } from '../../../../../shared/api/reading-answers.js';
 import { REVIEW_COMMENT_MAX, REVIEW_DECISION_LABELS, type ReviewAnswer, type ReviewDecision, type ReviewQueueQuery } from '../../../../../shared/api/review-answers.js';
 import { DECISION_KEYS, decisionForKey } from '../data/review-keys';

@@ -9,10 +9,10 @@ import { MatTableModule } from '@angular/material/table';
 import { ActivatedRoute, Router } from '@angular/router';
 
 import { Viewport } from '../../../core/layout/viewport';
-import { CollectionApi } from '../../collection/data/collection-api';
-import { METHOD_WORDS, STATUS_WORDS, wordsFor } from '../../readings/data/reading-words';
-import { VerdictMark } from '../../reference-set/components/verdict-mark';
-import { deltaEText } from '../../reference-set/data/chip-words';
+import { CollectionApi } from '../../../shared/collection/collection-api';
+import { METHOD_WORDS, STATUS_WORDS, wordsFor } from '../../../shared/readings/reading-words';
+import { VerdictMark } from '../../../shared/chips/verdict-mark';
+import { deltaEText } from '../../../shared/chips/chip-words';
 import type { ReviewQueueQuery } from '../../../../../shared/api/review-answers.js';
 import { QueueFilters } from '../components/queue-filters';
 import { ReviewDialog, type ReviewDialogData } from '../components/review-dialog';
