@@ -6,7 +6,7 @@ import { MatProgressSpinnerModule } from '@angular/material/progress-spinner';
 import { RouterLink } from '@angular/router';
 
 import { AuthStore } from '../../../core/auth/auth-store';
-import { EarlierReadings } from '../components/earlier-readings';
+import { EarlierReadings } from '../../../shared/readings/earlier-readings';
 import { cutWarning, limitWords } from '../../../shared/readings/cut-clock';
 import { PhotoCrop } from '../../../shared/photos/photo-crop';
 import { ReadingMatch } from '../../../shared/readings/reading-match';

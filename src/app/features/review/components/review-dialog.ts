@@ -10,7 +10,7 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
 
 import { ApiError } from '../../../core/http/api-error';
-import { EarlierReadings } from '../../readings/components/earlier-readings';
+import { EarlierReadings } from '../../../shared/readings/earlier-readings';
 import { PhotoCrop } from '../../../shared/photos/photo-crop';
 import { ReadingMatch } from '../../../shared/readings/reading-match';
 import { LIGHT_WORDS, METHOD_WORDS, STATUS_WORDS, wordsFor } from '../../../shared/readings/reading-words';

@@ -1,8 +1,8 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 import { RouterLink } from '@angular/router';
 
-import { LocalDateTimePipe } from '../../../core/format/local-date-time';
-import type { ReadingDetail } from '../../../../../shared/api/reading-answers.js';
+import { LocalDateTimePipe } from '../../core/format/local-date-time';
+import type { ReadingDetail } from '../../../../shared/api/reading-answers.js';
 
 /**
  * The plant's (else the accession's at that site) earlier readings of the reading's character:
