@@ -63,15 +63,16 @@ export async function sessionOutcomes(m: EntityManager, userIds: readonly number
 
 /**
  * A certification's state on `today`: lapsed on the day a later closed session did not certify
- * the observer, or the day after `validUntil`, whichever comes first; else current.
+ * the observer, or the day after `validUntil`, whichever comes first; else current. The reason
+ * names no date: the screens write `lapsedOn` and `certifiedOn` beside it in the reader's own style.
  */
 export function certificationState(cert: Pick<Certification, 'userId' | 'sessionId' | 'certifiedOn'>, earnedAt: number, outcomes: readonly SessionOutcome[], today: string): CertificationState {
   const validUntil = addMonths(cert.certifiedOn, CERTIFICATION_VALID_MONTHS);
   const failed = outcomes.find((o) => o.userId === cert.userId && o.sessionId !== cert.sessionId && o.closedAt > earnedAt && !o.certified);
   const expiry = dayAfter(validUntil);
   if (failed && failed.closedOn <= today && failed.closedOn <= expiry) {
-    return { validUntil, status: 'lapsed', lapsedOn: failed.closedOn, lapseReason: `not certified by the later session "${failed.title}" (closed ${failed.closedOn})` };
+    return { validUntil, status: 'lapsed', lapsedOn: failed.closedOn, lapseReason: `not certified by the later session "${failed.title}"` };
   }
-  if (expiry <= today) return { validUntil, status: 'lapsed', lapsedOn: expiry, lapseReason: `${CERTIFICATION_VALID_MONTHS} months passed since ${cert.certifiedOn}: calibrate again` };
+  if (expiry <= today) return { validUntil, status: 'lapsed', lapsedOn: expiry, lapseReason: `${CERTIFICATION_VALID_MONTHS} months passed since it was earned: calibrate again` };
   return { validUntil, status: 'current', lapsedOn: null, lapseReason: null };
 }

@@ -29,6 +29,8 @@ export const PHONE = { width: 390, height: 844 } as const;
 export interface WindowOptions {
   /** A 390×844 touch window at 2× instead of a 1280×800 desk window. */
   phone?: boolean;
+  /** The browser's language (BCP 47, e.g. `en-GB`), for tests of how dates read; Chromium's own otherwise. */
+  locale?: string;
 }
 
 /** The app under test and the browser that drives it, shared by every test of one file. */
@@ -64,6 +66,7 @@ async function openContext(origin: string, foreign: string[], opts: WindowOption
     isMobile: opts.phone ?? false,
     hasTouch: opts.phone ?? false,
     acceptDownloads: true,
+    ...(opts.locale ? { locale: opts.locale } : {}),
   });
   context.setDefaultTimeout(WAIT_MS);
   context.on('request', (req) => {

@@ -67,7 +67,7 @@ describe('calibration results people can act on', () => {
     const today = new Date().toISOString().slice(0, 10);
     // Dates show in the browser's own style (formatDateTime): the same formatter writes the expected days.
     const [validUntil, lapsedOn] = await trainer.evaluate(() => [new Date(2026, 10, 14, 12), new Date(2026, 10, 15, 12)].map((d) => new Intl.DateTimeFormat(navigator.languages?.[0] ?? navigator.language, { year: 'numeric', month: 'short', day: 'numeric' }).format(d)));
-    const expected = today > '2026-11-14' ? new RegExp(`lapsed[\\s\\S]*lapsed on ${lapsedOn}: 12 months passed since 2025-11-14`) : new RegExp(`current[\\s\\S]*valid until ${validUntil}`);
+    const expected = today > '2026-11-14' ? new RegExp(`lapsed[\\s\\S]*lapsed on ${lapsedOn}: 12 months passed since it was earned: calibrate again`) : new RegExp(`current[\\s\\S]*valid until ${validUntil}`);
     const juno = texts.find((t) => t.includes('Juno Pellbright')) ?? '';
     assert.match(juno, expected);
     const trainerName = ((await getJson<{ user: { name: string } }>(trainer, '/api/auth/me')).user.name);

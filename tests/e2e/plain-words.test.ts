@@ -1,11 +1,19 @@
 // Records in plain words, in Chromium with the demo data (issue 17): the admin's audit page reads
 // as sentences with filters and a subtitle, a reading's caption gives its number, wrap-year seasons
 // are named by both years, From after To is refused with a message, one date style follows the
-// browser's locale, and a reviewer sees no "New reading" button.
+// browser's locale on every page that shows one, and a reviewer sees no "New reading" button.
 import assert from 'node:assert/strict';
 import { before, describe, test } from 'node:test';
 import type { Page } from 'playwright-core';
+import { DEMO_DRIFT } from '../../server/demo/demo-readings.js';
 import { choose, screenshot, signIn, useApp } from './browser.js';
+
+/** A calendar date as ISO 8601 writes it: never what a person should read on a page. */
+const ISO_DAY = /\b\d{4}-\d{2}-\d{2}\b/;
+/** A day as en-GB writes it in the app's style ("9 Mar 2026"). */
+const GB_DAY = /\b\d{1,2} [A-Z][a-z]{2,3} 20\d\d\b/;
+/** A day as en-US writes it in the app's style ("Mar 9, 2026"). */
+const US_DAY = /\b[A-Z][a-z]{2} \d{1,2}, 20\d\d\b/;
 
 const app = useApp();
 
@@ -13,7 +21,7 @@ describe('records in plain words', () => {
   let admin: Page;
 
   before(async () => {
-    admin = await app.newPage();
+    admin = await app.newPage({ locale: 'en-GB' });
     await signIn(admin, app.url, 'admin@demo.test');
   });
 
@@ -31,7 +39,7 @@ describe('records in plain words', () => {
     assert.ok(sentences.every((s) => !/[{}]|accessionId/.test(s)), 'no raw JSON');
     await admin.getByLabel('From').fill('2026-05-02');
     await admin.getByLabel('To').fill('2026-05-01');
-    assert.match(await admin.getByRole('alert').innerText(), /From 2026-05-02 is after To 2026-05-01: choose a From on or before To\.$/);
+    assert.match(await admin.getByRole('alert').innerText(), /From 2 May 2026 is after To 1 May 2026: choose a From on or before To\.$/);
     await screenshot(admin, 'plain-words-audit-desktop');
   });
 
@@ -58,9 +66,55 @@ describe('records in plain words', () => {
     await admin.waitForURL(/from=2025-06-01/);
     const to = admin.getByLabel('To', { exact: true });
     await to.fill('2025-05-01');
-    assert.match(await admin.locator('p.range-error').innerText(), /From 2025-06-01 is after To 2025-05-01/);
+    assert.match(await admin.locator('p.range-error').innerText(), /From 1 Jun 2025 is after To 1 May 2025/);
     assert.ok(!admin.url().includes('to=2025-05-01'), 'the refused date is not applied');
     assert.equal(await to.inputValue(), '');
+  });
+
+  test('should refuse From after To in the review queue filters with a message, leaving the queue as it was', async () => {
+    const reviewer = await app.newPage({ locale: 'en-GB' });
+    await signIn(reviewer, app.url, 'reviewer@demo.test');
+    await reviewer.goto(`${app.url}/review`);
+    const from = reviewer.getByLabel('Observed from');
+    await from.waitFor();
+    await from.fill('2025-06-01');
+    await reviewer.waitForURL(/from=2025-06-01/);
+    const to = reviewer.getByLabel('Observed to');
+    await to.fill('2025-05-01');
+    await reviewer.locator('p.range-error').waitFor();
+    assert.match(await reviewer.locator('p.range-error').innerText(), /From 1 Jun 2025 is after To 1 May 2025: choose a From on or before To\./);
+    assert.ok(!reviewer.url().includes('to=2025-05-01'), 'the refused date is not applied');
+    assert.equal(await to.inputValue(), '');
+    await to.fill('2025-07-01');
+    await reviewer.waitForURL(/to=2025-07-01/);
+    await reviewer.locator('p.range-error').waitFor({ state: 'detached' });
+  });
+
+  test('should write the dates of calibration, the accession and its characterisation, and drift in the locale’s style, never as ISO', async () => {
+    const accessions = (await admin.evaluate(() => fetch('/api/accessions').then((r) => r.json()))) as { id: number; accessionNumber: string }[];
+    const characters = (await admin.evaluate(() => fetch('/api/characters').then((r) => r.json()))) as { id: number; code: string }[];
+    const accessionId = accessions.find((a) => a.accessionNumber === DEMO_DRIFT.accessionNumber)!.id;
+    const characterId = characters.find((c) => c.code === DEMO_DRIFT.characterCode)!.id;
+    // Each page is read once what it loads is on screen: its section headings, its plant list, its table rows.
+    const pages: { path: string; ready: string[] }[] = [
+      { path: '/calibration', ready: ['main h2'] },
+      { path: '/calibration/records', ready: ['main h2'] },
+      { path: `/collection/accessions/${accessionId}`, ready: ['hl-characterisation li.character', 'main p:has-text("Planted")'] },
+      { path: `/drift?accessionId=${accessionId}&characterId=${characterId}`, ready: ['hl-groups-table tbody tr'] },
+    ];
+    for (const { path, ready } of pages) {
+      await admin.goto(`${app.url}${path}`);
+      for (const selector of ready) await admin.locator(selector).first().waitFor();
+      const text = await admin.locator('main').innerText();
+      assert.doesNotMatch(text, ISO_DAY, `${path} shows no ISO date`);
+      assert.match(text, GB_DAY, `${path} writes its dates as en-GB does`);
+    }
+    const us = await app.newPage({ locale: 'en-US' });
+    await signIn(us, app.url, 'admin@demo.test');
+    await us.goto(`${app.url}/drift?accessionId=${accessionId}&characterId=${characterId}`);
+    const groups = us.locator('hl-groups-table tbody tr').first();
+    await groups.waitFor();
+    assert.match(await groups.innerText(), US_DAY, 'the same table follows an en-US browser');
   });
 
   test('should show a reviewer no "New reading" button, and a recorder one', async () => {

@@ -23,6 +23,12 @@ describe('formatDateTime', () => {
     expect(formatDateTime('2026-03-09', 'date', 'en-GB')).toBe('9 Mar 2026');
   });
 
+  it("should give a month and a clock time in the locale's own style", () => {
+    expect(formatDateTime('2026-03-09T12:00:00Z', 'month', 'en-GB')).toBe('Mar 2026');
+    expect(formatDateTime(instant, 'time', 'en-GB')).toBe(`${String(hour).padStart(2, '0')}:05`);
+    expect(formatDateTime(instant, 'time', 'en-US')).toMatch(/^\d{1,2}:05\s?(AM|PM)$/);
+  });
+
   it('should show a dash for no date or a date that is not one', () => {
     expect(formatDateTime(null)).toBe('—');
     expect(formatDateTime('soon')).toBe('—');

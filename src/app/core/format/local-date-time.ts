@@ -1,12 +1,14 @@
 import { Pipe, type PipeTransform } from '@angular/core';
 
 /** How much of an instant to show. */
-export type DateTimeStyle = 'date-time' | 'seconds' | 'date';
+export type DateTimeStyle = 'date-time' | 'seconds' | 'date' | 'month' | 'time';
 
 const OPTIONS: Record<DateTimeStyle, Intl.DateTimeFormatOptions> = {
   'date-time': { year: 'numeric', month: 'short', day: 'numeric', hour: 'numeric', minute: '2-digit' },
   seconds: { year: 'numeric', month: 'short', day: 'numeric', hour: 'numeric', minute: '2-digit', second: '2-digit' },
   date: { year: 'numeric', month: 'short', day: 'numeric' },
+  month: { year: 'numeric', month: 'short' },
+  time: { hour: 'numeric', minute: '2-digit' },
 };
 
 const formatters = new Map<string, Intl.DateTimeFormat>();

@@ -1,6 +1,5 @@
 import { ChangeDetectionStrategy, Component, DOCUMENT, ErrorHandler, inject, signal } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
-import { DatePipe } from '@angular/common';
 import { Clipboard } from '@angular/cdk/clipboard';
 import { MatButtonModule } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
@@ -13,11 +12,12 @@ import type { ApiTokenRow, IssuedApiToken } from '../../../../../shared/api/api-
 import { ConfirmDialog, ConfirmDialogData } from '../../../shared/confirm-dialog';
 import { IssueTokenDialog } from '../components/issue-token-dialog';
 import { ApiTokensApi } from '../data/api-tokens-api';
+import { LocalDateTimePipe } from '../../../core/format/local-date-time';
 
 /** BrAPI tokens: where clients connect, the token just issued (shown once), every token with its last use, revoking. */
 @Component({
   selector: 'hl-api-tokens-page',
-  imports: [DatePipe, MatButtonModule, MatIconModule, MatProgressSpinnerModule],
+  imports: [LocalDateTimePipe, MatButtonModule, MatIconModule, MatProgressSpinnerModule],
   templateUrl: './api-tokens-page.html',
   styleUrl: './api-tokens-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

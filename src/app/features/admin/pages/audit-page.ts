@@ -10,6 +10,7 @@ import { MatSelectModule } from '@angular/material/select';
 
 import { LocalDateTimePipe } from '../../../core/format/local-date-time';
 import { AdminApi, type AuditFilters } from '../data/admin-api';
+import { dateRangeRefusal } from '../../../core/format/date-range';
 
 /** The kinds of event the "What" filter offers: an action family and its plain name. */
 export const AUDIT_KINDS: readonly { value: string; label: string }[] = [
@@ -64,8 +65,9 @@ export class AuditPage {
   /** Applies one filter and goes back to the first page; From after To is refused with a message. */
   protected filter(change: AuditFilters, box?: HTMLInputElement): void {
     const next = { ...this.filters(), ...change };
-    if (next.from && next.to && next.from > next.to) {
-      this.rangeError.set(`From ${next.from} is after To ${next.to}: choose a From on or before To.`);
+    const refusal = dateRangeRefusal(next.from, next.to);
+    if (refusal) {
+      this.rangeError.set(refusal);
       if (box) box.value = (change.from !== undefined ? this.filters().from : this.filters().to) ?? '';
       return;
     }

@@ -8,11 +8,12 @@ import { deltaEText } from '../../../shared/chips/chip-words';
 import { biasNumbers, biasWords } from '../data/bias-words';
 import { certificatePdfUrl } from '../data/calibration-api';
 import { kappaWords } from '../data/session-words';
+import { LocalDateTimePipe } from '../../../core/format/local-date-time';
 
 /** An observer's own result of a closed session: mean ΔE00, bias in words, and each pick beside its reference. */
 @Component({
   selector: 'hl-my-result-view',
-  imports: [MatIconModule, VerdictMark],
+  imports: [LocalDateTimePipe, MatIconModule, VerdictMark],
   changeDetection: ChangeDetectionStrategy.OnPush,
   templateUrl: './my-result-view.html',
   styleUrl: './my-result-view.scss',

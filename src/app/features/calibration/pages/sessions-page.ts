@@ -11,11 +11,12 @@ import { CalibrationTabs } from '../components/calibration-tabs';
 import { SessionForm } from '../components/session-form';
 import { CalibrationApi } from '../data/calibration-api';
 import { expectedResponses, runsSessions } from '../data/session-words';
+import { LocalDateTimePipe } from '../../../core/format/local-date-time';
 
 /** Sessions: those I can join, my past ones, and (trainers, admins) every session with its progress and a form for a new one. */
 @Component({
   selector: 'hl-sessions-page',
-  imports: [MatButtonModule, MatExpansionModule, MatIconModule, MatProgressSpinnerModule, RouterLink, CalibrationTabs, SessionForm],
+  imports: [LocalDateTimePipe, MatButtonModule, MatExpansionModule, MatIconModule, MatProgressSpinnerModule, RouterLink, CalibrationTabs, SessionForm],
   changeDetection: ChangeDetectionStrategy.OnPush,
   templateUrl: './sessions-page.html',
   styleUrl: './sessions-page.scss',

@@ -14,6 +14,7 @@ import { ChipChooser } from '../components/chip-chooser';
 import { MyResultView } from '../components/my-result-view';
 import { CalibrationApi } from '../data/calibration-api';
 import { SessionChips } from '../data/session-chips';
+import { LocalDateTimePipe } from '../../../core/format/local-date-time';
 
 /**
  * The trainee's screen: the session's specimens one by one, a pick for each from the field chips
@@ -21,7 +22,7 @@ import { SessionChips } from '../data/session-chips';
  */
 @Component({
   selector: 'hl-take-page',
-  imports: [MatButtonModule, MatIconModule, MatProgressSpinnerModule, RouterLink, CalibrationTabs, ChipChooser, MyResultView, ScreenCaution],
+  imports: [LocalDateTimePipe, MatButtonModule, MatIconModule, MatProgressSpinnerModule, RouterLink, CalibrationTabs, ChipChooser, MyResultView, ScreenCaution],
   changeDetection: ChangeDetectionStrategy.OnPush,
   templateUrl: './take-page.html',
   styleUrl: './take-page.scss',

@@ -10,6 +10,7 @@ import { UnitPreference } from '../../../core/units/unit-preference';
 import { deltaEText, labText, lchText } from '../../../shared/chips/chip-words';
 import { CHARACTERISATION_XLSX_URL, ProfileApi, profilePdfUrl } from '../data/profile-api';
 import { chipText, countsText, cropStyle, descriptorText, setChipText, stabilityText } from '../data/profile-words';
+import { LocalDateTimePipe } from '../../../core/format/local-date-time';
 
 /** How many outliers a character lists before "and n more" (the rest are on the Readings page). */
 const OUTLIERS_SHOWN = 5;
@@ -23,7 +24,7 @@ const CROP_SIZE = 96;
  */
 @Component({
   selector: 'hl-characterisation',
-  imports: [MatButtonModule, MatIconModule, MatProgressSpinnerModule, RouterLink],
+  imports: [LocalDateTimePipe, MatButtonModule, MatIconModule, MatProgressSpinnerModule, RouterLink],
   templateUrl: './characterisation.html',
   styleUrl: './characterisation.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -18,6 +18,7 @@ import { Characterisation } from '../components/characterisation';
 import { PlantDialog, type PlantDialogData } from '../components/plant-dialog';
 import { CollectionApi } from '../../../shared/collection/collection-api';
 import { PASSPORT_LABELS, type PassportField, mcpdDateWords, plantAgeWords, sampleStatusWords } from '../../../shared/collection/passport-fields';
+import { LocalDateTimePipe } from '../../../core/format/local-date-time';
 
 /** Passport fields in the order the page lists them. */
 const SHOWN: readonly PassportField[] = [
@@ -28,7 +29,7 @@ const SHOWN: readonly PassportField[] = [
 /** One accession: passport with MCPD names, its plants with their age, and the latest descriptor values per plant. */
 @Component({
   selector: 'hl-accession-page',
-  imports: [Characterisation, MatButtonModule, MatIconModule, MatProgressSpinnerModule, PlantProgressList, PlantValues, RouterLink],
+  imports: [LocalDateTimePipe, Characterisation, MatButtonModule, MatIconModule, MatProgressSpinnerModule, PlantProgressList, PlantValues, RouterLink],
   templateUrl: './accession-page.html',
   styleUrl: './accession-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

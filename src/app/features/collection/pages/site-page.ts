@@ -20,6 +20,7 @@ import { CollectionApi } from '../../../shared/collection/collection-api';
 import { type SeasonDraft, seasonGroup, seasonLengthWords } from '../data/season-form';
 import { schemeProblems } from '../data/season-problems';
 import { siteBody } from '../data/site-body';
+import { formatDateTime } from '../../../core/format/local-date-time';
 
 /** One site: everyone sees its time zone and season ring; an admin edits it, seasons included, and creates new ones. */
 @Component({
@@ -122,7 +123,7 @@ export class SitePage {
 
   private showSaved(site: SavedSite): void {
     this.busy.set(false);
-    const time = new Date().toLocaleTimeString([], { hour: '2-digit', minute: '2-digit' });
+    const time = formatDateTime(new Date(), 'time');
     const warning = site.warnings.map((w) => w.message).join('; ');
     this.saved.set(warning ? `${time}, with a warning: ${warning}` : time);
     if (this.isNew()) {

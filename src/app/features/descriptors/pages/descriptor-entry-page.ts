@@ -17,6 +17,7 @@ import { DescriptorRow } from '../components/descriptor-row';
 import { PlantValues } from '../../../shared/descriptors/plant-values';
 import { type RowEntry, blankEntry, defaultUnit, observationOf, orderForEntry, ratioOf, ratioSource, switchUnit } from '../data/descriptor-entry';
 import { DescriptorsApi } from '../../../shared/descriptors/descriptors-api';
+import { LocalDateTimePipe } from '../../../core/format/local-date-time';
 
 /**
  * The recorder's descriptor entry: choose accession and plant, then type each descriptor of the
@@ -25,7 +26,7 @@ import { DescriptorsApi } from '../../../shared/descriptors/descriptors-api';
  */
 @Component({
   selector: 'hl-descriptor-entry-page',
-  imports: [DescriptorRow, LoadState, MatButtonModule, MatButtonToggleModule, MatFormFieldModule, MatIconModule, MatSelectModule, PlantValues, RouterLink],
+  imports: [LocalDateTimePipe, DescriptorRow, LoadState, MatButtonModule, MatButtonToggleModule, MatFormFieldModule, MatIconModule, MatSelectModule, PlantValues, RouterLink],
   templateUrl: './descriptor-entry-page.html',
   styleUrl: './descriptor-entry-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

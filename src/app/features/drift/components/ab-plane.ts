@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, input, signal } from '@angular/core';
 import { RouterLink } from '@angular/router';
 
@@ -8,11 +7,12 @@ import type { GroupSeries } from '../data/drift-series';
 import { ELLIPSE_SIGMAS, ellipseCoverage } from '../data/spread-ellipse';
 import { ChartCanvas } from './chart-canvas';
 import { ViewToggle } from './view-toggle';
+import { LocalDateTimePipe } from '../../../core/format/local-date-time';
 
 /** The a*b* plane: each season group's readings, mean and 2σ spread ellipse; or the same numbers as tables. */
 @Component({
   selector: 'hl-ab-plane',
-  imports: [ChartCanvas, DatePipe, RouterLink, ViewToggle],
+  imports: [ChartCanvas, LocalDateTimePipe, RouterLink, ViewToggle],
   changeDetection: ChangeDetectionStrategy.OnPush,
   template: `
     <div class="head">
@@ -60,7 +60,7 @@ import { ViewToggle } from './view-toggle';
               <tr>
                 <th scope="row"><a [routerLink]="['/readings', row.point.readingId]">{{ row.point.readingId }}</a></th>
                 <td>{{ row.group }}</td>
-                <td>{{ row.point.observedAt | date: 'd MMM y' : 'UTC' }}</td>
+                <td>{{ row.point.observedAt | localDateTime: 'date' }}</td>
                 <td class="num">{{ f(row.point.lab[1]) }}</td>
                 <td class="num">{{ f(row.point.lab[2]) }}</td>
               </tr>

@@ -1,14 +1,14 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, input } from '@angular/core';
 
 import type { DriftGroup } from '../../../../../shared/api/analysis-answers.js';
 import { deltaEText, formatNumber } from '../../../shared/chips/chip-words';
 import { hueText, tooSmall } from '../data/drift-words';
+import { LocalDateTimePipe } from '../../../core/format/local-date-time';
 
 /** The season groups: season, year, n, mean CIELAB, C*, h°, spread ΔE00 and the dates they span. */
 @Component({
   selector: 'hl-groups-table',
-  imports: [DatePipe],
+  imports: [LocalDateTimePipe],
   changeDetection: ChangeDetectionStrategy.OnPush,
   template: `
     <div class="scroll">
@@ -40,7 +40,7 @@ import { hueText, tooSmall } from '../data/drift-words';
               <td class="num">{{ f(g.meanLch[1]) }}</td>
               <td class="num">{{ hue(g.meanLch[1], g.meanLch[2]) }}</td>
               <td class="num">{{ de(g.spreadDeltaE00) }}</td>
-              <td>{{ g.firstObservedAt | date: 'd MMM y' : 'UTC' }} – {{ g.lastObservedAt | date: 'd MMM y' : 'UTC' }}</td>
+              <td>{{ g.firstObservedAt | localDateTime: 'date' }} – {{ g.lastObservedAt | localDateTime: 'date' }}</td>
             </tr>
           }
         </tbody>

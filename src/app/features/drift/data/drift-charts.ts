@@ -127,7 +127,7 @@ export function timeConfig(series: GroupSeries[], quantity: TimeQuantity): Scatt
       maintainAspectRatio: false,
       animation: false,
       scales: {
-        x: { type: 'linear', title: { display: true, text: 'Observed (UTC)', font: AXIS_FONT }, ticks: { font: AXIS_FONT, maxTicksLimit: 4, callback: (v) => monthText(Number(v)) } },
+        x: { type: 'linear', title: { display: true, text: 'Observed', font: AXIS_FONT }, ticks: { font: AXIS_FONT, maxTicksLimit: 4, callback: (v) => monthText(Number(v)) } },
         y: { type: 'linear', title: { display: true, text: `${quantity.label} (${quantity.words})`, font: AXIS_FONT }, ticks: { font: AXIS_FONT } },
       },
       plugins: {

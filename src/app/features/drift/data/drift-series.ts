@@ -3,6 +3,7 @@
 import type { DriftAnswer, DriftGroup, DriftPoint } from '../../../../../shared/api/analysis-answers.js';
 import { groupLabel, sameGroup } from './drift-words';
 import { ellipseOutline, spreadEllipse, type Ellipse } from './spread-ellipse';
+import { formatDateTime } from '../../../core/format/local-date-time';
 
 /**
  * Group colours: the eight colours of Okabe & Ito (2008), "Color Universal Design", chosen to stay
@@ -103,12 +104,12 @@ export const TIME_QUANTITIES = [
 ] as const;
 export type TimeQuantity = (typeof TIME_QUANTITIES)[number];
 
-/** "Mar 2025": the time axis's ticks (UTC). */
+/** The time axis's ticks ("Mar 2025" in en-GB), in the app's one date style for the person's locale. */
 export function monthText(ms: number): string {
-  return new Date(ms).toLocaleDateString('en-GB', { month: 'short', year: 'numeric', timeZone: 'UTC' });
+  return formatDateTime(new Date(ms), 'month');
 }
 
-/** "12 Mar 2025": the tables' and tooltips' dates (UTC, as the server stores them). */
+/** The tooltips' dates ("12 Mar 2025" in en-GB), in the app's one date style for the person's locale. */
 export function dayText(ms: number): string {
-  return new Date(ms).toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' });
+  return formatDateTime(new Date(ms), 'date');
 }

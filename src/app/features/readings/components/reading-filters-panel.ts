@@ -9,6 +9,7 @@ import { MatSelectModule } from '@angular/material/select';
 import type { Accession, Character, Site } from '../../../../../shared/api/collection-answers.js';
 import { READING_METHODS, READING_STATUSES, type ReadingListQuery } from '../../../../../shared/api/reading-answers.js';
 import { METHOD_WORDS, STATUS_WORDS } from '../../../shared/readings/reading-words';
+import { dateRangeRefusal } from '../../../core/format/date-range';
 
 /** The readings table's filters; each change is sent up and goes into the URL. */
 @Component({
@@ -162,8 +163,9 @@ export class ReadingFiltersPanel {
     const q = this.query();
     const from = end === 'from' ? value : q.from;
     const to = end === 'to' ? value : q.to;
-    if (from && to && from > to) {
-      this.rangeError.set(`From ${from} is after To ${to}: choose a From on or before To.`);
+    const refusal = dateRangeRefusal(from, to);
+    if (refusal) {
+      this.rangeError.set(refusal);
       box.value = q[end] ?? '';
       return;
     }

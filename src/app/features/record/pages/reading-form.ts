@@ -50,6 +50,7 @@ import {
 import { prefillFrom } from '../data/reading-prefill';
 import { PlantSheetApi } from '../../../shared/collection/plant-sheet-api';
 import { nextColourTodo } from '../../../shared/collection/sheet-progress';
+import { LocalDateTimePipe } from '../../../core/format/local-date-time';
 
 /** What the draft store keeps: the form's value and the reading it corrects, if any. */
 type KeptDraft = ReadingFormValue & { correcting: number | null };
@@ -76,6 +77,7 @@ const LEAF_CHOICES = ['2nd open leaf', '3rd open leaf', '4th open leaf'] as cons
     CutTimer,
     LabFields,
     LabelScanner,
+    LocalDateTimePipe,
     MatchPreview,
     MatButtonModule,
     MatFormFieldModule,

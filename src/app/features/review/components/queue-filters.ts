@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, computed, input, output } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, input, output, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
@@ -10,6 +10,7 @@ import { READING_STATUSES } from '../../../../../shared/api/reading-answers.js';
 import type { ReviewQueueQuery } from '../../../../../shared/api/review-answers.js';
 import { STATUS_WORDS } from '../../../shared/readings/reading-words';
 import { QUEUE_DEFAULT_STATUS } from '../data/review-filters';
+import { dateRangeRefusal } from '../../../core/format/date-range';
 
 /** The review queue's filters: accession, character, site, status, observed date range, and the observer picked from a row. */
 @Component({
@@ -56,13 +57,16 @@ import { QUEUE_DEFAULT_STATUS } from '../data/review-filters';
       </mat-form-field>
       <mat-form-field subscriptSizing="dynamic">
         <mat-label>Observed from</mat-label>
-        <input matInput type="date" [value]="q.from ?? ''" (change)="set({ from: $any($event.target).value || undefined })" />
+        <input #fromBox matInput type="date" [value]="q.from ?? ''" (change)="setRange('from', fromBox)" [attr.aria-invalid]="rangeError() ? true : null" aria-describedby="queue-range-error" />
       </mat-form-field>
       <mat-form-field subscriptSizing="dynamic">
         <mat-label>Observed to</mat-label>
-        <input matInput type="date" [value]="q.to ?? ''" (change)="set({ to: $any($event.target).value || undefined })" />
+        <input #toBox matInput type="date" [value]="q.to ?? ''" (change)="setRange('to', toBox)" [attr.aria-invalid]="rangeError() ? true : null" aria-describedby="queue-range-error" />
       </mat-form-field>
     </div>
+    @if (rangeError(); as message) {
+      <p class="range-error" id="queue-range-error" role="alert"><mat-icon aria-hidden="true">error</mat-icon> {{ message }}</p>
+    }
     <div class="row">
       @if (q.observerId) {
         <button mat-stroked-button type="button" (click)="set({ observerId: undefined })" [attr.aria-label]="'Stop filtering by observer ' + (observerName() ?? q.observerId)">
@@ -71,7 +75,7 @@ import { QUEUE_DEFAULT_STATUS } from '../data/review-filters';
       } @else {
         <span class="hl-muted hint">Pick an observer's name in the list to see only their readings.</span>
       }
-      <button mat-button type="button" (click)="clear.emit()"><mat-icon aria-hidden="true">filter_alt_off</mat-icon> Clear filters</button>
+      <button mat-button type="button" (click)="clearAll()"><mat-icon aria-hidden="true">filter_alt_off</mat-icon> Clear filters</button>
     </div>
   `,
   styles: `
@@ -90,6 +94,13 @@ import { QUEUE_DEFAULT_STATUS } from '../data/review-filters';
     .hint {
       font: var(--mat-sys-body-small);
     }
+    .range-error {
+      display: flex;
+      align-items: center;
+      gap: 6px;
+      margin: 8px 0 0;
+      color: var(--mat-sys-error);
+    }
   `,
 })
 export class QueueFilters {
@@ -105,8 +116,30 @@ export class QueueFilters {
   protected readonly statusWords = STATUS_WORDS;
   protected readonly defaultStatus = QUEUE_DEFAULT_STATUS;
   protected readonly colourCharacters = computed(() => this.characters().filter((c) => c.colour));
+  protected readonly rangeError = signal<string | null>(null);
 
   protected set(change: Partial<ReviewQueueQuery>): void {
     this.changed.emit(change);
+  }
+
+  /**
+   * Applies an observed-from or observed-to day unless it would put From after To; then the day
+   * is not applied, the field goes back to the day in force and the message says why.
+   */
+  protected setRange(end: 'from' | 'to', box: HTMLInputElement): void {
+    const value = box.value || undefined;
+    const q = this.query();
+    const refusal = dateRangeRefusal(end === 'from' ? value : q.from, end === 'to' ? value : q.to);
+    this.rangeError.set(refusal);
+    if (refusal) {
+      box.value = q[end] ?? '';
+      return;
+    }
+    this.set({ [end]: value });
+  }
+
+  protected clearAll(): void {
+    this.rangeError.set(null);
+    this.clear.emit();
   }
 }
