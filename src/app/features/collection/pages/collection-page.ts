@@ -19,7 +19,7 @@ import { AccessionList } from '../components/accession-list';
 import { CharacterDialog } from '../components/character-dialog';
 import { CharacterList } from '../components/character-list';
 import { LoadState } from '../../../shared/load-state';
-import { ProgressSummary } from '../components/progress-summary';
+import { ProgressSummary } from '../../../shared/collection/progress-summary';
 import { SiteList } from '../components/site-list';
 import { CollectionApi, PASSPORT_CSV_URL } from '../../../shared/collection/collection-api';
 

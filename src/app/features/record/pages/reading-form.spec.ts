@@ -12,6 +12,9 @@ import { READING_DRAFT_KEY, READING_MEMORY_KEY } from '../data/reading-memory';
 import { TEST_ACCESSIONS, TEST_CHARACTERS, TEST_SITES } from '../../../shared/testing/collection-fixtures';
 import { ReadingForm } from './reading-form';
 
+/** What GET /api/progress answers in these tests: 4 of 10 plants fully characterised. */
+const PROGRESS_COUNTS = { complete: 4, partial: 1, 'not-started': 5 };
+
 describe('ReadingForm', () => {
   let http: HttpTestingController;
 
@@ -36,6 +39,8 @@ describe('ReadingForm', () => {
     vi.useRealTimers();
     // The match preview loads the chips once a colour is typed; these tests do not look at it.
     http.match((r) => r.url.startsWith('/api/reference-sets')).forEach((r) => r.flush([]));
+    // "Next plant" brings the season's count back, which asks again.
+    http.match('/api/progress').forEach((r) => r.flush({ plants: [], counts: PROGRESS_COUNTS }));
     http.verify();
   });
 
@@ -48,6 +53,8 @@ describe('ReadingForm', () => {
     http.expectOne('/api/sites').flush(TEST_SITES);
     http.expectOne('/api/characters').flush(TEST_CHARACTERS);
     if (queryParams['correct']) http.expectOne(`/api/readings/${queryParams['correct']}`).flush(savedReading());
+    // The season's count sits on top of a new reading (not on a correction or from a plant sheet).
+    http.match('/api/progress').forEach((r) => r.flush({ plants: [], counts: PROGRESS_COUNTS }));
     await fixture.whenStable();
     fixture.detectChanges();
     return { fixture, el: fixture.nativeElement as HTMLElement };
@@ -70,6 +77,11 @@ describe('ReadingForm', () => {
     expect((el.querySelector('hl-accession-picker input') as HTMLInputElement).value).toBe('HL-0001 · Purple Dawn');
     expect(el.querySelector('.lights [aria-checked=true]')?.textContent).toContain('Overcast');
     expect(el.textContent).toContain('Read the outer face below the blade.');
+  });
+
+  it('should show this season’s count of characterised plants on Record, the recorder’s home', async () => {
+    const { el } = await open();
+    expect(el.querySelector('hl-progress-summary')?.textContent?.replace(/\s+/g, ' ')).toContain('4 of 10 plants characterised this season');
   });
 
   it('should take the site from the plant', async () => {

@@ -18,6 +18,7 @@ import { readingSummary } from '../../../shared/readings/reading-summary';
 import { ChipCatalogue } from '../../../shared/chips/chip-catalogue';
 import { applyFieldErrors } from '../../../core/http/field-errors';
 import { CollectionApi } from '../../../shared/collection/collection-api';
+import { ProgressSummary } from '../../../shared/collection/progress-summary';
 import { CUT_SECONDS_WARN, LIGHTS, READING_METHODS, type ReadingDetail, type ReadingMethod } from '../../../../../shared/api/reading-answers.js';
 import { ReadingMatch } from '../../../shared/readings/reading-match';
 import { ReadingsApi, newIdempotencyKey } from '../../../shared/readings/readings-api';
@@ -86,6 +87,7 @@ const LEAF_CHOICES = ['2nd open leaf', '3rd open leaf', '4th open leaf'] as cons
     MatProgressSpinnerModule,
     MatSelectModule,
     PhotoSummary,
+    ProgressSummary,
     ReactiveFormsModule,
     ReadingMatch,
     RouterLink,

@@ -1,20 +1,28 @@
-import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
 import { MatIconModule } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
 
-import { PlantSheetApi } from '../../../shared/collection/plant-sheet-api';
+import { PlantSheetApi } from './plant-sheet-api';
 
-/** This season's count of plants fully, partly and not yet characterised, leading to the progress table. */
+/**
+ * This season's count, "N of M plants characterised this season" (fully: every row done or
+ * skipped), with how many are partly done and not started, leading to the progress table. Shown
+ * on Collection and on Record, the recorder's home.
+ */
 @Component({
   selector: 'hl-progress-summary',
   imports: [MatIconModule, RouterLink],
   changeDetection: ChangeDetectionStrategy.OnPush,
   template: `
-    @if (progress.value(); as p) {
+    @if (progress.hasValue()) {
+      @let p = progress.value();
       <a class="summary" routerLink="/collection/progress">
         <mat-icon aria-hidden="true">checklist</mat-icon>
-        <span>This season: <strong>{{ p.counts.complete }}</strong> {{ p.counts.complete === 1 ? 'plant' : 'plants' }} fully characterised, <strong>{{ p.counts.partial }}</strong> partly, <strong>{{ p.counts['not-started'] }}</strong> not started</span>
+        <span
+          ><strong>{{ p.counts.complete }}</strong> of <strong>{{ total() }}</strong> {{ total() === 1 ? 'plant' : 'plants' }} characterised this season · {{ p.counts.partial }} partly,
+          {{ p.counts['not-started'] }} not started</span
+        >
         <mat-icon aria-hidden="true">chevron_right</mat-icon>
       </a>
     }
@@ -41,4 +49,9 @@ import { PlantSheetApi } from '../../../shared/collection/plant-sheet-api';
 export class ProgressSummary {
   private readonly api = inject(PlantSheetApi);
   protected readonly progress = rxResource({ stream: () => this.api.progress() });
+  protected readonly total = computed(() => {
+    // Out of range the count cannot be asked: the summary then stays away rather than failing.
+    const counts = this.progress.hasValue() ? this.progress.value().counts : null;
+    return counts ? counts.complete + counts.partial + counts['not-started'] : 0;
+  });
 }
