@@ -1,8 +1,9 @@
 import { ACCEPTABILITY_THRESHOLD_DE00 } from '../../shared/colour/constants.js';
 import { deltaE00 } from '../../shared/colour/delta-e.js';
 import type { Lab } from '../../shared/colour/lab.js';
+import type { ComparisonKind, DriftComparison, GroupKey } from '../../shared/api/analysis-answers.js';
 import { meanLab, spreadDeltaE00 } from './lab-stats.js';
-import { permutationTest, type PermutationResult } from './permutation-test.js';
+import { permutationTest } from './permutation-test.js';
 
 /** What the drift analysis needs of a reading (superseded readings are left out before it). */
 export interface DriftInput {
@@ -22,28 +23,6 @@ export interface SeasonGroup {
   spreadDeltaE00: number;
   firstObservedAt: Date;
   lastObservedAt: Date;
-}
-
-/** Between consecutive groups, or the same season in consecutive years. */
-export type ComparisonKind = 'consecutive' | 'same-season';
-
-export interface GroupKey {
-  season: string;
-  seasonYear: number;
-}
-
-export interface DriftComparison {
-  from: GroupKey;
-  to: GroupKey;
-  kind: ComparisonKind;
-  deltaE00: number;
-  pValue: number;
-  test: PermutationResult['method'];
-  permutations: number;
-  /** ΔE00 ≥ threshold, p < alpha, and both groups large enough. */
-  drift: boolean;
-  /** Why it is or is not drift, in plain words. */
-  reason: string;
 }
 
 export interface DriftRules {

@@ -11,23 +11,11 @@
  * Codes are our own, lowercase and dotted, and never change once seeded: observations refer to
  * them. A few codes were once non-colour characters of the character catalogue; they live here now.
  */
-import type { DescriptorCategory, DescriptorKind } from '../../shared/api/descriptor-answers.js';
+import type { Descriptor } from '../../shared/api/descriptor-answers.js';
 import { RAW_TISSUE_CAUTION } from './character-catalogue.js';
 
-/** One entry of the seeded descriptor catalogue. */
-export interface DescriptorSeed {
-  code: string;
-  label: string;
-  object: string;
-  kind: DescriptorKind;
-  categories: DescriptorCategory[];
-  numeratorCode: string | null;
-  denominatorCode: string | null;
-  howToMeasure: string;
-  caution: string | null;
-  /** The colour character read on the same part, so the plant sheet shows both as one row. */
-  characterCode?: string;
-}
+/** One entry of the seeded descriptor catalogue: the catalogue's fields of a descriptor, and the colour character read on the same part (so the plant sheet shows both as one row). */
+export type DescriptorSeed = Pick<Descriptor, 'code' | 'label' | 'object' | 'kind' | 'categories' | 'numeratorCode' | 'denominatorCode' | 'howToMeasure' | 'caution'> & { characterCode?: string };
 
 const LEAF = 'the third fully opened leaf from the top';
 const FULL_GROWTH = 'at full vegetative development (about 4–6 months after planting)';

@@ -4,6 +4,7 @@
 import ExcelJS from 'exceljs';
 import { CENTRE_STATISTIC, type AccessionProfile, type CharacterProfile, type DescriptorSummary } from '../../shared/api/profile-answers.js';
 import { KIND_QUANTITY } from '../../shared/api/descriptor-answers.js';
+import { ACCEPTABILITY_THRESHOLD_DE00, PERCEPTIBILITY_THRESHOLD_DE00 } from '../../shared/colour/constants.js';
 import { Accession } from '../collection/accession.entity.js';
 import { accessionProfile, type ProfileDeps } from './profile.js';
 
@@ -33,7 +34,7 @@ const COLOUR_COLUMNS: readonly Column<CharacterProfile>[] = [
   { header: 'chip', width: 12, means: 'Nearest chip of the reference set by ΔE00.', value: (_, c) => c.chip.code },
   { header: 'chip name', width: 24, means: 'The chip\'s name in words.', value: (_, c) => c.chip.name },
   { header: 'chip ΔE00', width: 9, numFmt: '0.00', means: 'CIEDE2000 difference between the accepted colour and the chip (kL = kC = kH = 1).', value: (_, c) => c.chip.deltaE00 },
-  { header: 'verdict', width: 16, means: 'ΔE00 in words: ≤ 0.8 indistinguishable, ≤ 1.8 close, else clearly different (Paravina et al. 2015).', value: (_, c) => c.chip.verdict },
+  { header: 'verdict', width: 16, means: `ΔE00 in words: ≤ ${PERCEPTIBILITY_THRESHOLD_DE00} indistinguishable, ≤ ${ACCEPTABILITY_THRESHOLD_DE00} close, else clearly different (Paravina et al. 2015).`, value: (_, c) => c.chip.verdict },
   { header: 'spread ΔE00', width: 10, numFmt: '0.00', means: 'Mean ΔE00 of the basis readings from the accepted colour.', value: (_, c) => c.spreadDeltaE00 },
   { header: 'readings', width: 9, numFmt: '0', means: 'Readings the accepted colour rests on.', value: (_, c) => c.nReadings },
   { header: 'readings in force', width: 9, numFmt: '0', means: 'Readings not superseded, of any review status.', value: (_, c) => c.nCurrent },

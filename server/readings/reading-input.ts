@@ -112,22 +112,27 @@ async function takeColour(m: EntityManager, src: ColourSources, set: LoadedSet, 
       return {
         lab: labFromTuple(sample.lab),
         source: null,
-        provenance: {
-          photoId: photo.photoId,
-          region: photo.region,
-          neutralRegion: photo.neutral?.region ?? null,
-          pixelCount: sample.pixelCount,
-          pixelsDropped: sample.pixelsDropped,
-          spreadDeltaE00: sample.spreadDeltaE00,
-          uniform: sample.uniform,
-          correction: sample.correction,
-          pipeline: sample.pipeline,
-          cluster: null,
-        },
+        provenance: photoProvenance(photo, sample, null),
         best: { code: best.code, name: best.name, hex: best.hex, deltaE00: best.deltaE00, inputHex: sample.hex, inGamut: sample.inGamut },
       };
     }
   }
+}
+
+/** Where a photo reading's colour came from: the region, its neutral, the sampling's counts and steps, and the colour chosen if the region was split. */
+function photoProvenance(photo: NonNullable<ReadingFields['photo']>, sample: PhotoSample, cluster: TakenColour['provenance']['cluster']): TakenColour['provenance'] {
+  return {
+    photoId: photo.photoId,
+    region: photo.region,
+    neutralRegion: photo.neutral?.region ?? null,
+    pixelCount: sample.pixelCount,
+    pixelsDropped: sample.pixelsDropped,
+    spreadDeltaE00: sample.spreadDeltaE00,
+    uniform: sample.uniform,
+    correction: sample.correction,
+    pipeline: sample.pipeline,
+    cluster,
+  };
 }
 
 /**
@@ -145,18 +150,7 @@ function clusterColour(photo: NonNullable<ReadingFields['photo']>, sample: Photo
   return {
     lab: labFromTuple(cluster.lab),
     source: null,
-    provenance: {
-      photoId: photo.photoId,
-      region: photo.region,
-      neutralRegion: photo.neutral?.region ?? null,
-      pixelCount: sample.pixelCount,
-      pixelsDropped: sample.pixelsDropped,
-      spreadDeltaE00: sample.spreadDeltaE00,
-      uniform: sample.uniform,
-      correction: sample.correction,
-      pipeline: sample.pipeline,
-      cluster: { index, of: sample.clusters.length, share: cluster.share, spreadDeltaE00: cluster.spreadDeltaE00 },
-    },
+    provenance: photoProvenance(photo, sample, { index, of: sample.clusters.length, share: cluster.share, spreadDeltaE00: cluster.spreadDeltaE00 }),
     best: { code: cluster.chip.code, name: cluster.chip.name, hex: cluster.chip.hex, deltaE00: cluster.chip.deltaE00, inputHex: cluster.hex, inGamut: cluster.inGamut },
   };
 }
