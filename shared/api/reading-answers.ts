@@ -1,6 +1,6 @@
 // The readings API's types and constants, without zod so the client may import
 // them; the request schemas are in readings.ts.
-import type { CreateReadingBody, ListReadingsQuery, SupersedeReadingBody } from './readings.js';
+import type { CreateReadingBody, CreateReadingsBody, ListReadingsQuery, SupersedeReadingBody } from './readings.js';
 import type { LabTuple } from '../colour/lab.js';
 import type { FieldError } from './problem.js';
 import type { Region } from '../photo/region.js';
@@ -70,6 +70,9 @@ export interface ReadingCluster {
 
 /** `POST /api/readings` body. Which colour field is needed depends on `method`. */
 export type CreateReadingRequest = CreateReadingBody;
+
+/** `POST /api/readings/batch` body: up to READINGS_BATCH_MAX readings, saved all or nothing. */
+export type CreateReadingsRequest = CreateReadingsBody;
 
 /** `POST /api/readings/:id/supersede` body: the corrected reading and why. */
 export type SupersedeReadingRequest = SupersedeReadingBody;

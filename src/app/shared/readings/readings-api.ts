@@ -4,7 +4,7 @@ import { Observable, filter, map } from 'rxjs';
 
 import { IDEMPOTENCY_HEADER } from '../../../../shared/api/idempotency.js';
 import { downloadStep, type DownloadProgress } from './blob-download';
-import type { CreateReadingRequest, ReadingDetail, ReadingDto, ReadingList, ReadingListQuery, SupersedeReadingRequest } from '../../../../shared/api/reading-answers.js';
+import type { CreatedReadings, CreateReadingRequest, CreateReadingsRequest, ReadingDetail, ReadingDto, ReadingList, ReadingListQuery, SupersedeReadingRequest } from '../../../../shared/api/reading-answers.js';
 
 /** The export formats offered. */
 export type ExportFormat = 'csv' | 'xlsx';
@@ -40,6 +40,11 @@ export class ReadingsApi {
    */
   create(body: CreateReadingRequest, idempotencyKey?: string): Observable<ReadingDetail> {
     return this.http.post<ReadingDetail>('/api/readings', body, { headers: keyHeader(idempotencyKey) });
+  }
+
+  /** Saves several readings together, all or nothing (the colours of one photo region as readings of their characters). */
+  createBatch(body: CreateReadingsRequest, idempotencyKey?: string): Observable<CreatedReadings> {
+    return this.http.post<CreatedReadings>('/api/readings/batch', body, { headers: keyHeader(idempotencyKey) });
   }
 
   /** Saves a correction: a new reading that supersedes reading `id`, with the reason. */

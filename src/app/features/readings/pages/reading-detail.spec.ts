@@ -57,6 +57,7 @@ const DETAIL = {
     uniform: true,
     correction: { kind: 'none' },
     pipeline: 'photo-sample/1',
+    cluster: null,
     instrument: null,
     source: null,
   },
@@ -112,6 +113,14 @@ describe('ReadingDetailPage', () => {
     expect((await open({ id: 1, role: 'admin' })).textContent).toContain('Correct this reading');
     TestBed.resetTestingModule();
     expect((await open({ id: 9, role: 'recorder' })).textContent).not.toContain('Correct this reading');
+  });
+
+  it('should say when the reading took one colour of a region that held several, and not otherwise', async () => {
+    expect((await open({ id: 4, role: 'recorder' })).querySelector('[data-testid="reading-cluster"]')).toBeNull();
+    TestBed.resetTestingModule();
+    const cluster = { index: 1, of: 2, share: 0.25, spreadDeltaE00: 0.21 };
+    const el = await open({ id: 4, role: 'recorder' }, { ...DETAIL, uniform: false, provenance: { ...DETAIL.provenance, uniform: false, cluster } } as ReadingDetail);
+    expect(el.querySelector('[data-testid="reading-cluster"]')?.textContent).toContain("Colour 2 of 2 in the region (25 % of it, spread ΔE00 0.2), not the region's mean");
   });
 
   it('should show the colour matched against the other reference set too, beside the set it was stored with', async () => {

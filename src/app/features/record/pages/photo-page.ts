@@ -13,6 +13,7 @@ import type { Region } from '../../../../../shared/photo/region.js';
 import { ApiError } from '../../../core/http/api-error';
 import { OfflineQueue } from '../../../core/offline/offline-queue';
 import { PhotoCanvas } from '../../../shared/photos/photo-canvas';
+import { ClusterReadings } from '../components/cluster-readings';
 import { RecordCautions } from '../components/record-cautions';
 import { SampleResult } from '../components/sample-result';
 import { previewRegion, type Pixels } from '../data/photo-preview';
@@ -34,7 +35,8 @@ const TOOLS: readonly { tool: Tool; icon: string; label: string; hint: string }[
 
 /**
  * Record → Photo: take or choose a photo, see it upright, draw the region on the tissue (and
- * optionally on a grey card), see a live preview at once and then the server's reading.
+ * optionally on a grey card), see a live preview at once and then the server's reading. A region
+ * that splits into colours can be saved as one reading per colour, each of its own character.
  */
 @Component({
   selector: 'hl-photo-page',
@@ -45,6 +47,7 @@ const TOOLS: readonly { tool: Tool; icon: string; label: string; hint: string }[
     MatProgressBarModule,
     MatProgressSpinnerModule,
     MatSliderModule,
+    ClusterReadings,
     PhotoCanvas,
     RecordCautions,
     SampleResult,
