@@ -1,7 +1,7 @@
 import { provideHttpClient, withInterceptors } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
-import { Router, provideRouter } from '@angular/router';
+import { Router, provideRouter, withComponentInputBinding } from '@angular/router';
 import { RouterTestingHarness } from '@angular/router/testing';
 
 import { errorInterceptor } from '../../../core/http/error-interceptor';
@@ -56,7 +56,7 @@ describe('ReadingsPage', () => {
 
   beforeEach(() => {
     TestBed.configureTestingModule({
-      providers: [provideRouter([{ path: 'readings', component: ReadingsPage }]), provideHttpClient(withInterceptors([errorInterceptor])), provideHttpClientTesting()],
+      providers: [provideRouter([{ path: 'readings', component: ReadingsPage }], withComponentInputBinding()), provideHttpClient(withInterceptors([errorInterceptor])), provideHttpClientTesting()],
     });
     http = TestBed.inject(HttpTestingController);
   });

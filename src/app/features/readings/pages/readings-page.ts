@@ -1,12 +1,12 @@
-import { ChangeDetectionStrategy, Component, DestroyRef, ErrorHandler, computed, inject, signal } from '@angular/core';
-import { rxResource, toSignal } from '@angular/core/rxjs-interop';
+import { ChangeDetectionStrategy, Component, DestroyRef, ErrorHandler, computed, inject, input, signal } from '@angular/core';
+import { rxResource } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatPaginatorModule, type PageEvent } from '@angular/material/paginator';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSortModule, type Sort } from '@angular/material/sort';
 import { MatTableModule } from '@angular/material/table';
-import { ActivatedRoute, Router, RouterLink } from '@angular/router';
+import { Router, RouterLink } from '@angular/router';
 import type { Subscription } from 'rxjs';
 
 import { AuthStore } from '../../../core/auth/auth-store';
@@ -17,6 +17,7 @@ import { VerdictMark } from '../../../shared/chips/verdict-mark';
 import { deltaEText } from '../../../shared/chips/chip-words';
 import { ReadingFiltersPanel } from '../components/reading-filters-panel';
 import { saveBlob } from '../../../shared/readings/blob-download';
+import { ReadingListParams } from '../../../shared/readings/reading-list-params';
 import { READING_SORTS, type ReadingListQuery, type ReadingSort } from '../../../../../shared/api/reading-answers.js';
 import { DEFAULT_SORT, PAGE_SIZES, activeFilterCount, filtersFromParams, paramsFromFilters } from '../data/reading-filters';
 import { LIGHT_WORDS, METHOD_WORDS, STATUS_WORDS, wordsFor } from '../../../shared/readings/reading-words';
@@ -38,14 +39,13 @@ interface ExportRun {
   selector: 'hl-readings-page',
   imports: [LocalDateTimePipe, MatButtonModule, MatIconModule, MatPaginatorModule, MatProgressBarModule, MatSortModule, MatTableModule, ReadingFiltersPanel, RouterLink, VerdictMark],
   templateUrl: './readings-page.html',
-  styleUrl: './readings-page.scss',
+  styleUrls: ['../../../shared/readings/reading-table.scss', './readings-page.scss'],
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
-export class ReadingsPage {
+export class ReadingsPage extends ReadingListParams {
   private readonly api = inject(ReadingsApi);
   private readonly collection = inject(CollectionApi);
   private readonly router = inject(Router);
-  private readonly route = inject(ActivatedRoute);
   private readonly errors = inject(ErrorHandler);
 
   protected readonly handset = inject(Viewport).handset;
@@ -63,8 +63,17 @@ export class ReadingsPage {
   protected readonly wordsFor = wordsFor;
   protected readonly deltaE = deltaEText;
 
-  private readonly params = toSignal(this.route.queryParams, { initialValue: this.route.snapshot.queryParams });
-  protected readonly query = computed(() => filtersFromParams(this.params()));
+  // The table's own query parameters; the rest come with ReadingListParams.
+  readonly season = input<string>();
+  readonly seasonYear = input<string>();
+  readonly method = input<string>();
+  readonly includeSuperseded = input<string>();
+  readonly sort = input<string>();
+  readonly dir = input<string>();
+
+  protected readonly query = computed(() =>
+    filtersFromParams({ ...this.listParams(), season: this.season(), seasonYear: this.seasonYear(), method: this.method(), includeSuperseded: this.includeSuperseded(), sort: this.sort(), dir: this.dir() }),
+  );
   protected readonly filterCount = computed(() => activeFilterCount(this.query()));
   protected readonly filtersOpen = signal(false);
 
@@ -83,6 +92,7 @@ export class ReadingsPage {
   private exportRun: Subscription | null = null;
 
   constructor() {
+    super();
     inject(DestroyRef).onDestroy(() => this.exportRun?.unsubscribe());
   }
 
@@ -139,6 +149,6 @@ export class ReadingsPage {
   }
 
   private go(query: ReadingListQuery): void {
-    void this.router.navigate([], { relativeTo: this.route, queryParams: paramsFromFilters(query) });
+    void this.router.navigate([], { queryParams: paramsFromFilters(query) });
   }
 }

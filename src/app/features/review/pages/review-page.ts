@@ -1,12 +1,12 @@
 import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
-import { rxResource, toSignal } from '@angular/core/rxjs-interop';
+import { rxResource } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatIconModule } from '@angular/material/icon';
 import { MatPaginatorModule, type PageEvent } from '@angular/material/paginator';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatTableModule } from '@angular/material/table';
-import { ActivatedRoute, Router } from '@angular/router';
+import { Router } from '@angular/router';
 
 import { Viewport } from '../../../core/layout/viewport';
 import { CollectionApi } from '../../../shared/collection/collection-api';
@@ -18,6 +18,7 @@ import { QueueFilters } from '../components/queue-filters';
 import { ReviewDialog, type ReviewDialogData } from '../components/review-dialog';
 import { QUEUE_DEFAULT_STATUS, QUEUE_PAGE_SIZES, paramsFromQueue, queueFromParams } from '../data/review-filters';
 import { ReviewsApi } from '../data/reviews-api';
+import { ReadingListParams } from '../../../shared/readings/reading-list-params';
 import { LocalDateTimePipe } from '../../../core/format/local-date-time';
 import { ConfirmDialog, type ConfirmDialogData } from '../../../shared/confirm-dialog';
 import { ApiError } from '../../../core/http/api-error';
@@ -31,15 +32,14 @@ import { ApiError } from '../../../core/http/api-error';
   selector: 'hl-review-page',
   imports: [LocalDateTimePipe, MatButtonModule, MatIconModule, MatPaginatorModule, MatProgressBarModule, MatTableModule, QueueFilters, VerdictMark],
   templateUrl: './review-page.html',
-  styleUrl: './review-page.scss',
+  styleUrls: ['../../../shared/readings/reading-table.scss', './review-page.scss'],
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
-export class ReviewPage {
+export class ReviewPage extends ReadingListParams {
   private readonly api = inject(ReviewsApi);
   private readonly collection = inject(CollectionApi);
   private readonly dialog = inject(MatDialog);
   private readonly router = inject(Router);
-  private readonly route = inject(ActivatedRoute);
 
   protected readonly handset = inject(Viewport).handset;
   protected readonly columns = ['swatch', 'observedAt', 'accession', 'character', 'site', 'method', 'deltaE00', 'observer', 'status', 'open'];
@@ -49,8 +49,7 @@ export class ReviewPage {
   protected readonly wordsFor = wordsFor;
   protected readonly deltaE = deltaEText;
 
-  private readonly params = toSignal(this.route.queryParams, { initialValue: this.route.snapshot.queryParams });
-  protected readonly query = computed(() => queueFromParams(this.params()));
+  protected readonly query = computed(() => queueFromParams(this.listParams()));
   protected readonly statusLabel = computed(() => STATUS_WORDS[this.query().status ?? QUEUE_DEFAULT_STATUS].label.toLowerCase());
   protected readonly filtersOpen = signal(false);
 
@@ -123,6 +122,6 @@ export class ReviewPage {
   }
 
   private go(query: ReviewQueueQuery): void {
-    void this.router.navigate([], { relativeTo: this.route, queryParams: paramsFromQueue(query) });
+    void this.router.navigate([], { queryParams: paramsFromQueue(query) });
   }
 }
