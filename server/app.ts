@@ -29,6 +29,7 @@ import { profileRoutes } from './profile/profile.routes.js';
 import { readingsRoutes } from './readings/readings.routes.js';
 import { notificationRoutes, reviewQueueRoutes, reviewRoutes } from './reviews/reviews.routes.js';
 import { referenceSetRoutes } from './reference-sets/reference-sets.routes.js';
+import { printBatchRoutes } from './reference-sets/print-batches.routes.js';
 import { ReferenceSets } from './reference-sets/reference-sets.js';
 import { userRoutes } from './users/users.routes.js';
 import { preferenceRoutes } from './users/preferences.routes.js';
@@ -105,6 +106,7 @@ export function createApp(options: AppOptions): Express {
   api.use('/', descriptorRoutes(ctx));
   api.use('/', plantSheetRoutes(ctx));
   api.use('/', referenceSetRoutes(ctx));
+  api.use('/print-batches', printBatchRoutes(ctx));
   api.use('/photos', photoRoutes(ctx));
   api.use('/calibration', calibrationRoutes(ctx));
   api.use('/readings', reviewRoutes(ctx));

@@ -29,6 +29,8 @@ const SENTENCES: Record<string, (who: string, subject: string | null, d: Detail)
     return `${who} ${verb} ${subjectWords(s)}${comment}.`;
   },
   'readings.imported': (who, _s, d) => `${who} imported ${str(d?.['count'] ?? 'some')} readings from a file (readings ${str(d?.['first'])} to ${str(d?.['last'])}).`,
+  'print-batch.created': (who, s, d) => `${who} recorded ${subjectWords(s)}: the ${str(d?.['kind'])} of set ${str(d?.['setId'])} printed on ${str(d?.['printedOn'])}.`,
+  'print-batch.measured': (who, s, d) => `${who} entered ${str(d?.['patches'])} measured patches of ${subjectWords(s)}.`,
   'auth.sign-in': (who) => `${who} signed in.`,
   'auth.sign-in-failed': (_who, s, d) => `A sign-in as ${s?.startsWith('email:') ? s.slice(6) : 'someone'} was refused${d?.['reason'] ? ` (${str(d['reason'])})` : ''}.`,
   'auth.sign-out': (who) => `${who} signed out.`,

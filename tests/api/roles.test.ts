@@ -51,6 +51,8 @@ interface Fixtures {
   certificateOf(role?: Role): number;
   /** A BrAPI token to revoke (revoking twice answers the same row). */
   apiTokenId: number;
+  /** A print batch of v1's card, to read and to add measured patches to. */
+  printBatchId: number;
 }
 
 /** One API route: who may call it and a request that succeeds for them. */
@@ -175,6 +177,10 @@ const ROUTES: readonly RouteCase[] = [
   { method: 'GET', path: '/api/analysis/overview', access: EVERYONE, ok: 200 },
   { method: 'GET', path: '/api/analysis/drift', access: EVERYONE, ok: 200, url: (f) => `/api/analysis/drift?accessionId=${f.accessionId}&characterId=${f.characterId}` },
   { method: 'GET', path: '/api/analysis/sites', access: EVERYONE, ok: 200, url: (f) => `/api/analysis/sites?accessionId=${f.accessionId}&characterId=${f.characterId}` },
+  { method: 'GET', path: '/api/print-batches', access: EVERYONE, ok: 200 },
+  { method: 'POST', path: '/api/print-batches', access: ADMIN, ok: 201, body: () => ({ setId: 'v2', kind: 'booklet', printedOn: '2026-02-01', note: 'Matrix printer, gloss paper' }) },
+  { method: 'GET', path: '/api/print-batches/:id', access: EVERYONE, ok: 200, url: (f) => `/api/print-batches/${f.printBatchId}` },
+  { method: 'POST', path: '/api/print-batches/:id/patches', access: ADMIN, ok: 201, url: (f) => `/api/print-batches/${f.printBatchId}/patches`, body: (f) => ({ patches: [{ chipCode: `F-${String(1 + (f.next() % 189)).padStart(3, '0')}`, lab: [50, 10, 10] }] }) },
   { method: 'GET', path: '/api/api-tokens', access: ADMIN, ok: 200 },
   { method: 'POST', path: '/api/api-tokens', access: ADMIN, ok: 201, body: (f) => ({ userId: f.patchTargetId, label: `Matrix token ${f.next()}` }) },
   { method: 'POST', path: '/api/api-tokens/:id/revoke', access: ADMIN, ok: 200, url: (f) => `/api/api-tokens/${f.apiTokenId}/revoke` },
@@ -321,6 +327,7 @@ describe('who may call each API route', () => {
       ...(await reviewFixtures(h, clients)),
       certificateOf: () => 0,
       apiTokenId: (await admin.post('/api/api-tokens', { userId: target.id, label: 'Matrix token' }).expect(201)).body.id as number,
+      printBatchId: (await admin.post('/api/print-batches', { setId: 'v1', kind: 'card', printedOn: '2026-01-05', note: 'Matrix printer, matt paper' }).expect(201)).body.id as number,
     };
     Object.assign(f, await certificateFixtures(h, clients, f.closedCalibrationSessionId));
   });
