@@ -11,7 +11,7 @@ import { seasonOf } from '../shared/collection/season-of.js';
 import { displayHex } from '../shared/colour/display-hex.js';
 import type { Lab } from '../shared/colour/lab.js';
 import { analyseDrift } from '../server/analysis/drift.js';
-import { driftAnswer, driftRows, utcFromSqlite } from '../server/analysis/drift-query.js';
+import { driftAnswer, driftRows } from '../server/analysis/drift-query.js';
 import { DriftOverview } from '../server/analysis/drift-overview.js';
 import { DriftPool } from '../server/analysis/drift-pool.js';
 import { meanLab, spreadDeltaE00 } from '../server/analysis/lab-stats.js';
@@ -151,7 +151,7 @@ const fetched = await time(async () => {
   for (const p of pairs) all.push(await driftRows(ds, p.accessionId, p.characterId));
   return all;
 });
-const inputs = fetched.value.map((rows) => rows.map((r) => ({ lab: { l: r.l, a: r.a, b: r.b }, season: r.season, seasonYear: r.seasonYear, observedAt: utcFromSqlite(r.observedAt) })));
+const inputs = fetched.value.map((rows) => rows.map((r) => ({ lab: { l: r.l, a: r.a, b: r.b }, season: r.season, seasonYear: r.seasonYear, observedAt: new Date(r.observedAt) })));
 const stats = await time(() => {
   for (const rows of inputs) {
     const groups = new Map<string, Lab[]>();

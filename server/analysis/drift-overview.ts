@@ -5,6 +5,7 @@
 // worker threads.
 import type { DataSource } from 'typeorm';
 import type { DriftOverviewAnswer, DriftOverviewItem } from '../../shared/api/analysis-answers.js';
+import { OBSERVED_AT_MS_SQL, rawRows } from './drift-query.js';
 import type { DriftPool } from './drift-pool.js';
 import { pairFlags, type PairFlags, type PairInput } from './pair-flags.js';
 
@@ -95,12 +96,12 @@ export class DriftOverview {
     // Rows come back as arrays from better-sqlite3 itself (TypeORM's layer would build an object
     // per row, which dominates a 100,000-row read), with the instant as epoch milliseconds from
     // SQLite's julianday (TypeORM stores "YYYY-MM-DD HH:MM:SS.SSS" UTC text).
-    const columns = `"accessionId", "characterId", "siteId", "l", "a", "b", "season", "seasonYear", CAST(ROUND((julianday("observedAt") - 2440587.5) * 86400000) AS INTEGER)`;
+    const columns = `"accessionId", "characterId", "siteId", "l", "a", "b", "season", "seasonYear", ${OBSERVED_AT_MS_SQL}`;
     const rows: RawRow[] =
       stale.length > 50
-        ? this.raw(`SELECT ${columns} FROM "reading" WHERE "supersededById" IS NULL ORDER BY "observedAt", "id"`)
+        ? rawRows<RawRow>(this.ds, `SELECT ${columns} FROM "reading" WHERE "supersededById" IS NULL ORDER BY "observedAt", "id"`)
         : stale.flatMap((s) =>
-            this.raw(`SELECT ${columns} FROM "reading" WHERE "accessionId" = ? AND "characterId" = ? AND +"supersededById" IS NULL ORDER BY "observedAt", "id"`, [s.accessionId, s.characterId]),
+            rawRows<RawRow>(this.ds, `SELECT ${columns} FROM "reading" WHERE "accessionId" = ? AND "characterId" = ? AND +"supersededById" IS NULL ORDER BY "observedAt", "id"`, [s.accessionId, s.characterId]),
           );
     for (const [accessionId, characterId, siteId, l, a, b, season, seasonYear, at] of rows) {
       const key = `${accessionId}:${characterId}`;
@@ -115,12 +116,6 @@ export class DriftOverview {
       p.observedAt.push(at);
     }
     return stale.map((s) => byKey.get(keyOf(s))!);
-  }
-
-  /** A read straight through the data source's better-sqlite3 connection, rows as arrays. */
-  private raw(sql: string, params: unknown[] = []): RawRow[] {
-    const db = (this.ds.driver as unknown as { databaseConnection: { prepare(sql: string): { raw(on: boolean): { all(...p: unknown[]): unknown[] } } } }).databaseConnection;
-    return db.prepare(sql).raw(true).all(...params) as RawRow[];
   }
 
   /** Flagged pairs with their names, largest ΔE00 first. */

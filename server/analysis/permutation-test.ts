@@ -1,6 +1,6 @@
 import { deltaE00 } from '../../shared/colour/delta-e.js';
 import type { Lab } from '../../shared/colour/lab.js';
-import { mulberry32 } from '../../shared/random/mulberry32.js';
+import { MULBERRY32_STEP, mulberry32Output } from '../../shared/random/mulberry32.js';
 
 /** How a permutation test can be run. */
 export interface PermutationOptions {
@@ -126,14 +126,16 @@ export function permutationTest(a: readonly Lab[], b: readonly Lab[], opts: Perm
   const h = opts.exceedances ?? SEQUENTIAL_EXCEEDANCES_DEFAULT;
   const alpha = opts.alpha ?? 0.05;
   const riskPerLook = (opts.resamplingRisk ?? RESAMPLING_RISK_DEFAULT) / Math.max(1, Math.floor(rounds / LOOK_EVERY));
-  const random = mulberry32(opts.seed);
+  // mulberry32 (shared/random) with its state kept here: the same numbers as mulberry32(seed), drawn in the hot loop without a closure.
+  let state = opts.seed >>> 0;
   const order = Uint32Array.from({ length: n }, (_, i) => i);
   let extreme = 0;
   for (let r = 0; r < rounds; r++) {
     // Partial Fisher–Yates (Knuth, TAOCP vol. 2, Algorithm P): the first k places become a uniform random k-subset.
     let sl = 0, sa = 0, sb = 0;
     for (let i = 0; i < k; i++) {
-      const j = i + Math.floor(random() * (n - i));
+      state = (state + MULBERRY32_STEP) >>> 0;
+      const j = i + Math.floor(mulberry32Output(state) * (n - i));
       const t = order[i]!;
       order[i] = order[j]!;
       order[j] = t;
