@@ -34,6 +34,13 @@ export const routes: Routes = [
       // Each role starts on its own section; the guard runs after authGuard, so the account is known.
       { path: '', pathMatch: 'full', canActivate: [homeGuard], children: [] },
       {
+        // A plant's sheet to look at, open to every role (reviewers follow progress links here); Record's copy is the one to fill in.
+        path: 'collection/plants/:plantId',
+        title: 'Plant sheet · Hueledger',
+        data: { readOnly: true },
+        loadComponent: () => import('./features/record/pages/plant-sheet').then((m) => m.PlantSheetPage),
+      },
+      {
         path: 'collection',
         loadChildren: () => import('./features/collection/collection.routes').then((m) => m.COLLECTION_ROUTES),
       },

@@ -5,7 +5,9 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
 
+import { AuthStore } from '../../../core/auth/auth-store';
 import { PlantSheetApi } from '../../../shared/collection/plant-sheet-api';
+import { plantSheetPath } from '../../../shared/collection/sheet-link';
 import { progressWords, settledPercent } from '../../../shared/collection/sheet-progress';
 
 /** Words of each progress state, with an icon so the state never rests on colour alone. */
@@ -21,11 +23,12 @@ export const STATE_WORDS = {
   imports: [MatButtonModule, MatIconModule, MatProgressBarModule, RouterLink],
   changeDetection: ChangeDetectionStrategy.OnPush,
   template: `
-    @if (progress.value(); as plants) {
+    @if (progress.hasValue()) {
+      @let plants = progress.value();
       <ul class="list">
         @for (p of plants; track p.plantId) {
           <li>
-            <a class="plant" [routerLink]="['/record/plant', p.plantId]" [attr.aria-label]="'Plant sheet of ' + p.plantLabel">
+            <a class="plant" [routerLink]="sheetPath(p.plantId)" [attr.aria-label]="'Plant sheet of ' + p.plantLabel">
               <span class="head">
                 <strong>Plant {{ p.plantLabel }}</strong>
                 <span class="state"><mat-icon inline aria-hidden="true">{{ words[p.state].icon }}</mat-icon> {{ words[p.state].label }} · {{ p.season ?? 'no season' }} {{ p.seasonYear }}</span>
@@ -74,6 +77,7 @@ export const STATE_WORDS = {
 })
 export class PlantProgressList {
   private readonly api = inject(PlantSheetApi);
+  private readonly auth = inject(AuthStore);
 
   readonly accessionId = input.required<number>();
   /** Bumped by the page when plants change, to load again. */
@@ -81,6 +85,11 @@ export class PlantProgressList {
 
   protected readonly words = STATE_WORDS;
   protected readonly progress = rxResource({ params: () => ({ id: this.accessionId(), n: this.reload() }), stream: ({ params }) => this.api.accessionProgress(params.id) });
+
+  /** Recorders open the sheet to fill in; reviewers the same sheet read-only. */
+  protected sheetPath(plantId: number): (string | number)[] {
+    return plantSheetPath(this.auth.role(), plantId);
+  }
 
   protected countWords(p: Parameters<typeof progressWords>[0]): string {
     return progressWords(p);

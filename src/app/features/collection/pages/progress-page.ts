@@ -9,7 +9,9 @@ import { MatTableModule } from '@angular/material/table';
 import { RouterLink } from '@angular/router';
 
 import type { PlantProgress, ProgressState } from '../../../../../shared/api/plant-sheet-answers.js';
+import { AuthStore } from '../../../core/auth/auth-store';
 import { PlantSheetApi } from '../../../shared/collection/plant-sheet-api';
+import { plantSheetPath } from '../../../shared/collection/sheet-link';
 import { settledPercent } from '../../../shared/collection/sheet-progress';
 import { LoadState } from '../../../shared/load-state';
 import { STATE_WORDS } from '../components/plant-progress-list';
@@ -49,7 +51,7 @@ import { sortProgress, type ProgressColumn } from '../data/progress-sort';
               </ng-container>
               <ng-container matColumnDef="plant">
                 <th mat-header-cell *matHeaderCellDef mat-sort-header>Plant</th>
-                <td mat-cell *matCellDef="let r"><a [routerLink]="['/record/plant', r.plantId]">{{ r.plantLabel }}</a></td>
+                <td mat-cell *matCellDef="let r"><a [routerLink]="sheetPath(r.plantId)">{{ r.plantLabel }}</a></td>
               </ng-container>
               <ng-container matColumnDef="site">
                 <th mat-header-cell *matHeaderCellDef mat-sort-header>Site</th>
@@ -103,6 +105,7 @@ import { sortProgress, type ProgressColumn } from '../data/progress-sort';
 export class ProgressPage {
   private readonly api = inject(PlantSheetApi);
   private readonly collection = inject(CollectionApi);
+  private readonly auth = inject(AuthStore);
 
   protected readonly words = STATE_WORDS;
   protected readonly columns: ProgressColumn[] = ['accession', 'plant', 'site', 'state', 'colour', 'descriptors', 'percent'];
@@ -111,6 +114,11 @@ export class ProgressPage {
   protected readonly sites = rxResource({ stream: () => this.collection.sites() });
   protected readonly progress = rxResource({ params: () => ({ siteId: this.siteId() }), stream: ({ params }) => this.api.progress(params.siteId) });
   protected readonly rows = computed(() => sortProgress(this.progress.value()?.plants ?? [], this.sort().active, this.sort().direction));
+
+  /** Recorders open the sheet to fill in; reviewers the same sheet read-only (the Record section would turn them away). */
+  protected sheetPath(plantId: number): (string | number)[] {
+    return plantSheetPath(this.auth.role(), plantId);
+  }
 
   protected stateOf(p: PlantProgress): (typeof STATE_WORDS)[ProgressState] {
     return STATE_WORDS[p.state];

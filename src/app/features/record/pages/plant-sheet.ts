@@ -42,6 +42,8 @@ export class PlantSheetPage {
 
   /** The plant's id from the route. */
   readonly plantId = input.required<string>();
+  /** Whether the sheet is only looked at (Collection's copy, open to reviewers): no entry, no skips (from the route's data). */
+  readonly readOnly = input(false);
 
   protected readonly system = inject(UnitPreference).system;
   protected readonly methodWords = METHOD_WORDS;
