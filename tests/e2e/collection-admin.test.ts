@@ -1,6 +1,8 @@
 // Managing the collection in Chromium against the real server with the demo data: an admin at a
 // desk edits a site's season scheme across the year end and adds a plant; a recorder on a phone
-// enters descriptor values in inches, sees the derived ratio, and switches to metric.
+// enters descriptor values from the plant sheet in inches, sees the derived ratio, switches units
+// without converting what was typed and finds the unit kept on the server; a reviewer opens a
+// plant from the progress table and stays on its sheet, read-only.
 import assert from 'node:assert/strict';
 import { before, describe, test } from 'node:test';
 import type { Page } from 'playwright-core';
@@ -19,6 +21,7 @@ interface SiteAnswer {
   seasons: { name: string; start: string; end: string }[];
 }
 interface DescriptorAnswer {
+  id: number;
   code: string;
   label: string;
   kind: string;
@@ -132,7 +135,7 @@ describe('an admin at a desk manages sites and accessions', () => {
     await dialog.getByLabel('Planted on').fill('2025-01-15');
     await dialog.getByRole('button', { name: 'Add plant' }).click();
     await page.locator('li.plant', { hasText: 'E2E-07' }).waitFor();
-    assert.match(await page.locator('li.plant', { hasText: 'E2E-07' }).innerText(), /Planted 2025-01-15 · \d+ months/);
+    assert.match(await page.locator('li.plant', { hasText: 'E2E-07' }).innerText(), /Planted Jan 15, 2025 · \d+ months/);
     const id = Number(new URL(page.url()).pathname.split('/').pop());
     const accession = await api<AccessionAnswer>(page, `/api/accessions/${id}`);
     assert.ok(accession.plants.some((p) => p.label === 'E2E-07' && p.plantedOn === '2025-01-15'));
@@ -192,51 +195,83 @@ describe('a recorder on a phone enters descriptors', () => {
     await page.getByRole('heading', { name: 'Descriptors' }).waitFor();
   });
 
-  // Descriptor entry now follows the plant sheet's walk order and keeps what was typed when the unit
-  // changes (no conversion); tests/e2e/plant-sheet.test.ts enters every descriptor that way. These
-  // two still assume the old page and conversion on switching: to be rewritten for the new page.
-  test('should type petiole 40 in and sheath 28 in, see the ratio 0.70 computed live, then 101.6 cm in metric', { skip: 'written for the descriptor page before the plant sheet; rewrite pending' }, async () => {
-    await page.getByRole('group', { name: 'Units' }).getByText('Imperial', { exact: true }).click();
-    await page.getByLabel('Petiole length', { exact: true }).fill('40');
-    await page.getByLabel('Sheath length', { exact: true }).fill('28');
+  /** The descriptor entry row of a descriptor by its code (the ratio's words also name its parts, so not by text). */
+  async function rowOf(code: string) {
+    const descriptor = (await api<DescriptorAnswer[]>(page, '/api/descriptors')).find((d) => d.code === code);
+    assert.ok(descriptor, `the catalogue has ${code}`);
+    return { descriptor, row: page.locator(`#descriptor-${descriptor.id}`), field: page.locator(`#descriptor-${descriptor.id} input`) };
+  }
+
+  let sheetUrl = '';
+
+  test('should type petiole 40 in and sheath 28 in from the plant sheet, see the ratio 0.70 computed live, and keep 40 and 28 as typed when switching to metric', async () => {
+    const accessions = await api<AccessionAnswer[]>(page, '/api/accessions');
+    const plant = accessions.find((a) => a.accessionNumber === 'HL-0001')!.plants[0]!;
+    sheetUrl = `${app.url}/record/plant/${plant.id}`;
+    await page.goto(sheetUrl);
+    await page.getByRole('link', { name: /^Petiole length: / }).click();
+    await page.waitForURL((u) => u.pathname === '/record/descriptors' && u.searchParams.get('sheet') === String(plant.id));
+    const units = page.getByRole('group', { name: 'Units' });
+    await units.getByText('Imperial', { exact: true }).click();
+    const petiole = await rowOf('petiole.length');
+    const sheath = await rowOf('sheath.length');
+    // Each row takes the page's units once it is redrawn: wait for its toggle before typing.
+    await petiole.row.locator('.mat-button-toggle-checked', { hasText: 'in' }).waitFor();
+    await petiole.field.fill('40');
+    await sheath.field.fill('28');
     const ratio = (await api<DescriptorAnswer[]>(page, '/api/descriptors')).find(
       (d) => d.kind === 'ratio' && [d.numeratorCode, d.denominatorCode].sort().join() === 'petiole.length,sheath.length',
     );
     assert.ok(ratio, 'the catalogue has a ratio of petiole and sheath length');
     // The issue's figures: petiole about 40 in, sheath about 28 in, ratio 0.70 (common practice, no source).
-    const expected = '0.70';
     const ratioRow = page.locator('hl-descriptor-row', { hasText: ratio.label });
-    await ratioRow.locator('.ratio-value', { hasText: expected }).waitFor();
+    await ratioRow.locator('.ratio-value', { hasText: '0.70' }).waitFor();
     assert.match(await ratioRow.innerText(), /computed from (petiole length and sheath length|sheath length and petiole length)/);
     assert.equal(await ratioRow.locator('input').count(), 0, 'a ratio has no field to type in');
+    await petiole.row.getByText('stored as 1.016 m · typed 40 in').waitFor();
     await wholePage(page, 'descriptor-entry-phone');
 
-    await page.getByRole('group', { name: 'Units' }).getByText('Metric', { exact: true }).click();
-    // The fields redraw after the click in the app's own time: wait for the converted values.
-    await waitForValue(page.getByLabel('Petiole length', { exact: true }), '101.6');
-    await waitForValue(page.getByLabel('Sheath length', { exact: true }), '71.12');
-    assert.match(await page.locator('hl-descriptor-row', { hasText: 'Petiole length' }).first().innerText(), /stored as 1\.016 m · typed 40 in/);
-    await ratioRow.locator('.ratio-value', { hasText: expected }).waitFor();
+    // Switching the unit reads the same numbers in the new unit: nothing typed is converted.
+    await units.getByText('Metric', { exact: true }).click();
+    await petiole.row.getByText('stored as 0.4 m · typed 40 cm').waitFor();
+    await sheath.row.getByText('stored as 0.28 m · typed 28 cm').waitFor();
+    await waitForValue(petiole.field, '40');
+    await waitForValue(sheath.field, '28');
+    await ratioRow.locator('.ratio-value', { hasText: '0.70' }).waitFor();
+    // The choice is the recorder's, kept on the server (not only in this browser).
+    await page.waitForFunction(async () => (await (await fetch('/api/account/preferences')).json()).unitSystem === 'metric', undefined, { polling: 250 });
   });
 
-  test('should save both values and list the latest in the chosen units', { skip: 'depends on the test above; rewrite pending' }, async () => {
-    await page.getByRole('button', { name: 'Save 2 values' }).click();
-    await page.getByText('2 values saved.').waitFor();
+  test('should save both values at once, come back to the sheet, and find the unit kept for the recorder on another phone', async () => {
+    const units = page.getByRole('group', { name: 'Units' });
+    await units.getByText('Imperial', { exact: true }).click();
+    const petiole = await rowOf('petiole.length');
+    await petiole.row.getByText('stored as 1.016 m · typed 40 in').waitFor();
     const accessionId = Number(new URL(page.url()).searchParams.get('accession'));
     const plantId = Number(new URL(page.url()).searchParams.get('plant'));
+    await page.getByRole('button', { name: 'Save 2 values' }).click();
+    await page.getByText('2 values saved.').waitFor();
+    await page.waitForURL((u) => u.pathname === `/record/plant/${plantId}`);
+    // The sheet shows the saved value in the recorder's units.
+    await page.locator('.half.descriptor', { hasText: 'Petiole length' }).getByText('Done · 40.0 in').waitFor();
     const answer = await api<{ plants: { plantId: number | null; values: { code: string; formatted: { metric: string; imperial: string } }[] }[] }>(
       page,
       `/api/accessions/${accessionId}/descriptors`,
     );
-    const petiole = answer.plants.find((p) => p.plantId === plantId)?.values.find((v) => v.code === 'petiole.length');
-    assert.ok(petiole, 'the saved petiole length is the latest of the plant');
-    const latest = page.locator('hl-plant-values');
-    await latest.getByText(petiole.formatted.metric, { exact: true }).waitFor();
+    const values = answer.plants.find((p) => p.plantId === plantId)?.values ?? [];
+    assert.equal(values.find((v) => v.code === 'petiole.length')?.formatted.imperial, '40.0 in');
+    assert.equal(values.find((v) => v.code === 'sheath.length')?.formatted.imperial, '28.0 in');
     await wholePage(page, 'descriptor-entry-saved-phone');
-    // Imperial on the page shows the same stored value in inches: 40.0 in.
-    await page.getByRole('group', { name: 'Units' }).getByText('Imperial', { exact: true }).click();
-    await latest.getByText('40.0 in', { exact: true }).waitFor();
-    assert.equal(petiole.formatted.imperial, '40.0 in');
+    await page.waitForFunction(async () => (await (await fetch('/api/account/preferences')).json()).unitSystem === 'imperial', undefined, { polling: 250 });
+
+    // Another phone (no storage of this one): the recorder's unit comes from the server.
+    const other = await app.newPage({ phone: true });
+    await signIn(other, app.url, 'recorder@demo.test');
+    await other.goto(sheetUrl);
+    await other.getByRole('link', { name: /^Petiole length: / }).click();
+    await other.waitForURL((u) => u.pathname === '/record/descriptors');
+    await other.getByRole('group', { name: 'Units' }).locator('.mat-button-toggle-checked', { hasText: 'Imperial' }).waitFor();
+    await other.locator(`#descriptor-${petiole.descriptor.id}`).locator('.mat-button-toggle-checked', { hasText: 'in' }).waitFor();
   });
 
   test('should show the recorder the season ring without edit fields', async () => {
@@ -263,5 +298,24 @@ describe('an admin on a phone edits seasons', () => {
     const firstRow = await page.locator('hl-season-editor fieldset').first().boundingBox();
     assert.ok(ring && firstRow && ring.y < firstRow.y, 'the ring comes before the rows on a phone');
     await wholePage(page, 'collection-season-editor-phone');
+  });
+});
+
+describe('a reviewer follows the progress table', () => {
+  test('should open a plant from the table on its sheet to look at, not be sent away', async () => {
+    const page = await app.newPage();
+    await signIn(page, app.url, 'reviewer@demo.test');
+    await page.goto(`${app.url}/collection/progress`);
+    const link = page.locator('td.mat-column-plant a').first();
+    await link.waitFor();
+    const label = (await link.innerText()).trim();
+    await link.click();
+    await page.waitForURL((u) => /^\/collection\/plants\/\d+$/.test(u.pathname));
+    await page.getByRole('heading', { name: new RegExp(`plant ${label}`) }).waitFor();
+    await page.getByText('To look at: readings and descriptors are taken from Record by those who record.').waitFor();
+    assert.match(new URL(page.url()).pathname, /^\/collection\/plants\/\d+$/, 'still on the sheet, not sent to Review');
+    assert.equal(await page.getByRole('button', { name: /^Skip / }).count(), 0, 'nothing to skip on a sheet to look at');
+    assert.equal(await page.locator('.rows a[href]').count(), 0, 'no row opens an entry form');
+    await wholePage(page, 'plant-sheet-reviewer-desk');
   });
 });
