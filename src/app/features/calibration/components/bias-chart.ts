@@ -18,7 +18,7 @@ const STROKES = ['#1b5e20', '#6a1b9a', '#0d47a1', '#bf360c', '#37474f', '#827717
   imports: [MatButtonToggleModule],
   changeDetection: ChangeDetectionStrategy.OnPush,
   templateUrl: './bias-chart.html',
-  styleUrl: './bias-chart.scss',
+  styleUrls: ['../../../shared/chart-head.scss', './bias-chart.scss'],
 })
 export class BiasChart {
   readonly observers = input.required<readonly ObserverResult[]>();

@@ -70,7 +70,7 @@ import { LocalDateTimePipe } from '../../../core/format/local-date-time';
       </div>
     }
   `,
-  styleUrls: ['./drift-table.scss', './chart-panel.scss'],
+  styleUrls: ['./drift-table.scss', '../../../shared/chart-head.scss', './chart-panel.scss'],
 })
 export class AbPlane {
   readonly series = input.required<GroupSeries[]>();

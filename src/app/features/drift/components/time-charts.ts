@@ -70,7 +70,7 @@ import { ViewToggle } from './view-toggle';
       </div>
     }
   `,
-  styleUrls: ['./drift-table.scss', './chart-panel.scss'],
+  styleUrls: ['./drift-table.scss', '../../../shared/chart-head.scss', './chart-panel.scss'],
   styles: `
     .charts {
       display: grid;

@@ -23,6 +23,7 @@ import { DEFAULT_SORT, PAGE_SIZES, activeFilterCount, filtersFromParams, paramsF
 import { LIGHT_WORDS, METHOD_WORDS, STATUS_WORDS, wordsFor } from '../../../shared/readings/reading-words';
 import { ReadingsApi, type ExportFormat } from '../../../shared/readings/readings-api';
 import { LocalDateTimePipe } from '../../../core/format/local-date-time';
+import { ReloadState } from '../../../shared/reload-state';
 
 /** An export under way: which format and how far. */
 interface ExportRun {
@@ -37,7 +38,7 @@ interface ExportRun {
  */
 @Component({
   selector: 'hl-readings-page',
-  imports: [LocalDateTimePipe, MatButtonModule, MatIconModule, MatPaginatorModule, MatProgressBarModule, MatSortModule, MatTableModule, ReadingFiltersPanel, RouterLink, VerdictMark],
+  imports: [LocalDateTimePipe, ReloadState, MatButtonModule, MatIconModule, MatPaginatorModule, MatProgressBarModule, MatSortModule, MatTableModule, ReadingFiltersPanel, RouterLink, VerdictMark],
   templateUrl: './readings-page.html',
   styleUrls: ['../../../shared/readings/reading-table.scss', './readings-page.scss'],
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -4,7 +4,6 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatIconModule } from '@angular/material/icon';
 import { MatPaginatorModule, type PageEvent } from '@angular/material/paginator';
-import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatTableModule } from '@angular/material/table';
 import { Router } from '@angular/router';
 
@@ -20,6 +19,7 @@ import { QUEUE_DEFAULT_STATUS, QUEUE_PAGE_SIZES, paramsFromQueue, queueFromParam
 import { ReviewsApi } from '../data/reviews-api';
 import { ReadingListParams } from '../../../shared/readings/reading-list-params';
 import { LocalDateTimePipe } from '../../../core/format/local-date-time';
+import { ReloadState } from '../../../shared/reload-state';
 import { ConfirmDialog, type ConfirmDialogData } from '../../../shared/confirm-dialog';
 import { ApiError } from '../../../core/http/api-error';
 
@@ -30,7 +30,7 @@ import { ApiError } from '../../../core/http/api-error';
  */
 @Component({
   selector: 'hl-review-page',
-  imports: [LocalDateTimePipe, MatButtonModule, MatIconModule, MatPaginatorModule, MatProgressBarModule, MatTableModule, QueueFilters, VerdictMark],
+  imports: [LocalDateTimePipe, ReloadState, MatButtonModule, MatIconModule, MatPaginatorModule, MatTableModule, QueueFilters, VerdictMark],
   templateUrl: './review-page.html',
   styleUrls: ['../../../shared/readings/reading-table.scss', './review-page.scss'],
   changeDetection: ChangeDetectionStrategy.OnPush,
