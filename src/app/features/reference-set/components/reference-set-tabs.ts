@@ -2,7 +2,7 @@ import { ChangeDetectionStrategy, Component } from '@angular/core';
 
 import { SectionTabs, type SectionTab } from '../../../shared/section-tabs';
 
-/** The two pages of the reference-set section as tabs. */
+/** The pages of the reference-set section as tabs. */
 @Component({
   selector: 'hl-reference-set-tabs',
   imports: [SectionTabs],
@@ -13,5 +13,6 @@ export class ReferenceSetTabs {
   protected readonly tabs: readonly SectionTab[] = [
     { path: '/reference-set/match', label: 'Match a colour', icon: 'colorize' },
     { path: '/reference-set/browse', label: 'Browse chips', icon: 'grid_view' },
+    { path: '/reference-set/prints', label: 'Printed cards', icon: 'print' },
   ];
 }

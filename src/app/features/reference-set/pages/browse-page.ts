@@ -5,7 +5,7 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatProgressSpinnerModule } from '@angular/material/progress-spinner';
-import { Router } from '@angular/router';
+import { Router, RouterLink } from '@angular/router';
 
 import { AuthStore } from '../../../core/auth/auth-store';
 import { Viewport } from '../../../core/layout/viewport';
@@ -30,7 +30,7 @@ const NEIGHBOURS = 6;
  */
 @Component({
   selector: 'hl-browse-page',
-  imports: [ChipDetail, CurrentSetChooser, DecimalPipe, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressSpinnerModule, ScreenCaution, ReferenceSetTabs, SwatchGrid],
+  imports: [ChipDetail, CurrentSetChooser, DecimalPipe, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressSpinnerModule, ScreenCaution, ReferenceSetTabs, RouterLink, SwatchGrid],
   templateUrl: './browse-page.html',
   styleUrl: './browse-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
