@@ -8,6 +8,7 @@ import type { DriftOverviewAnswer, DriftOverviewItem } from '../../shared/api/an
 import { OBSERVED_AT_MS_SQL, rawRows } from './drift-query.js';
 import type { DriftPool } from './drift-pool.js';
 import { pairFlags, type PairFlags, type PairInput } from './pair-flags.js';
+import { seasonNamer } from '../collection/season-names.js';
 
 /** accessionId, characterId, siteId, L*, a*, b*, season, season-year, observed at (epoch ms). */
 type RawRow = [number, number, number, number, number, number, string | null, number | null, number];
@@ -126,6 +127,8 @@ export class DriftOverview {
       (await this.ds.query('SELECT "id", "accessionNumber", "name" FROM "accession"')).map((a: { id: number; accessionNumber: string; name: string }) => [a.id, a]),
     );
     const sites = new Map<number, string>((await this.ds.query('SELECT "id", "code" FROM "site"')).map((s: { id: number; code: string }) => [s.id, s.code]));
+    // A group pools readings over sites: its season is named by both years if it wraps at one of them.
+    const named = await seasonNamer(this.ds.manager);
     return flagged
       .map((s): DriftOverviewItem => {
         const { flags, n } = this.cache.get(keyOf(s))!.flags;
@@ -142,7 +145,7 @@ export class DriftOverview {
           deltaE00: flags[0]!.deltaE00,
           flags: flags.map((f) => ({
             kind: f.kind,
-            label: f.kind === 'season-drift' ? `${f.from!.season} ${f.from!.seasonYear} → ${f.to!.season} ${f.to!.seasonYear}` : `${sites.get(f.siteA!) ?? f.siteA} ↔ ${sites.get(f.siteB!) ?? f.siteB} in ${f.season} ${f.seasonYear}`,
+            label: f.kind === 'season-drift' ? `${named(f.from!.season, f.from!.seasonYear, f.fromSiteIds ?? [])} → ${named(f.to!.season, f.to!.seasonYear, f.toSiteIds ?? [])}` : `${sites.get(f.siteA!) ?? f.siteA} ↔ ${sites.get(f.siteB!) ?? f.siteB} in ${named(f.season ?? null, f.seasonYear ?? null, [f.siteA!, f.siteB!])}`,
             deltaE00: f.deltaE00,
             pValue: f.pValue,
             reason: f.reason,

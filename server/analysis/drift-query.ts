@@ -5,6 +5,7 @@ import { displayHex } from '../../shared/colour/display-hex.js';
 import { labToLch, labToTuple, type Lab } from '../../shared/colour/lab.js';
 import { Accession } from '../collection/accession.entity.js';
 import { Character } from '../collection/character.entity.js';
+import { groupSites, seasonNamer } from '../collection/season-names.js';
 import { Site } from '../collection/site.entity.js';
 import { AppError } from '../core/app-error.js';
 import { analyseDrift, type DriftInput } from './drift.js';
@@ -86,6 +87,9 @@ export async function driftAnswer(ds: DataSource, q: DriftQuery): Promise<DriftA
   const rows = await driftRows(ds, q.accessionId, q.characterId, q.siteId);
   const inputs: DriftInput[] = rows.map((r) => ({ lab: { l: r.l, a: r.a, b: r.b }, season: r.season, seasonYear: r.seasonYear, observedAt: new Date(r.observedAt) }));
   const analysis = analyseDrift(inputs, { threshold: character.driftThreshold });
+  const named = await seasonNamer(ds.manager);
+  const sitesOf = groupSites(rows);
+  const key = (k: { season: string; seasonYear: number }) => ({ season: k.season, seasonYear: k.seasonYear, seasonLabel: named(k.season, k.seasonYear, sitesOf.get(`${k.seasonYear}|${k.season}`) ?? [])! });
   const points: DriftPoint[] = rows.map((r, i) => {
     const lab = inputs[i]!.lab;
     const lch = labToLch(lab);
@@ -97,8 +101,7 @@ export async function driftAnswer(ds: DataSource, q: DriftQuery): Promise<DriftA
     characterId: q.characterId,
     siteId: q.siteId ?? null,
     groups: analysis.groups.map((g) => ({
-      season: g.season,
-      seasonYear: g.seasonYear,
+      ...key(g),
       n: g.n,
       meanLab: labToTuple(g.meanLab),
       meanLch: lchTuple(g.meanLab),
@@ -107,7 +110,7 @@ export async function driftAnswer(ds: DataSource, q: DriftQuery): Promise<DriftA
       firstObservedAt: g.firstObservedAt.toISOString(),
       lastObservedAt: g.lastObservedAt.toISOString(),
     })),
-    comparisons: analysis.comparisons.map((c) => ({ ...c, from: { ...c.from }, to: { ...c.to } })),
+    comparisons: analysis.comparisons.map((c) => ({ ...c, from: key(c.from), to: key(c.to) })),
     points,
     unseasoned: analysis.unseasoned,
     threshold: analysis.rules.threshold,
@@ -133,6 +136,7 @@ export async function siteComparisonAnswer(ds: DataSource, q: SiteComparisonQuer
     characterId: q.characterId,
     season: q.season ?? null,
     seasonYear: q.seasonYear ?? null,
+    seasonLabel: q.season === undefined ? null : (await seasonNamer(ds.manager))(q.season, q.seasonYear ?? null, siteIds),
     sites: result.sites.map((g) => {
       const site = byId.get(g.siteId)!;
       return { siteId: g.siteId, siteCode: site.code, siteName: site.name, n: g.n, meanLab: labToTuple(g.meanLab), meanHex: displayHex(g.meanLab).hex, spreadDeltaE00: g.spreadDeltaE00 };

@@ -38,7 +38,7 @@ export const DRIFT_RULES_DEFAULT: DriftRules = { threshold: ACCEPTABILITY_THRESH
 
 export interface DriftAnalysis {
   groups: SeasonGroup[];
-  comparisons: DriftComparison[];
+  comparisons: DriftComparison<GroupKey>[];
   /** Readings outside every season of their site's scheme, not grouped. */
   unseasoned: number;
   rules: DriftRules;
@@ -84,7 +84,7 @@ export function analyseDrift(readings: readonly DriftInput[], rules: Partial<Dri
   return { groups, comparisons, unseasoned, rules: r };
 }
 
-function compare(g: { key: GroupKey; labs: Lab[] }, h: { key: GroupKey; labs: Lab[] }, kind: ComparisonKind, r: DriftRules): DriftComparison {
+function compare(g: { key: GroupKey; labs: Lab[] }, h: { key: GroupKey; labs: Lab[] }, kind: ComparisonKind, r: DriftRules): DriftComparison<GroupKey> {
   const test = permutationTest(g.labs, h.labs, { seed: seedFor(r.seed, g.key, h.key), alpha: r.alpha });
   const big = g.labs.length >= r.minGroupSize && h.labs.length >= r.minGroupSize;
   const large = test.statistic >= r.threshold;

@@ -1,5 +1,6 @@
 import { analyseDrift, DRIFT_RULES_DEFAULT } from './drift.js';
 import { siteDifferencesWithinSeasons } from './site-seasons.js';
+import { groupSites } from '../collection/season-names.js';
 
 /** One accession × character's readings in force, as plain columns (cheap to send to a worker thread). */
 export interface PairInput {
@@ -24,6 +25,9 @@ export interface PairFlag {
   /** Season drift: the two groups. */
   from?: { season: string; seasonYear: number };
   to?: { season: string; seasonYear: number };
+  /** Season drift: the sites whose readings each group holds (to name a season that wraps the year end at one of them). */
+  fromSiteIds?: number[];
+  toSiteIds?: number[];
   /** Site difference: the season group and the two sites. */
   season?: string;
   seasonYear?: number;
@@ -53,8 +57,10 @@ export function pairFlags(input: PairInput): PairFlags {
   }));
   const rules = { ...DRIFT_RULES_DEFAULT, threshold: input.threshold };
   const flags: PairFlag[] = [];
+  const sitesOf = groupSites(readings);
+  const sites = (k: { season: string; seasonYear: number }) => [...(sitesOf.get(`${k.seasonYear}|${k.season}`) ?? [])];
   for (const c of analyseDrift(readings, rules).comparisons) {
-    if (c.drift) flags.push({ kind: 'season-drift', deltaE00: c.deltaE00, pValue: c.pValue, reason: c.reason, from: c.from, to: c.to });
+    if (c.drift) flags.push({ kind: 'season-drift', deltaE00: c.deltaE00, pValue: c.pValue, reason: c.reason, from: c.from, to: c.to, fromSiteIds: sites(c.from), toSiteIds: sites(c.to) });
   }
   for (const d of siteDifferencesWithinSeasons(readings, rules)) {
     if (d.flagged) flags.push({ kind: 'site-difference', deltaE00: d.deltaE00, pValue: d.pValue, reason: d.reason, season: d.season, seasonYear: d.seasonYear, siteA: d.siteA, siteB: d.siteB });

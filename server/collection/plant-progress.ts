@@ -1,6 +1,6 @@
 import { In, IsNull, type DataSource } from 'typeorm';
 import type { PlantProgress, ProgressCount, ProgressState } from '../../shared/api/plant-sheet-answers.js';
-import { localDateOf, seasonOf } from '../../shared/collection/season-of.js';
+import { localDateOf, seasonLabel, seasonOf } from '../../shared/collection/season-of.js';
 import { Reading } from '../readings/reading.entity.js';
 import type { Plant } from './accession.entity.js';
 import { Character } from './character.entity.js';
@@ -23,6 +23,12 @@ export function seasonWindowOf(instant: Date, site: Site): SeasonWindow {
   const found = seasonOf(instant, site.timezone, site.seasons ?? []);
   if (found.season !== null && found.seasonYear !== null) return { season: found.season, seasonYear: found.seasonYear };
   return { season: null, seasonYear: localDateOf(instant, site.timezone).year };
+}
+
+/** A window as people say it ("Wet 2024–25" for a season of the site that wraps the year end); null with no season. */
+export function windowLabel(window: SeasonWindow, site: Site): string | null {
+  const season = site.seasons?.find((s) => s.name === window.season);
+  return seasonLabel(window.season, window.seasonYear, season !== undefined && season.end < season.start);
 }
 
 function sameWindow(a: SeasonWindow, b: SeasonWindow): boolean {
@@ -112,6 +118,7 @@ export function progressOf(state: PlantState, catalogue: SheetCatalogue): PlantP
     siteCode: plant.site.code,
     season: state.window.season,
     seasonYear: state.window.seasonYear,
+    seasonLabel: windowLabel(state.window, plant.site),
     colour,
     descriptors,
     state: progressState(colour, descriptors),

@@ -43,7 +43,7 @@ const COLOUR_COLUMNS: readonly Column<CharacterProfile>[] = [
   { header: 'threshold ΔE00', width: 10, numFmt: '0.0', means: 'The character\'s threshold for drift, site differences and outliers.', value: (_, c) => c.threshold },
   { header: 'flagged', width: 8, means: '"yes" when the drift rules flag a season change or a site difference within one season.', value: (_, c) => (c.flagged ? 'yes' : 'no') },
   { header: 'flags', width: 40, means: 'Each flag: the groups or sites and their ΔE00.', value: (_, c) => c.flags.map((f) => `${f.label} (ΔE00 ${f.deltaE00.toFixed(2)})`).join('; ') || null },
-  { header: 'season groups', width: 40, means: 'Each season group: readings and ΔE00 of its centre from the accepted colour.', value: (_, c) => c.seasons.map((s) => `${s.season} ${s.seasonYear}: n ${s.n}, ΔE00 ${s.deltaE00.toFixed(2)}`).join('; ') || null },
+  { header: 'season groups', width: 40, means: 'Each season group: readings and ΔE00 of its centre from the accepted colour.', value: (_, c) => c.seasons.map((s) => `${s.seasonLabel}: n ${s.n}, ΔE00 ${s.deltaE00.toFixed(2)}`).join('; ') || null },
   { header: 'outliers', width: 9, numFmt: '0', means: 'Readings in force further than the threshold from the accepted colour.', value: (_, c) => c.outliers.length },
 ];
 

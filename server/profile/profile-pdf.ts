@@ -98,7 +98,7 @@ function drawCharacter(doc: PDFKit.PDFDocument, c: CharacterProfile, width: numb
     .text(pdfText(`Spread ${n2(c.spreadDeltaE00)} ΔE00 from the accepted colour; ${c.nReadings} ${c.basis === 'approved' ? 'approved ' : ''}readings (of ${c.nCurrent} in force) by ${c.nObservers} observers on ${c.nPlants} plants.`), { width: tw })
     .text(pdfText(c.flagged ? `Flagged (threshold ΔE00 ${c.threshold}): ${c.flags.map((f) => `${f.label}, ΔE00 ${n2(f.deltaE00)}`).join('; ')}.` : `Steady across ${c.seasons.length} season groups and ${c.sites.length} sites (threshold ΔE00 ${c.threshold}).`), { width: tw });
   if (c.seasons.length) {
-    doc.text(pdfText(`Seasons: ${c.seasons.map((s) => `${s.season} ${s.seasonYear} n ${s.n}, L* ${n1(s.centre.lab[0])} a* ${n1(s.centre.lab[1])} b* ${n1(s.centre.lab[2])}, ΔE00 ${n2(s.deltaE00)}`).join('; ')}.`), { width: tw });
+    doc.text(pdfText(`Seasons: ${c.seasons.map((s) => `${s.seasonLabel} n ${s.n}, L* ${n1(s.centre.lab[0])} a* ${n1(s.centre.lab[1])} b* ${n1(s.centre.lab[2])}, ΔE00 ${n2(s.deltaE00)}`).join('; ')}.`), { width: tw });
   }
   if (c.outliers.length) doc.text(pdfText(`${c.outliers.length} reading(s) further than ΔE00 ${c.threshold} from it: ${c.outliers.slice(0, 6).map((o) => `#${o.readingId}`).join(', ')}${c.outliers.length > 6 ? ', ...' : ''}.`), { width: tw });
   doc.y = Math.max(doc.y, top + surround + 4) + LAYOUT.gap;

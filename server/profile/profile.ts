@@ -15,6 +15,7 @@ import {
   type ProfileSetChip,
 } from '../../shared/api/profile-answers.js';
 import { deltaE00 } from '../../shared/colour/delta-e.js';
+import { groupSites, namerOf, seasonNamer, type SeasonNamer } from '../collection/season-names.js';
 import { displayHex } from '../../shared/colour/display-hex.js';
 import { labToLch, labToTuple, type Lab } from '../../shared/colour/lab.js';
 import { verdictFor } from '../../shared/colour/verdict.js';
@@ -52,6 +53,7 @@ export async function accessionProfile(deps: ProfileDeps, accessionId: number, s
   const readings = await profileReadings(deps.ds, accessionId);
   const byCharacter = groupBy(readings, (r) => r.characterId);
   const siteCodes = new Map(readings.map((r) => [r.siteId, r.siteCode]));
+  const named = await seasonNamer(deps.ds.manager);
   const sets = (await deps.referenceSets.list()).sort((a, b) => a.version - b.version);
 
   const profiles: CharacterProfile[] = [];
@@ -65,7 +67,7 @@ export async function accessionProfile(deps: ProfileDeps, accessionId: number, s
       const best = s.id === set.summary.id ? match.matches[0]! : (await deps.referenceSets.match(centre, 1, s.id)).matches[0]!;
       setChips.push({ setId: s.id, current: s.current, shown: s.id === set.summary.id, chip: profileChip(best) });
     }
-    profiles.push({ ...characterProfile(character, rows, match.matches[0]!, siteCodes), setChips });
+    profiles.push({ ...characterProfile(character, rows, match.matches[0]!, siteCodes, named), setChips });
   }
   const order = [...characters.values()].sort((a, b) => a.sortOrder - b.sortOrder || a.id - b.id).map((c) => c.id);
   profiles.sort((a, b) => order.indexOf(a.characterId) - order.indexOf(b.characterId));
@@ -102,6 +104,7 @@ export function characterProfile(
   rows: readonly ProfileReading[],
   chip: { code: string; name: string; hex: string; deltaE00: number },
   siteCodes: ReadonlyMap<number, string>,
+  named: SeasonNamer = namerOf(new Set()),
 ): Omit<CharacterProfile, 'setChips'> {
   const { basis, readings } = basisOf(rows);
   const centre = labMedian(readings.map((r) => r.lab));
@@ -113,7 +116,8 @@ export function characterProfile(
   const seasons = [...groupBy(rows.filter((r) => r.season !== null && r.seasonYear !== null), (r) => `${r.seasonYear}\u0000${r.season}`).values()]
     .map((g) => {
       const c = labMedian(g.map((r) => r.lab));
-      return { season: g[0]!.season!, seasonYear: g[0]!.seasonYear!, n: g.length, centre: profileColour(c), deltaE00: deltaE00(centre, c), first: g[0]!.observedAt.getTime() };
+      // A group pools the accession's sites: its season is named by both years if it wraps at one of them.
+      return { season: g[0]!.season!, seasonYear: g[0]!.seasonYear!, seasonLabel: named(g[0]!.season, g[0]!.seasonYear, g.map((r) => r.siteId))!, n: g.length, centre: profileColour(c), deltaE00: deltaE00(centre, c), first: g[0]!.observedAt.getTime() };
     })
     .sort((a, b) => a.first - b.first)
     .map(({ first: _first, ...s }) => s);
@@ -124,7 +128,7 @@ export function characterProfile(
     })
     .sort((a, b) => a.siteCode.localeCompare(b.siteCode));
 
-  const flags = flagsOf(rows, threshold, siteCodes);
+  const flags = flagsOf(rows, threshold, siteCodes, named);
   const outliers: ProfileOutlier[] = rows
     .map((r) => ({ r, de: deltaE00(centre, r.lab) }))
     .filter((x) => x.de > threshold)
@@ -166,16 +170,18 @@ export function characterProfile(
 }
 
 /** Season drift and within-season site differences flagged by the analysis rules, largest ΔE00 first. */
-function flagsOf(readings: readonly ProfileReading[], threshold: number, siteCodes: ReadonlyMap<number, string>): ProfileFlag[] {
+function flagsOf(readings: readonly ProfileReading[], threshold: number, siteCodes: ReadonlyMap<number, string>, named: SeasonNamer): ProfileFlag[] {
   const rules = { ...DRIFT_RULES_DEFAULT, threshold };
+  const sitesOf = groupSites(readings);
+  const name = (k: { season: string; seasonYear: number }) => named(k.season, k.seasonYear, sitesOf.get(`${k.seasonYear}|${k.season}`) ?? []);
   const drift = analyseDrift(readings, rules)
     .comparisons.filter((c) => c.drift)
-    .map((c): ProfileFlag => ({ kind: 'season-drift', label: `${c.from.season} ${c.from.seasonYear} → ${c.to.season} ${c.to.seasonYear}`, deltaE00: c.deltaE00, pValue: c.pValue, reason: c.reason }));
+    .map((c): ProfileFlag => ({ kind: 'season-drift', label: `${name(c.from)} → ${name(c.to)}`, deltaE00: c.deltaE00, pValue: c.pValue, reason: c.reason }));
   const sites = siteDifferencesWithinSeasons(readings, rules)
     .filter((d) => d.flagged)
     .map((d): ProfileFlag => ({
       kind: 'site-difference',
-      label: `${siteCodes.get(d.siteA) ?? d.siteA} ↔ ${siteCodes.get(d.siteB) ?? d.siteB} in ${d.season} ${d.seasonYear}`,
+      label: `${siteCodes.get(d.siteA) ?? d.siteA} ↔ ${siteCodes.get(d.siteB) ?? d.siteB} in ${named(d.season, d.seasonYear, [d.siteA, d.siteB])}`,
       deltaE00: d.deltaE00,
       pValue: d.pValue,
       reason: d.reason,

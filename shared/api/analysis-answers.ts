@@ -7,6 +7,8 @@ import type { LchTuple } from './reference-set-answers.js';
 export interface DriftGroup {
   season: string;
   seasonYear: number;
+  /** The group as people say it: "Dry 2025", or "Wet 2024–25" for a season that wraps the year end. */
+  seasonLabel: string;
   n: number;
   meanLab: LabTuple;
   meanLch: LchTuple;
@@ -26,10 +28,16 @@ export interface GroupKey {
   seasonYear: number;
 }
 
+/** A group key with the group's name as people say it. */
+export interface NamedGroupKey extends GroupKey {
+  /** "Dry 2025", or "Wet 2024–25" for a season that wraps the year end. */
+  seasonLabel: string;
+}
+
 /** Between two groups: consecutive in time, or the same season a year apart. */
-export interface DriftComparison {
-  from: GroupKey;
-  to: GroupKey;
+export interface DriftComparison<K extends GroupKey = NamedGroupKey> {
+  from: K;
+  to: K;
   kind: ComparisonKind;
   /** ΔE00 between the two groups' CIELAB means. */
   deltaE00: number;
@@ -88,6 +96,8 @@ export interface SiteComparisonAnswer {
   /** The season group compared, when asked for one; null: every season together. */
   season: string | null;
   seasonYear: number | null;
+  /** That group as people say it ("Wet 2024–25"); null: every season together. */
+  seasonLabel: string | null;
   sites: SiteGroup[];
   /** deltaE00[i][j]: ΔE00 between the means of sites[i] and sites[j] (0 on the diagonal). */
   deltaE00: number[][];
@@ -99,7 +109,7 @@ export interface SiteComparisonAnswer {
 /** One flag of the drift overview: season drift between two season groups, or two sites apart within one season group. */
 export interface DriftOverviewFlag {
   kind: 'season-drift' | 'site-difference';
-  /** "Dry 2025 → Wet 2025", or "RDP ↔ HTG in Wet 2025". */
+  /** "Dry 2025 → Wet 2025–26", or "RDP ↔ HTG in Wet 2025–26" (wrap-year seasons named by both years). */
   label: string;
   deltaE00: number;
   pValue: number;

@@ -85,6 +85,8 @@ export interface PlantProgress {
   /** The season of the plant's site the counts are for (null: no season covers the day). */
   season: string | null;
   seasonYear: number;
+  /** The season as people say it ("Wet 2024–25" when it wraps the year end); null with no season. */
+  seasonLabel: string | null;
   colour: ProgressCount;
   descriptors: ProgressCount;
   state: ProgressState;

@@ -45,6 +45,8 @@ export interface ProfileSetChip {
 export interface ProfileSeason {
   season: string;
   seasonYear: number;
+  /** "Dry 2025", or "Wet 2024–25" for a season that wraps the year end. */
+  seasonLabel: string;
   n: number;
   centre: ProfileColour;
   /** ΔE00 from the character's overall centre. */

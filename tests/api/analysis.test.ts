@@ -104,6 +104,9 @@ describe('drift by season and site comparison, through the API', () => {
 
     test('should give each season group, oldest first, its size, CIELAB mean and spread as worked out', () => {
       assert.deepEqual(d.groups.map((g) => [g.season, g.seasonYear, g.n]), [['Wet', 2024, 4], ['Dry', 2025, 4], ['Wet', 2025, 4]]);
+      // Wet (11-01…04-30) wraps the year end, so its groups are named by both years; the comparisons use the same names.
+      assert.deepEqual(d.groups.map((g) => g.seasonLabel), ['Wet 2024–25', 'Dry 2025', 'Wet 2025–26']);
+      assert.ok(d.comparisons.some((c) => c.from.seasonLabel === 'Dry 2025' && c.to.seasonLabel === 'Wet 2025–26'), JSON.stringify(d.comparisons.map((c) => [c.from, c.to])));
       const expected: [LabTuple, number][] = [[[43, A, B], 1.838218], [[53, A, B], 1.948076], [[44, A, B], 1.86602]];
       d.groups.forEach((g, i) => {
         g.meanLab.forEach((x, j) => close(x, expected[i]![0][j]!, 1e-9, `mean ${j} of group ${i}`));

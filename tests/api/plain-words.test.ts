@@ -4,6 +4,9 @@
 import { after, before, describe, test } from 'node:test';
 import assert from 'node:assert/strict';
 import type { AuditEventRow, Page } from '../../shared/api/auth.js';
+import type { DriftAnswer } from '../../shared/api/analysis-answers.js';
+import type { PlantProgress } from '../../shared/api/plant-sheet-answers.js';
+import type { AccessionProfile } from '../../shared/api/profile-answers.js';
 import type { ReadingDetail, ReadingList } from '../../shared/api/reading-answers.js';
 import { seasonLabel } from '../../shared/collection/season-of.js';
 import { assertInvalidFields, assertProblem } from './assert-problem.js';
@@ -40,6 +43,21 @@ describe('records in plain words', () => {
     assert.equal(seasonLabel('Dry', 2025, false), 'Dry 2025');
     assert.equal(seasonLabel('Wet', 1999, true), 'Wet 1999–2000');
     assert.equal(seasonLabel(null, null, true), null);
+  });
+
+  test('should name wrap-year seasons by both years in drift groups, the characterisation record and plant progress', async () => {
+    const detail = (await recorder.get(`/api/readings/${readingId}`).expect(200)).body as ReadingDetail;
+    const drift = (await recorder.get(`/api/analysis/drift?accessionId=${world.violet.id}&characterId=${detail.characterId}`).expect(200)).body as DriftAnswer;
+    assert.deepEqual(drift.groups.map((g) => [g.season, g.seasonYear, g.seasonLabel]), [['Wet', 2024, 'Wet 2024–25']]);
+    const profile = (await recorder.get(`/api/accessions/${world.violet.id}/profile`).expect(200)).body as AccessionProfile;
+    const character = profile.characters.find((c) => c.characterId === detail.characterId)!;
+    assert.deepEqual(character.seasons.map((s) => s.seasonLabel), ['Wet 2024–25']);
+    // Progress is for today's season at each plant's own site: P1 at the Fiji plot (Wet wraps), P2 at the coast garden (its Wet does not).
+    const progress = (await recorder.get(`/api/accessions/${world.violet.id}/progress`).expect(200)).body as PlantProgress[];
+    const [p1, p2] = [progress.find((p) => p.plantLabel === 'P1')!, progress.find((p) => p.plantLabel === 'P2')!];
+    assert.equal(p1.seasonLabel, seasonLabel(p1.season, p1.seasonYear, p1.season === 'Wet'));
+    assert.equal(p2.seasonLabel, seasonLabel(p2.season, p2.seasonYear, false));
+    assert.ok(p1.seasonLabel && p2.seasonLabel, 'both sites have a season every day of the year');
   });
 
   test("should tell a reading's history in sentences, the correction with its colours and reason", async () => {

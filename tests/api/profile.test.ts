@@ -128,6 +128,9 @@ describe('the characterisation record of an accession', () => {
     assert.ok(drifting.flags.some((f) => f.kind === 'season-drift' && f.deltaE00 >= 1.8 && f.pValue < 0.05), JSON.stringify(drifting.flags));
     assert.ok(!drifting.flags.some((f) => /p = </.test(f.reason)), 'reasons read "p < 0.001", never "p = < 0.001"');
     assert.deepEqual(drifting.seasons.map((s) => `${s.season} ${s.seasonYear}`), ['Dry 2025', 'Wet 2025', 'Dry 2026']);
+    // The demo's Wet season (November to April) wraps the year end: named by both years, in the flags too.
+    assert.deepEqual(drifting.seasons.map((s) => s.seasonLabel), ['Dry 2025', 'Wet 2025–26', 'Dry 2026']);
+    assert.ok(drifting.flags.some((f) => f.kind === 'season-drift' && f.label.includes('Wet 2025–26')), JSON.stringify(drifting.flags.map((f) => f.label)));
     // The wet group's centre lies near the demo's wet colour, the dry groups near the dry one.
     close(drifting.seasons[1]!.centre.lab[0], DEMO_DRIFT.wet[0], 0.5, 'wet L*');
     close(drifting.seasons[0]!.centre.lab[0], DEMO_DRIFT.dry[0], 0.5, 'dry L*');

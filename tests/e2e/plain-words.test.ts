@@ -117,6 +117,36 @@ describe('records in plain words', () => {
     assert.match(await groups.innerText(), US_DAY, 'the same table follows an en-US browser');
   });
 
+  test('should name wrap-year seasons by both years on the characterisation record, the drift table, the plant sheet and collection progress', async () => {
+    const accessions = (await admin.evaluate(() => fetch('/api/accessions').then((r) => r.json()))) as { id: number; accessionNumber: string; plants: { id: number; label: string }[] }[];
+    const characters = (await admin.evaluate(() => fetch('/api/characters').then((r) => r.json()))) as { id: number; code: string }[];
+    const accession = accessions.find((a) => a.accessionNumber === DEMO_DRIFT.accessionNumber)!;
+    const characterId = characters.find((c) => c.code === DEMO_DRIFT.characterCode)!.id;
+    // The demo's drifting pair was read at RDP, whose Wet season runs November to April.
+    await admin.goto(`${app.url}/collection/accessions/${accession.id}`);
+    const stripes = admin.locator('hl-characterisation li.character', { hasText: 'stripes' });
+    await stripes.locator('.strip').waitFor();
+    assert.match(await stripes.innerText(), /Wet 2025–26/);
+    assert.doesNotMatch(await stripes.innerText(), /Wet 2025(?!–)/, 'no wet season named by one year only');
+    await admin.goto(`${app.url}/drift?accessionId=${accession.id}&characterId=${characterId}`);
+    const wetRow = admin.locator('hl-groups-table tbody tr', { hasText: 'Wet' }).first();
+    await wetRow.waitFor();
+    assert.match(await wetRow.locator('th').innerText(), /^Wet 20\d\d–\d\d$/);
+    // Progress is for today's season at the plant's site: the API's season, named as people say it.
+    const plant = accession.plants[0]!;
+    const sheet = (await admin.evaluate((id) => fetch(`/api/plants/${id}/sheet`).then((r) => r.json()), plant.id)) as { progress: { season: string | null; seasonYear: number } };
+    const { season, seasonYear } = sheet.progress;
+    const expected = season === null ? `no season ${seasonYear}` : season === 'Wet' ? `Wet ${seasonYear}–${String((seasonYear + 1) % 100).padStart(2, '0')}` : `${season} ${seasonYear}`;
+    await admin.goto(`${app.url}/record/plant/${plant.id}`);
+    const where = admin.locator('p.where');
+    await where.waitFor();
+    assert.ok((await where.innerText()).endsWith(`· ${expected}`), `the plant sheet names "${expected}": ${await where.innerText()}`);
+    await admin.goto(`${app.url}/collection/progress`);
+    const row = admin.locator('tr', { has: admin.locator(`a[href="/record/plant/${plant.id}"]`) });
+    await row.waitFor();
+    assert.ok((await row.innerText()).includes(expected), `collection progress names "${expected}"`);
+  });
+
   test('should show a reviewer no "New reading" button, and a recorder one', async () => {
     const reviewer = await app.newPage({ phone: true });
     await signIn(reviewer, app.url, 'reviewer@demo.test');

@@ -31,7 +31,7 @@ export const STATE_WORDS = {
             <a class="plant" [routerLink]="sheetPath(p.plantId)" [attr.aria-label]="'Plant sheet of ' + p.plantLabel">
               <span class="head">
                 <strong>Plant {{ p.plantLabel }}</strong>
-                <span class="state"><mat-icon inline aria-hidden="true">{{ words[p.state].icon }}</mat-icon> {{ words[p.state].label }} · {{ p.season ?? 'no season' }} {{ p.seasonYear }}</span>
+                <span class="state"><mat-icon inline aria-hidden="true">{{ words[p.state].icon }}</mat-icon> {{ words[p.state].label }} · {{ p.seasonLabel ?? 'no season ' + p.seasonYear }}</span>
               </span>
               <span class="counts">{{ countWords(p) }}</span>
               <mat-progress-bar mode="determinate" [value]="percent(p)" [attr.aria-label]="percent(p) + ' % done or skipped'" />

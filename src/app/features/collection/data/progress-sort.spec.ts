@@ -11,6 +11,7 @@ const row = (accessionNumber: string, plantLabel: string, done: number, state: P
   siteCode: 'T',
   season: 'Wet',
   seasonYear: 2026,
+  seasonLabel: 'Wet 2026–27',
   colour: { done, skipped: 0, total: 10 },
   descriptors: { done: 0, skipped: 0, total: 5 },
   state,

@@ -55,7 +55,7 @@ import { sortProgress, type ProgressColumn } from '../data/progress-sort';
               </ng-container>
               <ng-container matColumnDef="site">
                 <th mat-header-cell *matHeaderCellDef mat-sort-header>Site</th>
-                <td mat-cell *matCellDef="let r">{{ r.siteCode }} · {{ r.season ?? 'no season' }} {{ r.seasonYear }}</td>
+                <td mat-cell *matCellDef="let r">{{ r.siteCode }} · {{ r.seasonLabel ?? 'no season ' + r.seasonYear }}</td>
               </ng-container>
               <ng-container matColumnDef="state">
                 <th mat-header-cell *matHeaderCellDef mat-sort-header>State</th>

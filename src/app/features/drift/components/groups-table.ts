@@ -17,7 +17,6 @@ import { LocalDateTimePipe } from '../../../core/format/local-date-time';
         <thead>
           <tr>
             <th scope="col">Season</th>
-            <th scope="col" class="num">Year</th>
             <th scope="col" class="num">n</th>
             <th scope="col" class="num">L*</th>
             <th scope="col" class="num">a*</th>
@@ -31,8 +30,7 @@ import { LocalDateTimePipe } from '../../../core/format/local-date-time';
         <tbody>
           @for (g of groups(); track g.season + g.seasonYear) {
             <tr>
-              <th scope="row"><span class="mini" [style.background-color]="g.meanHex" aria-hidden="true"></span>{{ g.season }}</th>
-              <td class="num">{{ g.seasonYear }}</td>
+              <th scope="row"><span class="mini" [style.background-color]="g.meanHex" aria-hidden="true"></span>{{ g.seasonLabel }}</th>
               <td class="num">{{ g.n }}@if (small(g)) {<span class="hl-muted"> (too few)</span>}</td>
               <td class="num">{{ f(g.meanLab[0]) }}</td>
               <td class="num">{{ f(g.meanLab[1]) }}</td>

@@ -2,7 +2,7 @@ import type { DriftAnswer, DriftGroup, DriftPoint } from '../../../../../shared/
 import { GROUP_COLOURS, GROUP_MARKERS, groupSeries, squareRange } from './drift-series';
 
 function group(season: string, seasonYear: number, first: string, last: string): DriftGroup {
-  return { season, seasonYear, n: 3, meanLab: [40, 1, 0], meanLch: [40, 1, 0], meanHex: '#777777', spreadDeltaE00: 1, firstObservedAt: first, lastObservedAt: last };
+  return { season, seasonYear, seasonLabel: `${season} ${seasonYear}`, n: 3, meanLab: [40, 1, 0], meanLch: [40, 1, 0], meanHex: '#777777', spreadDeltaE00: 1, firstObservedAt: first, lastObservedAt: last };
 }
 
 function point(id: number, season: string | null, a: number, b: number): DriftPoint {

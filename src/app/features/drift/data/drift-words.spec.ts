@@ -2,10 +2,10 @@ import type { DriftAnswer, DriftComparison, DriftGroup } from '../../../../../sh
 import { driftState, emptyReason, groupLabel, hueText, pValueText, summaryWords } from './drift-words';
 
 function group(season: string, seasonYear: number, n: number): DriftGroup {
-  return { season, seasonYear, n, meanLab: [40, 30, -10], meanLch: [40, 31.6, 341.6], meanHex: '#7b3f6e', spreadDeltaE00: 0.8, firstObservedAt: '2025-01-01T00:00:00Z', lastObservedAt: '2025-02-01T00:00:00Z' };
+  return { season, seasonYear, seasonLabel: `${season} ${seasonYear}`, n, meanLab: [40, 30, -10], meanLch: [40, 31.6, 341.6], meanHex: '#7b3f6e', spreadDeltaE00: 0.8, firstObservedAt: '2025-01-01T00:00:00Z', lastObservedAt: '2025-02-01T00:00:00Z' };
 }
 
-function comparison(drift: boolean, from = { season: 'wet', seasonYear: 2025 }, to = { season: 'dry', seasonYear: 2025 }): DriftComparison {
+function comparison(drift: boolean, from = { season: 'wet', seasonYear: 2025, seasonLabel: 'wet 2025' }, to = { season: 'dry', seasonYear: 2025, seasonLabel: 'dry 2025' }): DriftComparison {
   return { from, to, kind: 'consecutive', deltaE00: 3.2, pValue: 0.01, test: 'exact', permutations: 20, drift, reason: '' };
 }
 
@@ -49,7 +49,7 @@ describe('drift words', () => {
   });
 
   it('should name a group by season and year, and hide the hue of a near-grey', () => {
-    expect(groupLabel({ season: 'wet', seasonYear: 2024 })).toBe('wet 2024');
+    expect(groupLabel({ season: 'wet', seasonYear: 2024, seasonLabel: 'wet 2024–25' })).toBe('wet 2024–25');
     expect(hueText(0.2, 123)).toBe('—');
     expect(hueText(12, 341.6)).toBe('342');
   });

@@ -1,5 +1,5 @@
 // Plain words and icons for the drift view, so a verdict never rests on colour alone.
-import type { DriftAnswer, DriftComparison, DriftGroup, GroupKey } from '../../../../../shared/api/analysis-answers.js';
+import type { DriftAnswer, DriftComparison, DriftGroup, GroupKey, NamedGroupKey } from '../../../../../shared/api/analysis-answers.js';
 import { formatNumber } from '../../../shared/chips/chip-words';
 
 /** What a comparison between two season groups says. */
@@ -17,9 +17,9 @@ export function sameGroup(a: GroupKey, b: GroupKey): boolean {
   return a.season === b.season && a.seasonYear === b.seasonYear;
 }
 
-/** "wet 2025" */
-export function groupLabel(key: GroupKey): string {
-  return `${key.season} ${key.seasonYear}`;
+/** A group as people say it, as the server names it: "Dry 2025", "Wet 2024–25" for a season that wraps the year end. */
+export function groupLabel(key: NamedGroupKey): string {
+  return key.seasonLabel;
 }
 
 /** Whether a group has too few readings to be compared (the server never flags it). */

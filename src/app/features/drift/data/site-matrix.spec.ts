@@ -10,6 +10,7 @@ const answer: SiteComparisonAnswer = {
   characterId: 1,
   season: null,
   seasonYear: null,
+  seasonLabel: null,
   sites: [site(1, 'NORTH'), site(2, 'RIVER'), site(3, 'HILL')],
   deltaE00: [
     [0, 1.8, 0.6],

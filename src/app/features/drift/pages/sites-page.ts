@@ -55,12 +55,12 @@ import { markedPairs } from '../data/site-matrix';
             }
           </p>
           @if (season(); as s) {
-            <p class="hl-muted">Within {{ s.season }} {{ s.seasonYear }} only, so a season change cannot pass for a site difference. <a [routerLink]="[]" [queryParams]="{ season: null, seasonYear: null }" queryParamsHandling="merge">Show every season together</a></p>
+            <p class="hl-muted">Within {{ a.seasonLabel ?? s.season + ' ' + s.seasonYear }} only, so a season change cannot pass for a site difference. <a [routerLink]="[]" [queryParams]="{ season: null, seasonYear: null }" queryParamsHandling="merge">Show every season together</a></p>
           } @else {
             <p class="hl-muted">Every season together: a site read mostly in one season may differ by season rather than by site. The <a routerLink="/drift">Drift overview</a> compares sites within one season.</p>
           }
           <h2>Site means</h2>
-          <hl-mean-swatches [swatches]="swatches()" [caption]="season() ? 'Mean colour at each site in ' + season()!.season + ' ' + season()!.seasonYear : 'Mean colour at each site, all seasons together'" />
+          <hl-mean-swatches [swatches]="swatches()" [caption]="season() ? 'Mean colour at each site in ' + (a.seasonLabel ?? season()!.season + ' ' + season()!.seasonYear) : 'Mean colour at each site, all seasons together'" />
           @if (a.sites.length > 1) {
             <h2>Site by site</h2>
             <hl-site-matrix-table [answer]="a" />
