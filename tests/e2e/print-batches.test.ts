@@ -48,7 +48,8 @@ describe('a printed card re-measured', () => {
 
     const body = await (await page.request.get(`${app.url}/api/reference-sets/v2/chips`)).json();
     const chips = ((Array.isArray(body) ? body : body.chips) as ChipDto[]).filter((c) => c.parent === null).slice(0, 3);
-    const measured = chips.map((c, i) => c.lab.map((v, k) => Math.round((v + OFFSETS[i]![k]!) * 100) / 100));
+    const round = (v: number) => Math.round(v * 100) / 100;
+    const measured = chips.map((c, i): [number, number, number] => [round(c.lab[0] + OFFSETS[i]![0]), round(c.lab[1] + OFFSETS[i]![1]), round(c.lab[2] + OFFSETS[i]![2])]);
     await box.fill(chips.map((c, i) => `${c.code}\t${measured[i]!.join('\t')}`).join('\n'));
     await page.getByRole('button', { name: 'Save the patches' }).click();
     await page.getByText('3 patches saved.').waitFor();
