@@ -15,11 +15,12 @@ import { ROLE_DESCRIPTIONS } from '../../../core/auth/role-descriptions';
 import { ApiError } from '../../../core/http/api-error';
 import { applyFieldErrors } from '../../../core/http/field-errors';
 import { UnitPreference, type UnitSystem } from '../../../core/units/unit-preference';
+import { ProblemNotice } from '../../../shared/problem-notice';
 
 /** Who is signed in, the units lengths and masses are shown in, and changing one's own password. */
 @Component({
   selector: 'hl-account-page',
-  imports: [MatButtonModule, MatButtonToggleModule, MatFormFieldModule, MatIconModule, MatInputModule, NewPasswordFields, ReactiveFormsModule],
+  imports: [ProblemNotice, MatButtonModule, MatButtonToggleModule, MatFormFieldModule, MatIconModule, MatInputModule, NewPasswordFields, ReactiveFormsModule],
   templateUrl: './account-page.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
   styles: `

@@ -11,11 +11,12 @@ import type { InvitationRow, Role } from '../../../../../shared/api/auth.js';
 import { ROLE_CHOICES, ROLE_DESCRIPTIONS } from '../../../core/auth/role-descriptions';
 import { refusalMessage } from '../../../core/http/field-errors';
 import { AdminApi } from '../data/admin-api';
+import { ProblemNotice } from '../../../shared/problem-notice';
 
 /** Invite a person by e-mail with a role; closes with the new invitation once the server has sent it. */
 @Component({
   selector: 'hl-invite-dialog',
-  imports: [MatButtonModule, MatDialogModule, MatFormFieldModule, MatIconModule, MatInputModule, MatSelectModule, ReactiveFormsModule],
+  imports: [ProblemNotice, MatButtonModule, MatDialogModule, MatFormFieldModule, MatIconModule, MatInputModule, MatSelectModule, ReactiveFormsModule],
   templateUrl: './invite-dialog.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

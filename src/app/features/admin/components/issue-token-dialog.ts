@@ -12,11 +12,12 @@ import type { IssuedApiToken } from '../../../../../shared/api/api-token-answers
 import { refusalMessage } from '../../../core/http/field-errors';
 import { AdminApi } from '../data/admin-api';
 import { ApiTokensApi } from '../data/api-tokens-api';
+import { ProblemNotice } from '../../../shared/problem-notice';
 
 /** Issue a BrAPI token to an active person; closes with the issued token (shown once by the page). */
 @Component({
   selector: 'hl-issue-token-dialog',
-  imports: [MatButtonModule, MatDialogModule, MatFormFieldModule, MatIconModule, MatInputModule, MatSelectModule, ReactiveFormsModule],
+  imports: [ProblemNotice, MatButtonModule, MatDialogModule, MatFormFieldModule, MatIconModule, MatInputModule, MatSelectModule, ReactiveFormsModule],
   templateUrl: './issue-token-dialog.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

@@ -8,6 +8,7 @@ import type { Participant, ParticipantsAnswer } from '../../../../../shared/api/
 import type { Role } from '../../../../../shared/api/roles.js';
 import { ApiError } from '../../../core/http/api-error';
 import { CalibrationApi } from '../data/calibration-api';
+import { ProblemNotice } from '../../../shared/problem-notice';
 
 /** Someone who may be invited. */
 interface Candidate {
@@ -24,12 +25,10 @@ interface Candidate {
  */
 @Component({
   selector: 'hl-invite-panel',
-  imports: [MatButtonModule, MatCheckboxModule, MatIconModule],
+  imports: [ProblemNotice, MatButtonModule, MatCheckboxModule, MatIconModule],
   changeDetection: ChangeDetectionStrategy.OnPush,
   template: `
-    @if (problem(); as message) {
-      <div class="hl-notice hl-notice-error" role="alert"><mat-icon aria-hidden="true">error</mat-icon><p>{{ message }}</p></div>
-    }
+    <hl-problem-notice [message]="problem()" />
     @if (done(); as message) {
       <p role="status" class="done"><mat-icon aria-hidden="true" class="inline">mark_email_read</mat-icon> {{ message }}</p>
     }

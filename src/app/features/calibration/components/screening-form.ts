@@ -10,6 +10,7 @@ import { SCREENING_METHOD_LABELS, SCREENING_METHODS, SCREENING_NOTES_MAX, SCREEN
 import { refusalMessage } from '../../../core/http/field-errors';
 import { CalibrationApi } from '../data/calibration-api';
 import { localToday } from './session-form';
+import { ProblemNotice } from '../../../shared/problem-notice';
 
 /** A person a trainer may record a screening for. */
 export interface ScreeningSubject {
@@ -20,13 +21,11 @@ export interface ScreeningSubject {
 /** Records a self-reported colour-vision screening: one's own, or (trainers, admins) someone else's. */
 @Component({
   selector: 'hl-screening-form',
-  imports: [MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatSelectModule, ReactiveFormsModule],
+  imports: [ProblemNotice, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatSelectModule, ReactiveFormsModule],
   changeDetection: ChangeDetectionStrategy.OnPush,
   template: `
     <form class="hl-form screening" [formGroup]="form" (ngSubmit)="recordScreening()" novalidate aria-label="Record a screening">
-      @if (problem(); as message) {
-        <div class="hl-notice hl-notice-error" role="alert"><mat-icon aria-hidden="true">error</mat-icon><p>{{ message }}</p></div>
-      }
+      <hl-problem-notice [message]="problem()" />
       @if (subjects().length) {
         <mat-form-field>
           <mat-label>Whose screening</mat-label>

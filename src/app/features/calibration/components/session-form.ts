@@ -13,6 +13,7 @@ import { CALIBRATION_DEFAULT_THRESHOLDS, CALIBRATION_TITLE_MAX } from '../../../
 import { refusalMessage } from '../../../core/http/field-errors';
 import { ReferenceSetApi } from '../../../shared/chips/reference-set-api';
 import { CalibrationApi } from '../data/calibration-api';
+import { ProblemNotice } from '../../../shared/problem-notice';
 
 /** Today as YYYY-MM-DD in the browser's own time zone (the day the trainer sees). */
 export function localToday(now = new Date()): string {
@@ -23,7 +24,7 @@ export function localToday(now = new Date()): string {
 /** A new calibration session: title, date, reference set, who may answer, and the certification thresholds. */
 @Component({
   selector: 'hl-session-form',
-  imports: [MatButtonModule, MatCheckboxModule, MatFormFieldModule, MatIconModule, MatInputModule, MatSelectModule, ReactiveFormsModule],
+  imports: [ProblemNotice, MatButtonModule, MatCheckboxModule, MatFormFieldModule, MatIconModule, MatInputModule, MatSelectModule, ReactiveFormsModule],
   changeDetection: ChangeDetectionStrategy.OnPush,
   templateUrl: './session-form.html',
   styles: `

@@ -17,11 +17,12 @@ import { PhotoCanvas } from '../../../shared/photos/photo-canvas';
 import { PhotosApi } from '../../../shared/photos/photos-api';
 import { normaliseCode } from '../../../shared/chips/chip-words';
 import { CalibrationApi } from '../data/calibration-api';
+import { ProblemNotice } from '../../../shared/problem-notice';
 
 /** Adds one specimen to a session: a label and its reference colour from an instrument's L*a*b*, a chip code, or a photo region. */
 @Component({
   selector: 'hl-specimen-form',
-  imports: [MatButtonModule, MatButtonToggleModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressBarModule, PhotoCanvas, ReactiveFormsModule],
+  imports: [ProblemNotice, MatButtonModule, MatButtonToggleModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressBarModule, PhotoCanvas, ReactiveFormsModule],
   changeDetection: ChangeDetectionStrategy.OnPush,
   templateUrl: './specimen-form.html',
   styleUrl: './specimen-form.scss',

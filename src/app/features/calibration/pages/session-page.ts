@@ -20,6 +20,7 @@ import { CalibrationApi } from '../data/calibration-api';
 import { Poller, RESULTS_POLL_MS } from '../data/poller';
 import { runsSessions } from '../data/session-words';
 import { LocalDateTimePipe } from '../../../core/format/local-date-time';
+import { ProblemNotice } from '../../../shared/problem-notice';
 
 /** Words for where a specimen's reference came from. */
 const SOURCE_WORDS: Record<SpecimenView['source'], string> = { lab: 'instrument L*a*b*', chip: 'chip', photo: 'photo region' };
@@ -30,7 +31,7 @@ const SOURCE_WORDS: Record<SpecimenView['source'], string> = { lab: 'instrument 
  */
 @Component({
   selector: 'hl-session-page',
-  imports: [LocalDateTimePipe, MatButtonModule, MatExpansionModule, MatIconModule, MatProgressSpinnerModule, RouterLink, CalibrationTabs, InvitePanel, ResultsView, SpecimenForm],
+  imports: [ProblemNotice, LocalDateTimePipe, MatButtonModule, MatExpansionModule, MatIconModule, MatProgressSpinnerModule, RouterLink, CalibrationTabs, InvitePanel, ResultsView, SpecimenForm],
   changeDetection: ChangeDetectionStrategy.OnPush,
   templateUrl: './session-page.html',
   styleUrl: './session-page.scss',

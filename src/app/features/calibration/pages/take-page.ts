@@ -15,6 +15,7 @@ import { MyResultView } from '../components/my-result-view';
 import { CalibrationApi } from '../data/calibration-api';
 import { SessionChips } from '../data/session-chips';
 import { LocalDateTimePipe } from '../../../core/format/local-date-time';
+import { ProblemNotice } from '../../../shared/problem-notice';
 
 /**
  * The trainee's screen: the session's specimens one by one, a pick for each from the field chips
@@ -22,7 +23,7 @@ import { LocalDateTimePipe } from '../../../core/format/local-date-time';
  */
 @Component({
   selector: 'hl-take-page',
-  imports: [LocalDateTimePipe, MatButtonModule, MatIconModule, MatProgressSpinnerModule, RouterLink, CalibrationTabs, ChipChooser, MyResultView, ScreenCaution],
+  imports: [ProblemNotice, LocalDateTimePipe, MatButtonModule, MatIconModule, MatProgressSpinnerModule, RouterLink, CalibrationTabs, ChipChooser, MyResultView, ScreenCaution],
   changeDetection: ChangeDetectionStrategy.OnPush,
   templateUrl: './take-page.html',
   styleUrl: './take-page.scss',

@@ -13,6 +13,7 @@ import { refusalMessage } from '../../../core/http/field-errors';
 import { CollectionApi } from '../../../shared/collection/collection-api';
 import { PASSPORT_LABELS, SAMPLE_STATUSES } from '../../../shared/collection/passport-fields';
 import { passportBody } from '../data/passport-body';
+import { ProblemNotice } from '../../../shared/problem-notice';
 
 /** What the accession dialog needs: the accession to edit (null: a new one) and the sites to choose from. */
 export interface AccessionDialogData {
@@ -23,7 +24,7 @@ export interface AccessionDialogData {
 /** Creates an accession or edits its passport, with the MCPD field names shown small beside our labels. */
 @Component({
   selector: 'hl-accession-dialog',
-  imports: [MatButtonModule, MatDialogModule, MatFormFieldModule, MatIconModule, MatInputModule, MatSelectModule, ReactiveFormsModule, TextFieldModule],
+  imports: [ProblemNotice, MatButtonModule, MatDialogModule, MatFormFieldModule, MatIconModule, MatInputModule, MatSelectModule, ReactiveFormsModule, TextFieldModule],
   templateUrl: './accession-dialog.html',
   styles: `
     .pair {

@@ -12,11 +12,12 @@ import { TextFieldModule } from '@angular/cdk/text-field';
 import { CHARACTER_CODE, DEFAULT_DRIFT_THRESHOLD, ORGANS, type Character, type Organ } from '../../../../../shared/api/collection-answers.js';
 import { refusalMessage } from '../../../core/http/field-errors';
 import { CollectionApi } from '../../../shared/collection/collection-api';
+import { ProblemNotice } from '../../../shared/problem-notice';
 
 /** Adds a character to the catalogue, or edits one (code and organ stay: readings refer to them). Closes with the saved character. */
 @Component({
   selector: 'hl-character-dialog',
-  imports: [
+  imports: [ProblemNotice, 
     MatButtonModule,
     MatDialogModule,
     MatFormFieldModule,

@@ -14,6 +14,7 @@ import { DESCRIPTOR_CODE, DESCRIPTOR_KINDS, type Descriptor, type DescriptorKind
 import { refusalMessage } from '../../../core/http/field-errors';
 import { type DescriptorChanges, DescriptorsApi, type NewDescriptor } from '../../../shared/descriptors/descriptors-api';
 import { KIND_WORDS, categoryIdOf, ratioParts } from '../data/descriptor-words';
+import { ProblemNotice } from '../../../shared/problem-notice';
 
 /** What the descriptor dialog needs: the descriptor to edit (null: a new one) and the catalogue, for ratio parts. */
 export interface DescriptorDialogData {
@@ -24,7 +25,7 @@ export interface DescriptorDialogData {
 /** Adds a descriptor to the catalogue or edits one; code, kind and ratio parts never change once saved. */
 @Component({
   selector: 'hl-descriptor-dialog',
-  imports: [MatButtonModule, MatDialogModule, MatFormFieldModule, MatIconModule, MatInputModule, MatSelectModule, MatSlideToggleModule, ReactiveFormsModule, TextFieldModule],
+  imports: [ProblemNotice, MatButtonModule, MatDialogModule, MatFormFieldModule, MatIconModule, MatInputModule, MatSelectModule, MatSlideToggleModule, ReactiveFormsModule, TextFieldModule],
   templateUrl: './descriptor-dialog.html',
   styles: `
     .pair {

@@ -11,6 +11,7 @@ import type { Accession, Plant, Site } from '../../../../../shared/api/collectio
 import { refusalMessage } from '../../../core/http/field-errors';
 import { CollectionApi } from '../../../shared/collection/collection-api';
 import { plantAgeWords } from '../../../shared/collection/passport-fields';
+import { ProblemNotice } from '../../../shared/problem-notice';
 
 /** What the plant dialog needs: the accession, the plant to edit (null: a new one) and the sites. */
 export interface PlantDialogData {
@@ -22,18 +23,13 @@ export interface PlantDialogData {
 /** Adds a plant to an accession or edits its label, planting date and site; closes with the saved plant. */
 @Component({
   selector: 'hl-plant-dialog',
-  imports: [MatButtonModule, MatDialogModule, MatFormFieldModule, MatIconModule, MatInputModule, MatSelectModule, ReactiveFormsModule],
+  imports: [ProblemNotice, MatButtonModule, MatDialogModule, MatFormFieldModule, MatIconModule, MatInputModule, MatSelectModule, ReactiveFormsModule],
   changeDetection: ChangeDetectionStrategy.OnPush,
   template: `
     <h2 mat-dialog-title>{{ data.plant ? 'Edit plant ' + data.plant.label : 'Add a plant to ' + data.accession.accessionNumber }}</h2>
     <form [formGroup]="form" (ngSubmit)="savePlant()" novalidate>
       <mat-dialog-content class="hl-form">
-        @if (problem(); as message) {
-          <div class="hl-notice hl-notice-error" role="alert">
-            <mat-icon aria-hidden="true">error</mat-icon>
-            <p>{{ message }}</p>
-          </div>
-        }
+        <hl-problem-notice [message]="problem()" />
         <mat-form-field>
           <mat-label>Plant label</mat-label>
           <input matInput formControlName="label" autocomplete="off" cdkFocusInitial />

@@ -21,11 +21,12 @@ import { type SeasonDraft, seasonGroup, seasonLengthWords } from '../data/season
 import { schemeProblems } from '../data/season-problems';
 import { siteBody } from '../data/site-body';
 import { formatDateTime } from '../../../core/format/local-date-time';
+import { ProblemNotice } from '../../../shared/problem-notice';
 
 /** One site: everyone sees its time zone and season ring; an admin edits it, seasons included, and creates new ones. */
 @Component({
   selector: 'hl-site-page',
-  imports: [
+  imports: [ProblemNotice, 
     MatButtonModule,
     MatFormFieldModule,
     MatIconModule,

@@ -18,6 +18,7 @@ import { PlantValues } from '../../../shared/descriptors/plant-values';
 import { type RowEntry, blankEntry, defaultUnit, observationOf, orderForEntry, ratioOf, ratioSource, switchUnit } from '../data/descriptor-entry';
 import { DescriptorsApi } from '../../../shared/descriptors/descriptors-api';
 import { LocalDateTimePipe } from '../../../core/format/local-date-time';
+import { ProblemNotice } from '../../../shared/problem-notice';
 
 /**
  * The recorder's descriptor entry: choose accession and plant, then type each descriptor of the
@@ -26,7 +27,7 @@ import { LocalDateTimePipe } from '../../../core/format/local-date-time';
  */
 @Component({
   selector: 'hl-descriptor-entry-page',
-  imports: [LocalDateTimePipe, DescriptorRow, LoadState, MatButtonModule, MatButtonToggleModule, MatFormFieldModule, MatIconModule, MatSelectModule, PlantValues, RouterLink],
+  imports: [ProblemNotice, LocalDateTimePipe, DescriptorRow, LoadState, MatButtonModule, MatButtonToggleModule, MatFormFieldModule, MatIconModule, MatSelectModule, PlantValues, RouterLink],
   templateUrl: './descriptor-entry-page.html',
   styleUrl: './descriptor-entry-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -20,6 +20,7 @@ import { batchRefusal, clusterBatch, repeatedCharacter, type BatchRefusal } from
 import { ReadingDraftStore, ReadingMemory } from '../data/reading-memory';
 import { AccessionPicker } from './accession-picker';
 import { characterGroups } from './character-picker';
+import { ProblemNotice } from '../../../shared/problem-notice';
 
 /** What the reading form keeps while the recorder is on the photo page (the fields used here). */
 interface DraftFields {
@@ -36,7 +37,7 @@ interface DraftFields {
  */
 @Component({
   selector: 'hl-cluster-readings',
-  imports: [AccessionPicker, MatButtonModule, MatFormFieldModule, MatIconModule, MatProgressSpinnerModule, MatSelectModule, ReactiveFormsModule, RouterLink],
+  imports: [ProblemNotice, AccessionPicker, MatButtonModule, MatFormFieldModule, MatIconModule, MatProgressSpinnerModule, MatSelectModule, ReactiveFormsModule, RouterLink],
   templateUrl: './cluster-readings.html',
   styleUrl: './cluster-readings.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -20,6 +20,7 @@ import { previewRegion, type Pixels } from '../data/photo-preview';
 import { PhotosApi } from '../../../shared/photos/photos-api';
 import { photoSourceFromParams, photoSourceParams } from '../data/photo-source';
 import { defaultRadius, describeRegion, type Tool } from '../../../shared/photos/region-drawing';
+import { ProblemNotice } from '../../../shared/problem-notice';
 
 /** What the next stroke marks. */
 type Marking = 'tissue' | 'card';
@@ -40,7 +41,7 @@ const TOOLS: readonly { tool: Tool; icon: string; label: string; hint: string }[
  */
 @Component({
   selector: 'hl-photo-page',
-  imports: [
+  imports: [ProblemNotice, 
     MatButtonModule,
     MatButtonToggleModule,
     MatIconModule,

@@ -20,6 +20,7 @@ import { REVIEW_COMMENT_MAX, REVIEW_DECISION_LABELS, type ReviewAnswer, type Rev
 import { DECISION_KEYS, decisionForKey } from '../data/review-keys';
 import { ReviewsApi } from '../data/reviews-api';
 import { LocalDateTimePipe } from '../../../core/format/local-date-time';
+import { ProblemNotice } from '../../../shared/problem-notice';
 
 /** What the queue page opens the dialog with. */
 export interface ReviewDialogData {
@@ -46,7 +47,7 @@ const COMMENT_LABELS: Record<Exclude<ReviewDecision, 'approve'>, { label: string
  */
 @Component({
   selector: 'hl-review-dialog',
-  imports: [EarlierReadings, LocalDateTimePipe, MatButtonModule, MatDialogModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressBarModule, PhotoCrop, ReactiveFormsModule, ReadingMatch, RouterLink],
+  imports: [ProblemNotice, EarlierReadings, LocalDateTimePipe, MatButtonModule, MatDialogModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressBarModule, PhotoCrop, ReactiveFormsModule, ReadingMatch, RouterLink],
   templateUrl: './review-dialog.html',
   styleUrl: './review-dialog.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

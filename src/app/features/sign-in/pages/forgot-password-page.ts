@@ -9,11 +9,12 @@ import { RouterLink } from '@angular/router';
 import { AuthApi } from '../../../core/auth/auth-api';
 import { ApiError } from '../../../core/http/api-error';
 import { PublicFrame } from '../components/public-frame';
+import { ProblemNotice } from '../../../shared/problem-notice';
 
 /** Ask for a password reset link by e-mail. The answer never says whether the address has an account. */
 @Component({
   selector: 'hl-forgot-password-page',
-  imports: [MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, PublicFrame, ReactiveFormsModule, RouterLink],
+  imports: [ProblemNotice, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, PublicFrame, ReactiveFormsModule, RouterLink],
   templateUrl: './forgot-password-page.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

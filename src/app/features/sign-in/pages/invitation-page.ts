@@ -16,11 +16,12 @@ import { ApiError } from '../../../core/http/api-error';
 import { applyFieldErrors } from '../../../core/http/field-errors';
 import { PublicFrame } from '../components/public-frame';
 import { LocalDateTimePipe } from '../../../core/format/local-date-time';
+import { ProblemNotice } from '../../../shared/problem-notice';
 
 /** Accept an invitation: see who it is for, choose a password, and be signed in. */
 @Component({
   selector: 'hl-invitation-page',
-  imports: [LocalDateTimePipe, 
+  imports: [ProblemNotice, LocalDateTimePipe, 
     MatButtonModule,
     MatIconModule,
     MatProgressSpinnerModule,

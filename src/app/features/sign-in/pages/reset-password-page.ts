@@ -11,11 +11,12 @@ import { newPasswordGroup } from '../../../core/auth/password-rules';
 import { ApiError } from '../../../core/http/api-error';
 import { applyFieldErrors } from '../../../core/http/field-errors';
 import { PublicFrame } from '../components/public-frame';
+import { ProblemNotice } from '../../../shared/problem-notice';
 
 /** Choose a new password from an e-mailed reset link. */
 @Component({
   selector: 'hl-reset-password-page',
-  imports: [MatButtonModule, MatIconModule, NewPasswordFields, PublicFrame, ReactiveFormsModule, RouterLink],
+  imports: [ProblemNotice, MatButtonModule, MatIconModule, NewPasswordFields, PublicFrame, ReactiveFormsModule, RouterLink],
   templateUrl: './reset-password-page.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

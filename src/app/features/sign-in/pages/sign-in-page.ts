@@ -10,11 +10,12 @@ import { AuthStore } from '../../../core/auth/auth-store';
 import { ApiError } from '../../../core/http/api-error';
 import { PublicFrame } from '../components/public-frame';
 import { safeReturnUrl } from '../data/return-url';
+import { ProblemNotice } from '../../../shared/problem-notice';
 
 /** Sign in with e-mail and password, then go where the person was heading. */
 @Component({
   selector: 'hl-sign-in-page',
-  imports: [MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, PublicFrame, ReactiveFormsModule, RouterLink],
+  imports: [ProblemNotice, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, PublicFrame, ReactiveFormsModule, RouterLink],
   templateUrl: './sign-in-page.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
