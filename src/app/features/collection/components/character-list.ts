@@ -5,11 +5,12 @@ import { MatTableModule } from '@angular/material/table';
 
 import { ORGANS, type Character } from '../../../../../shared/api/collection-answers.js';
 import { Viewport } from '../../../core/layout/viewport';
+import { CatalogueCardEnd } from './catalogue-card-end';
 
 /** The character catalogue: what to read and how, with cautions marked by icon and word; admins get an edit button per row. */
 @Component({
   selector: 'hl-character-list',
-  imports: [MatButtonModule, MatIconModule, MatTableModule],
+  imports: [CatalogueCardEnd, MatButtonModule, MatIconModule, MatTableModule],
   changeDetection: ChangeDetectionStrategy.OnPush,
   templateUrl: './character-list.html',
   styleUrl: './collection-lists.scss',

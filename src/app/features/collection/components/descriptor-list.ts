@@ -5,15 +5,16 @@ import { MatTableModule } from '@angular/material/table';
 
 import type { Descriptor } from '../../../../../shared/api/descriptor-answers.js';
 import { Viewport } from '../../../core/layout/viewport';
+import { CatalogueCardEnd } from './catalogue-card-end';
 import { KIND_WORDS, ratioParts } from '../data/descriptor-words';
 
 /** The descriptor catalogue: kind, units, categories and ratio parts; admins get an edit button per row. */
 @Component({
   selector: 'hl-descriptor-list',
-  imports: [MatButtonModule, MatIconModule, MatTableModule],
+  imports: [CatalogueCardEnd, MatButtonModule, MatIconModule, MatTableModule],
   changeDetection: ChangeDetectionStrategy.OnPush,
   templateUrl: './descriptor-list.html',
-  styleUrl: '../../collection/components/collection-lists.scss',
+  styleUrl: './collection-lists.scss',
 })
 export class DescriptorList {
   /** The catalogue. */
