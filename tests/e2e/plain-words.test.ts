@@ -147,6 +147,40 @@ describe('records in plain words', () => {
     assert.ok((await row.innerText()).includes(expected), `collection progress names "${expected}"`);
   });
 
+  test("should show the plant's earlier readings of the character on the reading page and in the review dialog, swatches on grey with code, day and observer", async () => {
+    type Earlier = { id: number; bestChip: string; observerName: string; observedAt: string };
+    const withEarlier = (await admin.evaluate(async () => {
+      const list = await fetch('/api/readings?pageSize=50').then((r) => r.json());
+      for (const r of list.items as { id: number; plantId: number | null }[]) {
+        if (r.plantId === null) continue;
+        const detail = await fetch(`/api/readings/${r.id}`).then((x) => x.json());
+        if (detail.earlier.length >= 2) return { id: r.id as number, earlier: detail.earlier as Earlier[] };
+      }
+      return null;
+    })) as { id: number; earlier: Earlier[] } | null;
+    assert.ok(withEarlier, 'the demo has a plant read more than twice for one character');
+    await admin.goto(`${app.url}/readings/${withEarlier.id}`);
+    const section = admin.locator('[data-testid="earlier-readings"]');
+    await section.locator('li').first().waitFor();
+    assert.equal(await section.locator('li').count(), withEarlier.earlier.length);
+    const first = await section.locator('li').first().innerText();
+    const e = withEarlier.earlier[0]!;
+    assert.ok(first.includes(e.bestChip) && first.includes(e.observerName), first);
+    assert.match(first, GB_DAY, 'the day in the reader’s style');
+    assert.equal(await section.locator('.hl-swatch-surround').evaluate((el) => getComputedStyle(el).backgroundColor), 'rgb(119, 119, 119)', 'the neutral grey surround (L* 50)');
+    await section.locator('li a').first().click();
+    await admin.waitForURL(new RegExp(`/readings/${e.id}$`));
+
+    const reviewer = await app.newPage({ locale: 'en-GB' });
+    await signIn(reviewer, app.url, 'reviewer@demo.test');
+    await reviewer.goto(`${app.url}/review`);
+    await reviewer.getByRole('button', { name: /^Review reading \d+/ }).first().click();
+    const dialog = reviewer.getByRole('dialog');
+    await dialog.locator('hl-reading-match').waitFor();
+    await dialog.locator('[data-testid="earlier-readings"] h3').waitFor();
+    assert.match(await dialog.locator('[data-testid="earlier-readings"]').innerText(), /earlier readings of|No earlier reading of this character/);
+  });
+
   test('should show a reviewer no "New reading" button, and a recorder one', async () => {
     const reviewer = await app.newPage({ phone: true });
     await signIn(reviewer, app.url, 'reviewer@demo.test');
@@ -158,6 +192,22 @@ describe('records in plain words', () => {
     await signIn(recorder, app.url, 'recorder@demo.test');
     await recorder.goto(`${app.url}/readings`);
     await recorder.getByRole('link', { name: 'New reading' }).waitFor();
+    // An accession and character nobody has read: the Drift page offers "Record one" to the recorder only.
+    const empty = (await reviewer.evaluate(async () => {
+      const [accessions, characters] = await Promise.all(['/api/accessions', '/api/characters'].map((u) => fetch(u).then((r) => r.json())));
+      for (const c of characters as { id: number; colour: boolean }[]) {
+        if (!c.colour) continue;
+        const list = await fetch(`/api/readings?accessionId=${accessions[0].id}&characterId=${c.id}&includeSuperseded=true`).then((r) => r.json());
+        if (list.total === 0) return `accessionId=${accessions[0].id}&characterId=${c.id}`;
+      }
+      return null;
+    })) as string | null;
+    assert.ok(empty, 'the demo leaves some character of its first accession unread');
+    for (const [page, offered] of [[reviewer, false], [recorder, true]] as const) {
+      await page.goto(`${app.url}/drift?${empty}`);
+      await page.getByText('No readings of this accession and character yet.').waitFor();
+      assert.equal(await page.getByRole('link', { name: 'Record one' }).count(), offered ? 1 : 0, offered ? 'the recorder is offered it' : 'the reviewer is not');
+    }
   });
 
   test('should approve the filtered queue page with one confirmation', async () => {

@@ -1,4 +1,4 @@
-import { NAV_ITEMS, NavItem, navItemsFor, navSectionsFor } from './nav-items';
+import { NAV_ITEMS, NavItem, mayOpen, navItemsFor, navSectionsFor } from './nav-items';
 
 const paths = (items: NavItem[]) => items.map((item) => item.path);
 
@@ -58,5 +58,12 @@ describe('nav items', () => {
     const items = [...NAV_ITEMS, review];
     expect(paths(navItemsFor('reviewer', items))).toContain('/review');
     expect(paths(navItemsFor('trainer', items))).not.toContain('/review');
+  });
+
+  it('should say a reviewer may not open Record while a recorder, trainer and admin may', () => {
+    expect(mayOpen('reviewer', '/record')).toBe(false);
+    for (const role of ['recorder', 'trainer', 'admin'] as const) expect(mayOpen(role, '/record')).toBe(true);
+    expect(mayOpen(null, '/record')).toBe(false);
+    expect(mayOpen('admin', '/nowhere')).toBe(false);
   });
 });

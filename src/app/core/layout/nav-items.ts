@@ -48,6 +48,14 @@ export function navItemsFor(role: Role | null, items: readonly NavItem[] = NAV_I
   return items.filter((item) => item.roles.includes(role));
 }
 
+/**
+ * Whether a role may open the section at `path`: a page offers a link (such as "New reading") only
+ * to those the section's guard lets in, so no button silently leads elsewhere.
+ */
+export function mayOpen(role: Role | null | undefined, path: string, items: readonly NavItem[] = NAV_ITEMS): boolean {
+  return role !== null && role !== undefined && (items.find((item) => item.path === path)?.roles.includes(role) ?? false);
+}
+
 /** The entries a role may see, with consecutive entries of one group gathered under its heading. */
 export function navSectionsFor(role: Role | null, items: readonly NavItem[] = NAV_ITEMS): NavSection[] {
   const sections: NavSection[] = [];

@@ -18,6 +18,8 @@ import { AnalysisApi } from '../data/analysis-api';
 import { groupSeries } from '../data/drift-series';
 import { choiceFromParams, paramsFromChoice, subjectOf, type DriftChoice } from '../data/drift-subject';
 import { emptyReason, groupLabel, summaryWords, tooSmall } from '../data/drift-words';
+import { AuthStore } from '../../../core/auth/auth-store';
+import { mayOpen } from '../../../core/layout/nav-items';
 
 /**
  * Drift by season: pick an accession and character (and optionally a site), kept in the URL; then
@@ -36,6 +38,9 @@ export class DriftPage {
   private readonly collection = inject(CollectionApi);
   private readonly router = inject(Router);
   private readonly route = inject(ActivatedRoute);
+  private readonly me = inject(AuthStore).currentUser;
+  /** Whether the signed-in role may take readings: reviewers are not offered a Record link the guard would refuse. */
+  protected readonly mayRecord = computed(() => mayOpen(this.me()?.role, '/record'));
 
   private readonly params = toSignal(this.route.queryParams, { initialValue: this.route.snapshot.queryParams });
   protected readonly choice = computed(() => choiceFromParams(this.params()));

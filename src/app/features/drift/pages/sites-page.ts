@@ -13,6 +13,8 @@ import { SiteMatrixTable } from '../components/site-matrix-table';
 import { AnalysisApi } from '../data/analysis-api';
 import { choiceFromParams, paramsFromChoice, subjectOf, type DriftChoice } from '../data/drift-subject';
 import { markedPairs } from '../data/site-matrix';
+import { AuthStore } from '../../../core/auth/auth-store';
+import { mayOpen } from '../../../core/layout/nav-items';
 
 /** Differences by site: each site's mean of one accession and character as a swatch, and the site-by-site ΔE00 matrix. */
 @Component({
@@ -43,7 +45,7 @@ import { markedPairs } from '../data/site-matrix';
         @if (a.sites.length === 0) {
           <div class="hl-empty">
             <mat-icon aria-hidden="true">palette</mat-icon>
-            <p>No readings of this accession and character yet. <a mat-button routerLink="/record">Record one</a></p>
+            <p>No readings of this accession and character yet.@if (mayRecord()) { <a mat-button routerLink="/record">Record one</a>}</p>
           </div>
         } @else {
           <p class="summary" role="status">
@@ -88,6 +90,9 @@ export class SitesPage {
   private readonly collection = inject(CollectionApi);
   private readonly router = inject(Router);
   private readonly route = inject(ActivatedRoute);
+  private readonly me = inject(AuthStore).currentUser;
+  /** Whether the signed-in role may take readings: reviewers are not offered a Record link the guard would refuse. */
+  protected readonly mayRecord = computed(() => mayOpen(this.me()?.role, '/record'));
 
   private readonly params = toSignal(this.route.queryParams, { initialValue: this.route.snapshot.queryParams });
   protected readonly choice = computed(() => ({ ...choiceFromParams(this.params()), siteId: null }));

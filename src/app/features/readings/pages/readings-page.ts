@@ -10,7 +10,7 @@ import { Router, RouterLink } from '@angular/router';
 import type { Subscription } from 'rxjs';
 
 import { AuthStore } from '../../../core/auth/auth-store';
-import { NAV_ITEMS } from '../../../core/layout/nav-items';
+import { mayOpen } from '../../../core/layout/nav-items';
 import { Viewport } from '../../../core/layout/viewport';
 import { CollectionApi } from '../../../shared/collection/collection-api';
 import { VerdictMark } from '../../../shared/chips/verdict-mark';
@@ -52,10 +52,7 @@ export class ReadingsPage extends ReadingListParams {
   protected readonly handset = inject(Viewport).handset;
   protected readonly me = inject(AuthStore).currentUser;
   /** Whether the signed-in role may take readings (reviewers may not: the Record page would turn them away). */
-  protected readonly mayRecord = computed(() => {
-    const role = this.me()?.role;
-    return role !== undefined && (NAV_ITEMS.find((i) => i.path === '/record')?.roles.includes(role) ?? false);
-  });
+  protected readonly mayRecord = computed(() => mayOpen(this.me()?.role, '/record'));
   protected readonly columns = ['swatch', 'observedAt', 'accession', 'character', 'site', 'method', 'deltaE00', 'observer', 'status'];
   protected readonly pageSizes = PAGE_SIZES;
   protected readonly methodWords = METHOD_WORDS;
