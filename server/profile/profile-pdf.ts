@@ -94,6 +94,7 @@ function drawCharacter(doc: PDFKit.PDFDocument, c: CharacterProfile, width: numb
     .font('Helvetica')
     .fontSize(9)
     .text(pdfText(`${c.chip.code} ${c.chip.name}, ΔE00 ${n2(c.chip.deltaE00)} (${c.chip.verdict})`), { width: tw })
+    .text(pdfText(`Nearest chip in each set: ${setChipsLine(c)}.`), { width: tw })
     .text(pdfText(`L* ${n2(l)}, a* ${n2(a)}, b* ${n2(b)}; C* ${n2(chroma)}, h ${n1(hue)} deg${c.centre.inGamut ? '' : ' (outside sRGB: the swatch is an approximation)'}`), { width: tw })
     .text(pdfText(`Spread ${n2(c.spreadDeltaE00)} ΔE00 from the accepted colour; ${c.nReadings} ${c.basis === 'approved' ? 'approved ' : ''}readings (of ${c.nCurrent} in force) by ${c.nObservers} observers on ${c.nPlants} plants.`), { width: tw })
     .text(pdfText(c.flagged ? `Flagged (threshold ΔE00 ${c.threshold}): ${c.flags.map((f) => `${f.label}, ΔE00 ${n2(f.deltaE00)}`).join('; ')}.` : `Steady across ${c.seasons.length} season groups and ${c.sites.length} sites (threshold ΔE00 ${c.threshold}).`), { width: tw });
@@ -103,6 +104,11 @@ function drawCharacter(doc: PDFKit.PDFDocument, c: CharacterProfile, width: numb
   if (c.outliers.length) doc.text(pdfText(`${c.outliers.length} reading(s) further than ΔE00 ${c.threshold} from it: ${c.outliers.slice(0, 6).map((o) => `#${o.readingId}`).join(', ')}${c.outliers.length > 6 ? ', ...' : ''}.`), { width: tw });
   doc.y = Math.max(doc.y, top + surround + 4) + LAYOUT.gap;
   doc.x = LAYOUT.margin;
+}
+
+/** "v1 F-092.014, ΔE00 0.41; v2 (current) F-233.007, ΔE00 0.38", so a printed record names the chip in either set. */
+export function setChipsLine(c: Pick<CharacterProfile, 'setChips'>): string {
+  return c.setChips.map((s) => `${s.setId}${s.current ? ' (current)' : ''} ${s.chip.code}, ΔE00 ${n2(s.chip.deltaE00)}`).join('; ');
 }
 
 function descriptorLine(d: DescriptorSummary): string {

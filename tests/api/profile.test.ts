@@ -170,7 +170,9 @@ describe('the characterisation record of an accession', () => {
     // The same record uncompressed, so its text can be read back: pdfkit writes Helvetica text as hex strings in TJ arrays.
     const text = pdfTextOf(await profilePdf(await profile(reviewer, ids.accession), { compress: false }));
     const c = characterOf(await profile(reviewer, ids.accession), ids.character);
-    for (const expected of ['Characterisation record \u00b7 PW-0001 Profile Example', c.chip.code, 'L* 51.25, a* 10.25, b* 5.00', 'Seasons: Dry 2025 n 5', 'Caution: ', RECORD_CAUTION.slice(0, 60)]) {
+    // The printed record names the accepted colour's chip in v2 as well as in the current v1.
+    const v2 = c.setChips.find((s) => s.setId === 'v2')!.chip.code;
+    for (const expected of ['Characterisation record \u00b7 PW-0001 Profile Example', c.chip.code, 'Nearest chip in each set:', v2, 'L* 51.25, a* 10.25, b* 5.00', 'Seasons: Dry 2025 n 5', 'Caution: ', RECORD_CAUTION.slice(0, 60)]) {
       assert.ok(text.includes(expected), `the PDF says "${expected}"`);
     }
   });
