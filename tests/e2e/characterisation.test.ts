@@ -32,6 +32,10 @@ describe('the characterisation of an accession, on a phone', () => {
     assert.match(code, /^F-\d{3}(\.\d{3})?$/);
     assert.equal(await stripes.locator('.colour').evaluate((el) => getComputedStyle(el).backgroundColor), 'rgb(119, 119, 119)', 'the neutral grey surround (L* 50)');
     assert.match(await stripes.innerText(), /flagged: \d+ season change/);
+    // The accepted colour's nearest chip in v1 and in v2, each on the grey surround with its code.
+    const sets = stripes.getByTestId('set-chips');
+    assert.match(await sets.locator('[data-set="v1"]').innerText(), new RegExp(`^F-\\d{3}[\\s\\S]*In set v1 \\(current, shown above\\): ${code.replace('.', '\\.')} `));
+    assert.match(await sets.locator('[data-set="v2"]').innerText(), /In set v2: F-(19\d|2\d\d|3\d\d|4[0-2]\d)(\.\d{3})? .*ΔE00 \d/);
     assert.match(await section.innerText(), /approximate/);
     await stripes.scrollIntoViewIfNeeded();
     await screenshot(page, 'characterisation-accession');

@@ -65,7 +65,11 @@ describe('the colours of a striped region saved as readings of their characters'
     await choose(page, 'Plant (optional)', /^P1/);
     await section.getByRole('radio', { name: 'Open shade' }).click();
     await choose(page, 'Character of colour 1', 'Petiole, middle third');
+    // The same character for both colours is pointed out at the second, before anything is sent.
+    await choose(page, 'Character of colour 2', 'Petiole, middle third');
+    await section.getByText('Character: already given to an earlier colour').waitFor();
     await choose(page, 'Character of colour 2', 'Petiole stripes');
+    await section.getByText('Character: already given to an earlier colour').waitFor({ state: 'detached' });
     const save = section.getByRole('button', { name: 'Save 2 readings' });
     const target = await save.boundingBox();
     assert.ok(target && target.height >= 48, 'the save button is a big target');
