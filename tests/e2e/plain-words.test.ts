@@ -95,10 +95,13 @@ describe('records in plain words', () => {
     const characters = (await admin.evaluate(() => fetch('/api/characters').then((r) => r.json()))) as { id: number; code: string }[];
     const accessionId = accessions.find((a) => a.accessionNumber === DEMO_DRIFT.accessionNumber)!.id;
     const characterId = characters.find((c) => c.code === DEMO_DRIFT.characterCode)!.id;
+    const sessions = (await admin.evaluate(() => fetch('/api/calibration/sessions').then((r) => r.json()))) as { id: number; status: string }[];
+    const closed = sessions.find((s) => s.status === 'closed')!;
     // Each page is read once what it loads is on screen: its section headings, its plant list, its table rows.
     const pages: { path: string; ready: string[] }[] = [
       { path: '/calibration', ready: ['main h2'] },
       { path: '/calibration/records', ready: ['main h2'] },
+      { path: `/calibration/sessions/${closed.id}`, ready: ['[data-testid="kappa-interval"]', 'main p.status'] },
       { path: `/collection/accessions/${accessionId}`, ready: ['hl-characterisation li.character', 'main p:has-text("Planted")'] },
       { path: `/drift?accessionId=${accessionId}&characterId=${characterId}`, ready: ['hl-groups-table tbody tr'] },
     ];

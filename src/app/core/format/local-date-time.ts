@@ -35,6 +35,12 @@ export function formatDateTime(value: string | Date | null | undefined, style: D
   return f.format(date);
 }
 
+/** Today as YYYY-MM-DD in the device's own time zone (the day the person sees), for date inputs. */
+export function localToday(now = new Date()): string {
+  const pad = (n: number) => String(n).padStart(2, '0');
+  return `${now.getFullYear()}-${pad(now.getMonth() + 1)}-${pad(now.getDate())}`;
+}
+
 /** `{{ iso | localDateTime }}`, `| localDateTime: 'seconds'`, `| localDateTime: 'date'`: see `formatDateTime`. */
 @Pipe({ name: 'localDateTime' })
 export class LocalDateTimePipe implements PipeTransform {

@@ -9,7 +9,7 @@ import { MatSelectModule } from '@angular/material/select';
 import { SCREENING_METHOD_LABELS, SCREENING_METHODS, SCREENING_NOTES_MAX, SCREENING_RESULTS, type ScreeningMethod, type ScreeningResult } from '../../../../../shared/api/calibration-answers.js';
 import { refusalMessage } from '../../../core/http/field-errors';
 import { CalibrationApi } from '../data/calibration-api';
-import { localToday } from './session-form';
+import { localToday } from '../../../core/format/local-date-time';
 import { ProblemNotice } from '../../../shared/problem-notice';
 
 /** A person a trainer may record a screening for. */

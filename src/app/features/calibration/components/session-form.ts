@@ -14,12 +14,7 @@ import { refusalMessage } from '../../../core/http/field-errors';
 import { ReferenceSetApi } from '../../../shared/chips/reference-set-api';
 import { CalibrationApi } from '../data/calibration-api';
 import { ProblemNotice } from '../../../shared/problem-notice';
-
-/** Today as YYYY-MM-DD in the browser's own time zone (the day the trainer sees). */
-export function localToday(now = new Date()): string {
-  const pad = (n: number) => String(n).padStart(2, '0');
-  return `${now.getFullYear()}-${pad(now.getMonth() + 1)}-${pad(now.getDate())}`;
-}
+import { localToday } from '../../../core/format/local-date-time';
 
 /** A new calibration session: title, date, reference set, who may answer, and the certification thresholds. */
 @Component({

@@ -12,6 +12,7 @@ import { refusalMessage } from '../../../core/http/field-errors';
 import { CollectionApi } from '../../../shared/collection/collection-api';
 import { plantAgeWords } from '../../../shared/collection/passport-fields';
 import { ProblemNotice } from '../../../shared/problem-notice';
+import { localToday } from '../../../core/format/local-date-time';
 
 /** What the plant dialog needs: the accession, the plant to edit (null: a new one) and the sites. */
 export interface PlantDialogData {
@@ -76,7 +77,7 @@ export class PlantDialog {
   protected readonly data = inject<PlantDialogData>(MAT_DIALOG_DATA);
   protected readonly form = inject(NonNullableFormBuilder).group({
     label: [this.data.plant?.label ?? '', [Validators.required, Validators.maxLength(40)]],
-    plantedOn: [this.data.plant?.plantedOn ?? new Date().toISOString().slice(0, 10), Validators.required],
+    plantedOn: [this.data.plant?.plantedOn ?? localToday(), Validators.required],
     siteId: [this.data.plant?.siteId ?? this.data.accession.siteId],
   });
   protected readonly busy = signal(false);

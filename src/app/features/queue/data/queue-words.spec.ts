@@ -15,6 +15,9 @@ describe('queue words', () => {
   });
 
   it('should give the time saved with day and month', () => {
-    expect(savedAt('2026-03-01T09:05:00Z', 'en-GB')).toMatch(/1 Mar/);
+    expect(savedAt('2026-03-01T09:05:00Z', 'en-GB')).toMatch(/1 Mar 2026/);
+    // The same style as every other date: en-GB's 24-hour clock, en-US's 12-hour one.
+    expect(savedAt('2026-03-01T15:05:00Z', 'en-GB')).not.toMatch(/AM|PM/);
+    expect(savedAt('2026-03-01T15:05:00Z', 'en-US')).toMatch(/Mar 1, 2026.*\d:05\s?(AM|PM)/);
   });
 });

@@ -1,5 +1,6 @@
 // Plain words for the queue screen: each state with an icon (never colour alone), and times.
 import type { PendingReading, QueueState } from '../../../core/offline/queue-item';
+import { formatDateTime } from '../../../core/format/local-date-time';
 
 /** Each state as the card shows it. */
 export const STATE_WORDS: Record<QueueState, { label: string; icon: string }> = {
@@ -13,9 +14,9 @@ export function waitingWords(n: number): string {
   return `${n} ${n === 1 ? 'reading' : 'readings'} waiting to send`;
 }
 
-/** When it was saved, in the phone's own time and language. */
+/** When it was saved, in the app's one date and time style for the phone's own language and time zone. */
 export function savedAt(iso: string, locale?: string): string {
-  return new Intl.DateTimeFormat(locale, { day: 'numeric', month: 'short', hour: '2-digit', minute: '2-digit' }).format(new Date(iso));
+  return locale === undefined ? formatDateTime(iso) : formatDateTime(iso, 'date-time', locale);
 }
 
 /** What the last attempt told, for a reading still waiting; null before any attempt. */

@@ -12,7 +12,7 @@ import { Router, RouterLink } from '@angular/router';
 import { PRINT_CAUTION, PRINT_KINDS, PRINT_NOTE_MAX, type PrintKind, type PrintSummary } from '../../../../../shared/api/print-batch-answers.js';
 import { AuthStore } from '../../../core/auth/auth-store';
 import { ApiError } from '../../../core/http/api-error';
-import { formatDateTime } from '../../../core/format/local-date-time';
+import { formatDateTime, localToday } from '../../../core/format/local-date-time';
 import { deltaEText } from '../../../shared/chips/chip-words';
 import { ReferenceSetApi } from '../../../shared/chips/reference-set-api';
 import { ReferenceSetTabs } from '../components/reference-set-tabs';
@@ -61,7 +61,7 @@ export class PrintsPage {
 
   protected readonly setId = signal<string | null>(null);
   protected readonly kind = signal<PrintKind>('card');
-  protected readonly printedOn = signal(new Date().toISOString().slice(0, 10));
+  protected readonly printedOn = signal(localToday());
   protected readonly note = signal('');
   protected readonly saving = signal(false);
   protected readonly errors = signal<Record<string, string>>({});
