@@ -184,6 +184,23 @@ describe('records in plain words', () => {
     assert.match(await dialog.locator('[data-testid="earlier-readings"]').innerText(), /earlier readings of|No earlier reading of this character/);
   });
 
+  test('should show a conflict in words at the field that conflicts, not at the top of the dialog', async () => {
+    await admin.goto(`${app.url}/collection`);
+    await admin.getByRole('button', { name: 'New accession' }).click();
+    const dialog = admin.getByRole('dialog');
+    // The demo's first accession, typed in lower case: numbers are compared regardless of case.
+    await dialog.getByLabel('Accession number').fill(DEMO_DRIFT.accessionNumber.toLowerCase());
+    await dialog.getByRole('textbox', { name: /^Name/ }).fill('A second try');
+    await choose(admin, 'Held at site', /RDP/);
+    await dialog.getByRole('button', { name: 'Create accession' }).click();
+    const field = dialog.locator('mat-form-field', { has: admin.getByLabel('Accession number') });
+    const error = field.locator('mat-error');
+    await error.waitFor();
+    assert.match(await error.innerText(), new RegExp(`an accession ${DEMO_DRIFT.accessionNumber.toLowerCase()} already exists`, 'i'));
+    assert.doesNotMatch(await dialog.innerText(), /Conflict|already in use/);
+    await dialog.getByRole('button', { name: 'Cancel' }).click();
+  });
+
   test('should show a reviewer no "New reading" button, and a recorder one', async () => {
     const reviewer = await app.newPage({ phone: true });
     await signIn(reviewer, app.url, 'reviewer@demo.test');

@@ -205,6 +205,11 @@ describe('drift, the review queue and the recorder’s notice', () => {
     await notice.getByRole('link', { name: `Open reading ${rereadId}` }).click();
     await recorder.waitForURL((u) => u.pathname === `/readings/${rereadId}`);
     await recorder.getByRole('link', { name: /Correct this reading/ }).waitFor();
+    // The reviewer's words head the reading, above its actions, not inside a history line.
+    const note = recorder.getByTestId('review-comment');
+    await note.waitFor();
+    assert.ok((await note.innerText()).includes(REREAD_COMMENT), await note.innerText());
+    assert.ok(await note.evaluate((el) => Boolean(el.compareDocumentPosition(document.querySelector('.actions')!) & Node.DOCUMENT_POSITION_FOLLOWING)), 'the note comes before the actions');
     await recorder.waitForFunction((e) => document.querySelector('mat-toolbar hl-notification-bell a')?.getAttribute('aria-label') === e, `Notifications: ${unreadBefore + 1} unread`);
   });
 
