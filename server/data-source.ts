@@ -30,6 +30,7 @@ import { CollectingCoordinates1764910000000 } from './migrations/1764910000000-c
 import { ReferenceSetChoice1764920000000 } from './migrations/1764920000000-reference-set-choice.js';
 import { CalibrationNotices1764930000000 } from './migrations/1764930000000-calibration-notices.js';
 import { ApiTokens1764940000000 } from './migrations/1764940000000-api-tokens.js';
+import { InstrumentIlluminant1765000000000 } from './migrations/1765000000000-instrument-illuminant.js';
 import { ReadingCluster1765010000000 } from './migrations/1765010000000-reading-cluster.js';
 import { PrintBatches1765010001000 } from './migrations/1765010001000-print-batches.js';
 import { CaseInsensitiveCodes1765030000000 } from './migrations/1765030000000-case-insensitive-codes.js';
@@ -42,7 +43,7 @@ import { PrintBatch, PrintPatch } from './reference-sets/print-batch.entity.js';
 export const ENTITIES = [User, Invitation, PasswordReset, SessionRecord, AuditEvent, MailMessage, Site, Season, Accession, Plant, Character, ReferenceSet, Chip, ReferenceSetChoice, Photo, Descriptor, Observation, CalibrationSession, Specimen, Participant, CalibrationResponse, Certification, ColourVisionScreening, IdempotencyKey, Reading, Review, Notification, ApiToken, PlantSkip, PrintBatch, PrintPatch];
 
 /** Every migration in order; they run at start-up. */
-export const MIGRATIONS = [Initial1764633600000, ReferenceSets1764720000000, Photos1764730000000, Readings1764800000000, CollectionManagement1764810000000, Calibration1764820000000, Idempotency1764830000000, Reviews1764840000000, PlantSheet1764900000000, CollectingCoordinates1764910000000, ReferenceSetChoice1764920000000, CalibrationNotices1764930000000, ApiTokens1764940000000, ReadingCluster1765010000000, PrintBatches1765010001000, CaseInsensitiveCodes1765030000000];
+export const MIGRATIONS = [Initial1764633600000, ReferenceSets1764720000000, Photos1764730000000, Readings1764800000000, CollectionManagement1764810000000, Calibration1764820000000, Idempotency1764830000000, Reviews1764840000000, PlantSheet1764900000000, CollectingCoordinates1764910000000, ReferenceSetChoice1764920000000, CalibrationNotices1764930000000, ApiTokens1764940000000, InstrumentIlluminant1765000000000, ReadingCluster1765010000000, PrintBatches1765010001000, CaseInsensitiveCodes1765030000000];
 
 /**
  * The one data source: better-sqlite3, WAL, foreign keys on (TypeORM's driver sets

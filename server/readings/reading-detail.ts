@@ -35,6 +35,8 @@ function provenanceOf(r: Reading): ReadingProvenance {
     pipeline: r.pipeline,
     cluster: r.cluster,
     instrument: r.instrument,
+    illuminant: r.illuminant,
+    reportedLab: r.reportedLab,
     source: r.source,
   };
 }

@@ -2,6 +2,7 @@
 // its method, matched against the current reference set, the season and plant age derived.
 // No req/res, and nothing written here: create, supersede, import and the demo all insert the
 // values this gives, each in its own transaction.
+import { labD50ToD65 } from '../../shared/colour/chromatic-adaptation.js';
 import type { EntityManager } from 'typeorm';
 import { OBSERVED_AT_FUTURE_SLACK_MS } from '../../shared/api/reading-answers.js';
 import type { CreateReadingBody } from '../../shared/api/readings.js';
@@ -90,7 +91,8 @@ function asPhotoFieldError(err: unknown): unknown {
 async function takeColour(m: EntityManager, src: ColourSources, set: LoadedSet, body: ReadingFields): Promise<TakenColour> {
   switch (body.method) {
     case 'instrument':
-      return { lab: labFromTuple(body.lab!), source: null, provenance: NO_PHOTO };
+      // Stored readings are CIELAB D65/2°: a D50/2° instrument's numbers are adapted (Bradford); the rest are kept as reported.
+      return { lab: body.illuminant === 'D50/2' ? labD50ToD65(labFromTuple(body.lab!)) : labFromTuple(body.lab!), source: null, provenance: NO_PHOTO };
     case 'chip': {
       const chip = chipOf(set, body.chipCode!, 'chipCode');
       return { lab: labFromTuple(chip.lab), source: chip.code, provenance: NO_PHOTO };
@@ -192,8 +194,10 @@ export async function prepareReading(m: EntityManager, src: ColourSources, body:
     eyeDeltaE00: eye ? deltaE00(taken.lab, labFromTuple(eye.lab)) : null,
     ...taken.provenance,
     instrument: body.method === 'instrument' ? body.instrument || null : null,
+    illuminant: body.method === 'instrument' ? (body.illuminant ?? null) : null,
+    reportedLab: body.method === 'instrument' && body.illuminant === 'D50/2' ? body.lab! : null,
     source: taken.source,
-    light: body.light,
+    light: body.light ?? null,
     secondsSinceCut: body.secondsSinceCut ?? null,
     leafPosition: body.leafPosition || null,
     notes: body.notes || null,

@@ -1,5 +1,6 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, OneToOne, PrimaryGeneratedColumn } from 'typeorm';
-import type { Light, ReadingCluster, ReadingMethod, ReadingStatus } from '../../shared/api/reading-answers.js';
+import type { InstrumentIlluminant, Light, ReadingCluster, ReadingMethod, ReadingStatus } from '../../shared/api/reading-answers.js';
+import type { LabTuple } from '../../shared/colour/lab.js';
 import type { SampleCorrection } from '../../shared/api/photo-answers.js';
 import type { Region } from '../../shared/photo/region.js';
 import { User } from '../auth/user.entity.js';
@@ -72,10 +73,15 @@ export class Reading {
   @Column('simple-json', { nullable: true }) cluster: ReadingCluster | null;
   /** instrument: its make or name. */
   @Column('varchar', { length: 80, nullable: true }) instrument: string | null;
+  /** instrument: the illuminant/observer it reported (`D65/10`, `D65/2`, `D50/2`, `other`). */
+  @Column('varchar', { length: 8, nullable: true }) illuminant: InstrumentIlluminant | null;
+  /** instrument: L*a*b* as reported, when they were adapted to D65/2° before storing (D50/2°). */
+  @Column('simple-json', { nullable: true }) reportedLab: LabTuple | null;
   /** chip: the code picked; swatch: the hex tapped. */
   @Column('varchar', { length: 20, nullable: true }) source: string | null;
 
-  @Column('varchar', { length: 20 }) light: Light;
+  /** Ambient light; null for an instrument reading (the instrument lights the sample itself). */
+  @Column('varchar', { length: 20, nullable: true }) light: Light | null;
   @Column('integer', { nullable: true }) secondsSinceCut: number | null;
   @Column('varchar', { length: 80, nullable: true }) leafPosition: string | null;
   @Column('text', { nullable: true }) notes: string | null;

@@ -24,6 +24,22 @@ export const LIGHT_LABELS: Readonly<Record<Light, string>> = {
   'viewing-booth': 'Viewing booth',
 };
 
+/**
+ * The illuminant/observer an instrument reports its CIELAB under. D50/2° is adapted to D65/2° by
+ * Bradford before matching; D65/10° and "other" are kept as reported, since a 10° reading cannot
+ * be turned into a 2° one exactly without the spectrum.
+ */
+export const INSTRUMENT_ILLUMINANTS = ['D65/10', 'D65/2', 'D50/2', 'other'] as const;
+export type InstrumentIlluminant = (typeof INSTRUMENT_ILLUMINANTS)[number];
+
+/** Plain labels of the illuminant/observer choices. */
+export const ILLUMINANT_LABELS: Readonly<Record<InstrumentIlluminant, string>> = {
+  'D65/10': 'D65 / 10°',
+  'D65/2': 'D65 / 2°',
+  'D50/2': 'D50 / 2°',
+  other: 'Other',
+};
+
 /** Review states: every reading starts submitted; a reviewer approves, flags or asks for a re-read. Superseded is `supersededById !== null`, not a status. */
 export const READING_STATUSES = ['submitted', 'approved', 'flagged', 'reread-requested'] as const;
 export type ReadingStatus = (typeof READING_STATUSES)[number];
@@ -114,7 +130,8 @@ export interface ReadingDto {
   /** The season as people say it: "Dry 2025", or "Wet 2024–25" for a season that wraps the year end; null without a season. */
   seasonLabel: string | null;
   plantAgeMonths: number | null;
-  light: Light;
+  /** The ambient light; null for an instrument reading (the instrument lights the sample itself). */
+  light: Light | null;
   secondsSinceCut: number | null;
   leafPosition: string | null;
   notes: string | null;
@@ -141,6 +158,10 @@ export interface ReadingProvenance {
   /** A photo reading of one colour of a region that held several; null for a reading of the whole region. */
   cluster: ReadingCluster | null;
   instrument: string | null;
+  /** instrument: the illuminant/observer it reported (null when not said). */
+  illuminant: InstrumentIlluminant | null;
+  /** instrument: L*a*b* as it reported them, before adaptation to D65/2° (only when adapted: D50/2°). */
+  reportedLab: LabTuple | null;
   /** chip: the chip picked; swatch: the hex tapped. */
   source: string | null;
 }

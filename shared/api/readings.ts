@@ -5,6 +5,7 @@ import { LAB_INPUT_LIMITS } from './reference-set-answers.js';
 import { regionSchema } from './photos.js';
 import {
   CUT_SECONDS_MAX,
+  INSTRUMENT_ILLUMINANTS,
   LEAF_POSITION_MAX,
   LIGHTS,
   READING_METHODS,
@@ -52,7 +53,8 @@ const readingFields = z.object({
     })
     .optional(),
   instrument: optionalText(80),
-  light: z.enum(LIGHTS, { message: `must be one of ${LIGHTS.join(', ')}` }),
+  light: z.enum(LIGHTS, { message: `must be one of ${LIGHTS.join(', ')}` }).nullish(),
+  illuminant: z.enum(INSTRUMENT_ILLUMINANTS, { message: `must be one of ${INSTRUMENT_ILLUMINANTS.join(', ')} (illuminant/observer in degrees)` }).nullish(),
   secondsSinceCut: z.number({ message: 'must be a number of seconds' }).int({ message: 'must be whole seconds' }).min(0).max(CUT_SECONDS_MAX).nullish(),
   leafPosition: optionalText(LEAF_POSITION_MAX),
   notes: optionalText(READING_NOTES_MAX),
@@ -68,6 +70,9 @@ function methodRules<T extends z.infer<typeof readingFields>>(body: T, ctx: z.Re
     if (field === own && !present) ctx.addIssue({ code: 'custom', path: [field], message: `is required for a ${method} reading` });
     if (field !== own && present) ctx.addIssue({ code: 'custom', path: [field], message: `is not used by a ${body.method} reading` });
   }
+  // The instrument lights the sample itself: the ambient light is asked of the other methods only.
+  if (body.method !== 'instrument' && !body.light) ctx.addIssue({ code: 'custom', path: ['light'], message: `is required for a ${body.method} reading: the light the tissue was read under` });
+  if (body.illuminant && body.method !== 'instrument') ctx.addIssue({ code: 'custom', path: ['illuminant'], message: 'is only for instrument readings (the illuminant/observer the instrument reports)' });
   if (body.eyeChipCode && body.method !== 'photo' && body.method !== 'instrument') {
     ctx.addIssue({ code: 'custom', path: ['eyeChipCode'], message: 'is only for photo and instrument readings (a chip reading is the eye pick)' });
   }

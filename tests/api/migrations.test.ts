@@ -3,7 +3,11 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { test } from 'node:test';
+import { seedCharacterCatalogue, seedDescriptorCatalogue } from '../../server/collection/seed-catalogue.js';
 import { openDatabase } from '../../server/data-source.js';
+import { seedDemo } from '../../server/demo/seed-demo.js';
+import { InstrumentIlluminant1765000000000 } from '../../server/migrations/1765000000000-instrument-illuminant.js';
+import { loadReferenceSets } from '../../server/reference-sets/load-reference-sets.js';
 
 test('should leave no difference between the migrated schema and the entities', async () => {
   const dir = mkdtempSync(path.join(tmpdir(), 'hueledger-migrations-'));
@@ -32,6 +36,40 @@ test('should apply the migrations only once when the database is opened again', 
     assert.equal(rows[0]?.n, ds.migrations.length);
     await ds.destroy();
   } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
+});
+
+test('should rebuild the reading table (light made nullable) on a database full of demo readings, keeping every row, key and index', async () => {
+  const dir = mkdtempSync(path.join(tmpdir(), 'hueledger-migrations-'));
+  const ds = await openDatabase(path.join(dir, 'hueledger.sqlite'));
+  try {
+    await loadReferenceSets(ds);
+    await seedCharacterCatalogue(ds);
+    await seedDescriptorCatalogue(ds);
+    await seedDemo(ds);
+    const count = async (table: string) => ((await ds.query(`SELECT COUNT(*) AS n FROM "${table}"`)) as { n: number }[])[0]!.n;
+    const before = { readings: await count('reading'), reviews: await count('review') };
+    assert.ok(before.readings > 0 && before.reviews > 0, 'the demo has readings and reviews of them');
+    const sum = async () => (await ds.query(`SELECT SUM("id" * 7 + "l" * 1000) AS s FROM "reading"`)) as { s: number }[];
+    const checksum = await sum();
+    // Down and up again on live rows, as the runner does it: foreign keys off around one transaction.
+    const migration = new InstrumentIlluminant1765000000000();
+    const runner = ds.createQueryRunner();
+    await runner.beforeMigration();
+    await runner.startTransaction();
+    await migration.down(runner);
+    await migration.up(runner);
+    await runner.commitTransaction();
+    await runner.afterMigration();
+    await runner.release();
+    assert.deepEqual({ readings: await count('reading'), reviews: await count('review') }, before);
+    assert.deepEqual(await sum(), checksum);
+    assert.deepEqual(await ds.query('PRAGMA foreign_key_check'), []);
+    const pending = await ds.driver.createSchemaBuilder().log();
+    assert.deepEqual(pending.upQueries.map((q) => q.query), [], 'the rebuilt table still matches the entity, indexes included');
+  } finally {
+    await ds.destroy();
     rmSync(dir, { recursive: true, force: true });
   }
 });

@@ -39,6 +39,33 @@ describe('readings: create, list, detail', () => {
   after(() => h.close());
 
   describe('each method', () => {
+    test('should take an instrument reading without a light, adapt D50/2° to D65/2° by Bradford (checked with colorjs.io) and keep what was reported', async () => {
+      const reported: [number, number, number] = [38.2, 24.5, -12.1];
+      const res = await recorder.post('/api/readings', instrumentBody(w, { light: undefined, illuminant: 'D50/2', lab: reported }));
+      assert.equal(res.status, 201, res.text);
+      const r = res.body as ReadingDetail;
+      assert.equal(r.light, null);
+      assert.equal(r.provenance.illuminant, 'D50/2');
+      assert.deepEqual(r.provenance.reportedLab, reported);
+      // colorjs.io 0.7.1: its `lab` is CIELAB D50 and `lab-d65` CIELAB D65, linked by the Bradford matrices of CSS Color 4.
+      const expected = new Color('lab', reported).to('lab-d65').coords as number[];
+      r.lab.forEach((v, i) => assert.ok(Math.abs(v - expected[i]!) < 0.01, `${['L*', 'a*', 'b*'][i]} ${v} vs colorjs.io ${expected[i]}`));
+      assert.ok(colorjsDeltaE00(r.lab, reported) > 0.3, 'the stored numbers are the adapted ones, not those reported');
+      const best = chips.get(r.bestChip)!;
+      assert.ok(Math.abs(r.deltaE00 - colorjsDeltaE00(r.lab, best.lab)) < 1e-9, 'matched on the adapted colour');
+      const again = (await recorder.get(`/api/readings/${r.id}`).expect(200)).body as ReadingDetail;
+      assert.deepEqual([again.light, again.provenance.illuminant, again.provenance.reportedLab], [null, 'D50/2', reported]);
+    });
+
+    test('should keep a D65/10° instrument reading as reported (10° cannot become 2° without the spectrum), marked 10°', async () => {
+      const res = await recorder.post('/api/readings', instrumentBody(w, { light: undefined, illuminant: 'D65/10' }));
+      assert.equal(res.status, 201, res.text);
+      const r = res.body as ReadingDetail;
+      assert.deepEqual(r.lab, [38.2, 24.5, -12.1]);
+      assert.equal(r.provenance.illuminant, 'D65/10');
+      assert.equal(r.provenance.reportedLab, null);
+    });
+
     test('should store an instrument reading with its best chip, ΔE00 (checked with colorjs.io), eye chip, season and plant age', async () => {
       const res = await recorder.post('/api/readings', instrumentBody(w, { eyeChipCode: 'F-092' }));
       assert.equal(res.status, 201, res.text);
@@ -120,7 +147,7 @@ describe('readings: create, list, detail', () => {
 
   describe('refusals', () => {
     const cases: [string, (w: ReadingWorld) => object, string][] = [
-      ['no light', (w) => ({ ...instrumentBody(w), light: undefined }), 'light'],
+      ['a photo reading without the light', (w) => ({ ...instrumentBody(w), lab: undefined, instrument: undefined, light: undefined, method: 'photo', photo: { photoId: 99999, region: { shape: 'point', x: 1, y: 1, radius: 1 } } }), 'light'],
       ['an unknown light', (w) => instrumentBody(w, { light: 'moonlight' as never }), 'light'],
       ['an instrument reading without lab', (w) => ({ ...instrumentBody(w), lab: undefined }), 'lab'],
       ['L* above 100', (w) => instrumentBody(w, { lab: [100.5, 0, 0] }), 'lab.0'],
@@ -145,6 +172,9 @@ describe('readings: create, list, detail', () => {
       ['seconds since cut beyond a day', (w) => instrumentBody(w, { secondsSinceCut: 86_401 }), 'secondsSinceCut'],
       ['notes over 2000 characters', (w) => instrumentBody(w, { notes: 'x'.repeat(2001) }), 'notes'],
       ['an unknown field', (w) => ({ ...instrumentBody(w), colour: 'purple' }), 'body'],
+      ['a chip reading without the light', (w) => ({ ...instrumentBody(w), lab: undefined, instrument: undefined, light: undefined, method: 'chip', chipCode: 'F-092' }), 'light'],
+      ['an unknown illuminant/observer', (w) => instrumentBody(w, { illuminant: 'A/10' as never }), 'illuminant'],
+      ['an illuminant/observer on a swatch reading', (w) => ({ ...instrumentBody(w), lab: undefined, instrument: undefined, method: 'swatch', hex: '#7b3f6e', illuminant: 'D65/2' }), 'illuminant'],
     ];
     for (const [what, body, field] of cases) {
       test(`should refuse ${what} with 400 naming ${field}, writing nothing`, async () => {

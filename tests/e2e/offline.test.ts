@@ -109,7 +109,7 @@ describe('offline on a phone: cached app, queued readings, sent once back in ran
     await page.getByLabel('L*', { exact: true }).fill('38.5');
     await page.getByLabel('a*', { exact: true }).fill('24.2');
     await page.getByLabel('b*', { exact: true }).fill('-9.6');
-    await page.getByRole('radio', { name: 'Open shade' }).click();
+    await page.getByRole('radio', { name: 'D65 / 10°' }).click();
     await screenshot(page, 'offline-record-form');
     await page.getByRole('button', { name: 'Save reading' }).click();
     await page.getByText('Saved — waiting to send.').waitFor();

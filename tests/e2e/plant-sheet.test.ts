@@ -64,12 +64,11 @@ describe('the plant sheet on a phone', () => {
     const colourRows = (await sheet()).rows.filter((r) => r.colour).map((r) => r.colour!);
     assert.ok(colourRows.length >= 20, `${colourRows.length} colour characters seeded`);
 
-    // The first: open it from the sheet, choose the method and the light once.
+    // The first: open it from the sheet, choose the method and the instrument's illuminant/observer once (no light: it lights the sample).
     await tap(page.getByRole('link', { name: `${colourRows[0]!.label}: to do, read it` }));
     await page.waitForURL(/\/record\?/);
     await tap(page.getByRole('radio', { name: /Instrument/ }));
-    const light = page.getByRole('radio', { name: /Open shade/ });
-    if (await light.isVisible()) await tap(light);
+    await tap(page.getByRole('radio', { name: 'D65 / 10°' }));
     const perCharacter: number[] = [];
     for (const [i, row] of colourRows.entries()) {
       const before = taps;

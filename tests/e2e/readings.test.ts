@@ -78,7 +78,7 @@ describe('readings on a phone: each method, the table, the detail and the export
     await browser?.close();
   });
 
-  test('should record an instrument reading, choosing accession, character and light', async () => {
+  test('should record an instrument reading, choosing accession, character and the illuminant/observer it reports (no light)', async () => {
     await navigateTo(page, 'Record');
     await page.getByRole('heading', { name: 'New reading' }).waitFor();
     await page.getByLabel('Accession').fill('HL-0001');
@@ -92,7 +92,11 @@ describe('readings on a phone: each method, the table, the detail and the export
     await page.getByLabel('L*', { exact: true }).fill('38.5');
     await page.getByLabel('a*', { exact: true }).fill('24.2');
     await page.getByLabel('b*', { exact: true }).fill('-9.6');
-    await page.getByRole('radio', { name: 'Open shade' }).click();
+    // The instrument lights the sample: no light is asked, its illuminant/observer is.
+    assert.equal(await page.getByRole('radio', { name: 'Open shade' }).count(), 0);
+    await page.getByRole('radio', { name: 'D65 / 10°' }).click();
+    await page.getByRole('radio', { name: 'D65 / 10°', checked: true }).waitFor();
+    await page.getByText('cannot be converted exactly without the spectrum', { exact: false }).waitFor();
     const preview = await page.locator('hl-lab-fields .preview').innerText();
     assert.match(preview, /#[0-9a-f]{6}/, 'the colour is previewed as it is typed');
     await screenshot(page, 'readings-form-instrument');
@@ -100,12 +104,13 @@ describe('readings on a phone: each method, the table, the detail and the export
     await screenshot(page, 'readings-form-saved');
   });
 
-  test('should keep accession, character and light for the next plant and record a chip picked by eye', async () => {
+  test('should keep accession and character for the next plant and record a chip picked by eye, asking the light', async () => {
     await page.getByRole('button', { name: 'Next plant' }).click();
     // The form is redrawn for the next plant in the app's own time: wait for the kept values.
     await waitForValue(page.getByLabel('Accession'), /HL-0001/);
-    await page.getByRole('radio', { name: 'Open shade', checked: true }).waitFor();
     await page.getByRole('radio', { name: /Chip by eye/ }).click();
+    await page.getByRole('radio', { name: 'Open shade' }).click();
+    await page.getByRole('radio', { name: 'Open shade', checked: true }).waitFor();
     // A plum field chip (anthocyanin petioles), then one of its fine chips.
     const field = page.locator('hl-chip-picker .families hl-swatch-grid button.chip[aria-label*="plum"]').first();
     await field.click();

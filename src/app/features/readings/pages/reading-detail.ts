@@ -10,7 +10,7 @@ import { EarlierReadings } from '../../../shared/readings/earlier-readings';
 import { cutWarning, limitWords } from '../../../shared/readings/cut-clock';
 import { PhotoCrop } from '../../../shared/photos/photo-crop';
 import { ReadingMatch } from '../../../shared/readings/reading-match';
-import { CUT_SECONDS_WARN, type ReadingDetail } from '../../../../../shared/api/reading-answers.js';
+import { CUT_SECONDS_WARN, ILLUMINANT_LABELS, type ReadingDetail } from '../../../../../shared/api/reading-answers.js';
 import { LIGHT_WORDS, METHOD_WORDS, STATUS_WORDS, wordsFor } from '../../../shared/readings/reading-words';
 import { ReadingsApi } from '../../../shared/readings/readings-api';
 import { ageWords, correctionText } from '../data/provenance-words';
@@ -41,6 +41,7 @@ export class ReadingDetailPage {
   protected readonly reading = rxResource({ params: () => this.id(), stream: ({ params }) => this.api.get(params) });
   protected readonly methodWords = METHOD_WORDS;
   protected readonly lightWords = LIGHT_WORDS;
+  protected readonly illuminantLabels = ILLUMINANT_LABELS;
   protected readonly statusWords = STATUS_WORDS;
   protected readonly wordsFor = wordsFor;
   protected readonly ageWords = ageWords;

@@ -16,6 +16,10 @@ describe('reading draft', () => {
     applyMethodRules(form, 'instrument', false);
     expect(form.valid).toBe(false);
     form.controls.lab.setValue({ l: 42.1, a: 31.5, b: -12.2 });
+    // An instrument reading needs the illuminant/observer it reports, and no light.
+    expect(form.controls.illuminant.hasError('required')).toBe(true);
+    form.controls.light.setValue(null);
+    form.controls.illuminant.setValue('D65/10');
     expect(form.valid).toBe(true);
     form.controls.lab.controls.l.setValue(101);
     expect(form.controls.lab.controls.l.hasError('max')).toBe(true);
@@ -24,6 +28,8 @@ describe('reading draft', () => {
     form.controls.lab.setValue({ l: null, a: null, b: null });
     expect(form.controls.lab.valid).toBe(true);
     expect(form.controls.chipCode.hasError('required')).toBe(true);
+    expect(form.controls.light.hasError('required')).toBe(true);
+    expect(form.controls.illuminant.valid).toBe(true);
   });
 
   it('should need a reason only for a correction', () => {
@@ -37,14 +43,15 @@ describe('reading draft', () => {
 
   it('should send only the chosen method’s parts', () => {
     const form = filled();
-    form.patchValue({ method: 'instrument', lab: { l: 40, a: 20, b: -5 }, chipCode: 'F-001', hex: '#123456', eyeChipCode: 'F-087.014', notes: '  ', leafPosition: '3rd open leaf', instrument: ' Meter 2 ' });
+    form.patchValue({ method: 'instrument', lab: { l: 40, a: 20, b: -5 }, chipCode: 'F-001', hex: '#123456', eyeChipCode: 'F-087.014', notes: '  ', leafPosition: '3rd open leaf', instrument: ' Meter 2 ', illuminant: 'D65/10' });
+    // The light left in the form from another method is not sent: the instrument lights the sample itself.
     expect(readingRequest(form.getRawValue(), null, false, AT)).toEqual({
       accessionId: 1,
       plantId: 11,
       characterId: 5,
       siteId: 2,
       method: 'instrument',
-      light: 'open-shade',
+      illuminant: 'D65/10',
       observedAt: '2026-03-14T09:30:00.000Z',
       lab: [40, 20, -5],
       instrument: 'Meter 2',

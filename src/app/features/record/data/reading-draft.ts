@@ -11,6 +11,7 @@ import {
   READING_NOTES_MAX,
   SUPERSEDE_REASON_MAX,
   type CreateReadingRequest,
+  type InstrumentIlluminant,
   type Light,
   type ReadingMethod,
 } from '../../../../../shared/api/reading-answers.js';
@@ -64,7 +65,10 @@ export function buildReadingForm() {
     eyeChipCode: new FormControl<string | null>(null),
     /** The instrument's make or name (instrument readings), kept from plant to plant. */
     instrument: new FormControl<string | null>(null, Validators.maxLength(INSTRUMENT_MAX)),
+    /** The ambient light: asked of every method but the instrument, which lights the sample itself. */
     light: new FormControl<Light | null>(null, Validators.required),
+    /** The illuminant/observer an instrument reports (instrument readings only). */
+    illuminant: new FormControl<InstrumentIlluminant | null>(null),
     secondsSinceCut: new FormControl<number | null>(null, [Validators.min(0), Validators.max(CUT_SECONDS_MAX), Validators.pattern(/^\d+$/)]),
     leafPosition: new FormControl<string | null>(null, Validators.maxLength(LEAF_POSITION_MAX)),
     notes: new FormControl<string | null>(null, Validators.maxLength(READING_NOTES_MAX)),
@@ -86,6 +90,8 @@ export function applyMethodRules(form: ReadingFormGroup, method: ReadingMethod |
   for (const control of [lab.l, lab.a, lab.b]) setRequired(control, method === 'instrument');
   setRequired(form.controls.chipCode, method === 'chip');
   setRequired(form.controls.hex, method === 'swatch');
+  setRequired(form.controls.light, method !== 'instrument');
+  setRequired(form.controls.illuminant, method === 'instrument');
   setRequired(form.controls.reason, correcting);
 }
 
@@ -108,11 +114,12 @@ export function readingRequest(value: ReadingFormValue, photo: PhotoSource | nul
     characterId: value.characterId!,
     siteId: value.siteId!,
     method,
-    light: value.light!,
     observedAt: observedAt.toISOString(),
   };
   if (value.plantId !== null) body.plantId = value.plantId;
+  if (method !== 'instrument') body.light = value.light!;
   if (method === 'instrument') {
+    if (value.illuminant) body.illuminant = value.illuminant;
     body.lab = [value.lab.l!, value.lab.a!, value.lab.b!];
     const instrument = value.instrument?.trim();
     if (instrument) body.instrument = instrument;
@@ -158,6 +165,7 @@ export function nextPlantValue(value: ReadingFormValue): Partial<ReadingFormValu
     hex: value.method === 'swatch' ? value.hex : null,
     eyeChipCode: null,
     instrument: value.instrument,
+    illuminant: value.illuminant,
     secondsSinceCut: null,
     leafPosition: value.leafPosition,
     notes: null,

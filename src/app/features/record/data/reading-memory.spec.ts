@@ -11,16 +11,16 @@ describe('ReadingMemory', () => {
   it('should remember the last accession, character and light across visits', () => {
     TestBed.inject(ReadingMemory).remember({ accessionId: 4, characterId: 9, light: 'overcast' });
     expect(JSON.parse(localStorage.getItem(READING_MEMORY_KEY)!)).toEqual({ accessionId: 4, characterId: 9, light: 'overcast' });
-    expect(TestBed.inject(ReadingMemory).recall()).toEqual({ accessionId: 4, characterId: 9, light: 'overcast', method: null, instrument: null });
+    expect(TestBed.inject(ReadingMemory).recall()).toEqual({ accessionId: 4, characterId: 9, light: 'overcast', method: null, instrument: null, illuminant: null });
   });
 
   it('should read nothing from an empty, broken or hand-edited store', () => {
     const memory = TestBed.inject(ReadingMemory);
-    expect(memory.recall()).toEqual({ accessionId: null, characterId: null, light: null, method: null, instrument: null });
+    expect(memory.recall()).toEqual({ accessionId: null, characterId: null, light: null, method: null, instrument: null, illuminant: null });
     localStorage.setItem(READING_MEMORY_KEY, '{not json');
-    expect(memory.recall()).toEqual({ accessionId: null, characterId: null, light: null, method: null, instrument: null });
+    expect(memory.recall()).toEqual({ accessionId: null, characterId: null, light: null, method: null, instrument: null, illuminant: null });
     localStorage.setItem(READING_MEMORY_KEY, JSON.stringify({ accessionId: -3, characterId: '9', light: 7 }));
-    expect(memory.recall()).toEqual({ accessionId: null, characterId: null, light: null, method: null, instrument: null });
+    expect(memory.recall()).toEqual({ accessionId: null, characterId: null, light: null, method: null, instrument: null, illuminant: null });
   });
 
   it('should keep a draft for this tab until it is dropped', () => {

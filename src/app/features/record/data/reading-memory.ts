@@ -9,12 +9,14 @@ export interface RememberedChoices {
   method?: string | null;
   /** The instrument's make or name, kept with the method. */
   instrument?: string | null;
+  /** The illuminant/observer the instrument reports, kept with the instrument. */
+  illuminant?: string | null;
 }
 
 /** The localStorage key (one per browser profile; the choices are not secret). */
 export const READING_MEMORY_KEY = 'hueledger.reading-form';
 
-const NOTHING: RememberedChoices = { accessionId: null, characterId: null, light: null, method: null, instrument: null };
+const NOTHING: RememberedChoices = { accessionId: null, characterId: null, light: null, method: null, instrument: null, illuminant: null };
 
 /**
  * Keeps the last accession, character and light in localStorage. Anything unreadable (private
@@ -34,6 +36,7 @@ export class ReadingMemory {
         light: typeof value.light === 'string' ? value.light : null,
         method: typeof value.method === 'string' ? value.method : null,
         instrument: typeof value.instrument === 'string' ? value.instrument : null,
+        illuminant: typeof value.illuminant === 'string' ? value.illuminant : null,
       };
     } catch {
       return NOTHING;

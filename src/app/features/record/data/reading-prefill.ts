@@ -13,11 +13,13 @@ export function prefillFrom(reading: ReadingDetail): { value: Partial<ReadingFor
       characterId: reading.characterId,
       siteId: reading.siteId,
       method: reading.method,
-      lab: reading.method === 'instrument' ? { l: reading.lab[0], a: reading.lab[1], b: reading.lab[2] } : { l: null, a: null, b: null },
+      // An adapted reading is corrected from the numbers the instrument reported, so they are not adapted twice.
+      lab: reading.method === 'instrument' ? labFields(p.reportedLab ?? reading.lab) : { l: null, a: null, b: null },
       chipCode: reading.method === 'chip' ? (p.source ?? reading.eyeChipCode ?? reading.bestChip) : null,
       hex: reading.method === 'swatch' ? (p.source ?? reading.hex) : null,
       eyeChipCode: reading.method === 'photo' || reading.method === 'instrument' ? reading.eyeChipCode : null,
       instrument: p.instrument,
+      illuminant: p.illuminant,
       light: reading.light,
       secondsSinceCut: reading.secondsSinceCut,
       leafPosition: reading.leafPosition,
@@ -26,4 +28,8 @@ export function prefillFrom(reading: ReadingDetail): { value: Partial<ReadingFor
     },
     photo,
   };
+}
+
+function labFields(lab: readonly [number, number, number]): { l: number; a: number; b: number } {
+  return { l: lab[0], a: lab[1], b: lab[2] };
 }

@@ -84,6 +84,29 @@ describe('ReadingForm', () => {
     expect(el.querySelector('hl-progress-summary')?.textContent?.replace(/\s+/g, ' ')).toContain('4 of 10 plants characterised this season');
   });
 
+  it('should ask an instrument reading for the illuminant/observer instead of the light, and say 10° and 2° cannot be converted', async () => {
+    localStorage.setItem(READING_MEMORY_KEY, JSON.stringify({ accessionId: 1, characterId: 5, light: 'overcast' }));
+    const { fixture, el } = await open();
+    expect(el.querySelector('.lights')).not.toBeNull();
+    click(el, 'Instrument L*a*b*');
+    fixture.detectChanges();
+    expect(el.querySelector('.lights')).toBeNull();
+    expect(el.textContent).not.toContain('Choose the light you read in.');
+    expect([...el.querySelectorAll('.illuminants [role=radio]')].map((b) => b.querySelector('.choice-label')?.textContent?.trim())).toEqual(['D65 / 10°', 'D65 / 2°', 'D50 / 2°', 'Other']);
+    expect(el.querySelector('.illuminant-note')?.textContent).toContain('cannot be converted exactly without the spectrum');
+    form(fixture).controls.lab.setValue({ l: 40, a: 10, b: 5 });
+    click(el, 'Save reading');
+    fixture.detectChanges();
+    expect(el.textContent).toContain('Choose the illuminant/observer the instrument reports');
+    click(el, 'D50 / 2°');
+    click(el, 'Save reading');
+    await settle();
+    const request = http.expectOne('/api/readings');
+    expect(request.request.body).toMatchObject({ method: 'instrument', lab: [40, 10, 5], illuminant: 'D50/2' });
+    expect('light' in request.request.body).toBe(false);
+    request.flush(savedReading());
+  });
+
   it('should take the site from the plant', async () => {
     localStorage.setItem(READING_MEMORY_KEY, JSON.stringify({ accessionId: 1, characterId: 5, light: 'overcast' }));
     const { fixture } = await open();
@@ -136,10 +159,10 @@ describe('ReadingForm', () => {
   });
 
   it('should open on the plant and character of the sheet, and offer the next character on that plant after saving', async () => {
-    localStorage.setItem(READING_MEMORY_KEY, JSON.stringify({ accessionId: 2, characterId: 7, light: 'overcast', method: 'instrument', instrument: 'Bench spectro A' }));
+    localStorage.setItem(READING_MEMORY_KEY, JSON.stringify({ accessionId: 2, characterId: 7, light: 'overcast', method: 'instrument', instrument: 'Bench spectro A', illuminant: 'D65/10' }));
     const { fixture, el } = await open({ sheet: '11', character: '5' });
     const f = form(fixture);
-    expect(f.getRawValue()).toMatchObject({ accessionId: 1, plantId: 11, characterId: 5, method: 'instrument', light: 'overcast', instrument: 'Bench spectro A', siteId: 1 });
+    expect(f.getRawValue()).toMatchObject({ accessionId: 1, plantId: 11, characterId: 5, method: 'instrument', light: 'overcast', instrument: 'Bench spectro A', illuminant: 'D65/10', siteId: 1 });
     f.controls.lab.setValue({ l: 40, a: 10, b: 5 });
     click(el, 'Save reading');
     await settle();
@@ -153,7 +176,7 @@ describe('ReadingForm', () => {
     sheet.flush({ plant: { id: 11 }, accession: { id: 1 }, site: { id: 1 }, rows: [row(5, 'done'), row(7, 'todo')], progress: {} });
     await fixture.whenStable();
     fixture.detectChanges();
-    expect(f.getRawValue()).toMatchObject({ accessionId: 1, plantId: 11, characterId: 7, method: 'instrument', light: 'overcast', instrument: 'Bench spectro A', lab: { l: null, a: null, b: null } });
+    expect(f.getRawValue()).toMatchObject({ accessionId: 1, plantId: 11, characterId: 7, method: 'instrument', light: 'overcast', instrument: 'Bench spectro A', illuminant: 'D65/10', lab: { l: null, a: null, b: null } });
     expect(el.textContent).toContain('Save reading');
   });
 
@@ -173,11 +196,13 @@ describe('ReadingForm', () => {
     const { fixture, el } = await open();
     click(el, 'Instrument L*a*b*');
     fixture.detectChanges();
+    click(el, 'D65 / 10°');
     form(fixture).controls.lab.setValue({ l: 40, a: 10, b: 5 });
     click(el, 'Save reading');
     await settle();
     const request = http.expectOne('/api/readings');
-    expect(request.request.body).toMatchObject({ method: 'instrument', lab: [40, 10, 5], accessionId: 1, characterId: 5, siteId: 1, light: 'overcast' });
+    expect(request.request.body).toMatchObject({ method: 'instrument', lab: [40, 10, 5], accessionId: 1, characterId: 5, siteId: 1, illuminant: 'D65/10' });
+    expect(request.request.body.light).toBeUndefined();
     const key = request.request.headers.get('Idempotency-Key');
     expect(key).toMatch(/^[A-Za-z0-9_-]{16,100}$/);
     request.flush(
@@ -203,6 +228,8 @@ describe('ReadingForm', () => {
     f.patchValue({ accessionId: 1, plantId: 11, characterId: 5 });
     click(el, 'Overcast');
     click(el, 'Instrument L*a*b*');
+    fixture.detectChanges();
+    click(el, 'D50 / 2°');
     f.controls.lab.setValue({ l: 40, a: 10, b: 5 });
     f.controls.notes.setValue('after rain');
     expect(sessionStorage.getItem(READING_DRAFT_KEY)).toContain('after rain');
@@ -214,11 +241,11 @@ describe('ReadingForm', () => {
     expect(el.textContent).toContain('Saved as reading 31');
     expect(el.textContent).toContain('F-150.004');
     expect(el.textContent).toContain('close');
-    expect(JSON.parse(localStorage.getItem(READING_MEMORY_KEY)!)).toEqual({ accessionId: 1, characterId: 5, light: 'overcast', method: 'instrument', instrument: null });
+    expect(JSON.parse(localStorage.getItem(READING_MEMORY_KEY)!)).toEqual({ accessionId: 1, characterId: 5, light: 'overcast', method: 'instrument', instrument: null, illuminant: 'D50/2' });
     expect(sessionStorage.getItem(READING_DRAFT_KEY)).toBeNull();
     click(el, 'Next plant');
     fixture.detectChanges();
-    expect(f.getRawValue()).toMatchObject({ accessionId: 1, characterId: 5, light: 'overcast', method: 'instrument', plantId: null, notes: null, lab: { l: null, a: null, b: null } });
+    expect(f.getRawValue()).toMatchObject({ accessionId: 1, characterId: 5, light: 'overcast', method: 'instrument', illuminant: 'D50/2', plantId: null, notes: null, lab: { l: null, a: null, b: null } });
   });
 
   it('should keep the reading on the phone and say "Saved — waiting to send" when there is no connection', async () => {
@@ -226,6 +253,7 @@ describe('ReadingForm', () => {
     const { fixture, el } = await open();
     click(el, 'Instrument L*a*b*');
     fixture.detectChanges();
+    click(el, 'D65 / 2°');
     form(fixture).controls.lab.setValue({ l: 40, a: 10, b: 5 });
     click(el, 'Save reading');
     await settle();
@@ -284,7 +312,7 @@ function savedReading() {
     secondsSinceCut: null,
     leafPosition: null,
     notes: null,
-    provenance: { instrument: 'Meter 2', source: null, photoId: null, region: null, neutralRegion: null },
+    provenance: { instrument: 'Meter 2', illuminant: 'D65/2', reportedLab: null, source: null, photoId: null, region: null, neutralRegion: null },
     accessionNumber: 'HL-0001',
     plantLabel: 'P1',
     characterLabel: 'Petiole, upper third',

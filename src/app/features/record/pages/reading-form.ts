@@ -19,7 +19,8 @@ import { ChipCatalogue } from '../../../shared/chips/chip-catalogue';
 import { applyFieldErrors } from '../../../core/http/field-errors';
 import { CollectionApi } from '../../../shared/collection/collection-api';
 import { ProgressSummary } from '../../../shared/collection/progress-summary';
-import { CUT_SECONDS_WARN, LIGHTS, READING_METHODS, type ReadingDetail, type ReadingMethod } from '../../../../../shared/api/reading-answers.js';
+import { CUT_SECONDS_WARN, ILLUMINANT_LABELS, INSTRUMENT_ILLUMINANTS, LIGHTS, READING_METHODS, type InstrumentIlluminant, type ReadingDetail, type ReadingMethod } from '../../../../../shared/api/reading-answers.js';
+import { labD50ToD65 } from '../../../../../shared/colour/chromatic-adaptation.js';
 import { ReadingMatch } from '../../../shared/readings/reading-match';
 import { ReadingsApi, newIdempotencyKey } from '../../../shared/readings/readings-api';
 import { LIGHT_WORDS, METHOD_WORDS } from '../../../shared/readings/reading-words';
@@ -57,7 +58,7 @@ import { LocalDateTimePipe } from '../../../core/format/local-date-time';
 type KeptDraft = ReadingFormValue & { correcting: number | null };
 
 /** Where a problem shows, in page order: a marked field, a choice group left empty, the missing photo, the refusal. */
-const FIRST_PROBLEM = '.hl-invalid, input.ng-invalid.ng-touched, mat-select.ng-invalid.ng-touched, textarea.ng-invalid.ng-touched, .methods.invalid, .lights.invalid, .photo-missing, .problems';
+const FIRST_PROBLEM = '.hl-invalid, input.ng-invalid.ng-touched, mat-select.ng-invalid.ng-touched, textarea.ng-invalid.ng-touched, .methods.invalid, .illuminants.invalid, .lights.invalid, .photo-missing, .problems';
 /** What can take the cursor inside a problem. */
 const FOCUSABLE = 'input, textarea, mat-select, button, [tabindex]';
 
@@ -115,6 +116,8 @@ export class ReadingForm {
   protected readonly form = buildReadingForm();
   protected readonly methods = READING_METHODS;
   protected readonly lights = LIGHTS;
+  protected readonly illuminants = INSTRUMENT_ILLUMINANTS;
+  protected readonly illuminantLabels = ILLUMINANT_LABELS;
   protected readonly methodWords = METHOD_WORDS;
   protected readonly lightWords = LIGHT_WORDS;
   protected readonly leafChoices = LEAF_CHOICES;
@@ -148,6 +151,7 @@ export class ReadingForm {
   private readonly formValue = computed(() => (this.value(), this.form.getRawValue()));
   protected readonly method = computed(() => this.formValue().method);
   protected readonly formValueLight = computed(() => this.formValue().light);
+  protected readonly formValueIlluminant = computed(() => this.formValue().illuminant);
   protected readonly accession = computed<Accession | null>(() => this.accessionById(this.formValue().accessionId));
   protected readonly plants = computed<Plant[]>(() => this.accession()?.plants ?? []);
   protected readonly character = computed(() => (this.characters.hasValue() ? (this.characters.value().find((c) => c.id === this.formValue().characterId) ?? null) : null));
@@ -157,7 +161,9 @@ export class ReadingForm {
     const v = this.formValue();
     if (v.method === 'instrument') {
       const { l, a, b } = v.lab;
-      return [l, a, b].every((n) => n !== null && Number.isFinite(n)) ? { l: l!, a: a!, b: b! } : null;
+      if (![l, a, b].every((n) => n !== null && Number.isFinite(n))) return null;
+      // Matched as the server will store it: D50/2° numbers adapted to D65/2° first.
+      return v.illuminant === 'D50/2' ? labD50ToD65({ l: l!, a: a!, b: b! }) : { l: l!, a: a!, b: b! };
     }
     if (v.method === 'swatch' && v.hex) return parseHex(v.hex) ?? null;
     return null;
@@ -212,6 +218,10 @@ export class ReadingForm {
 
   protected chooseLight(light: (typeof LIGHTS)[number]): void {
     this.form.controls.light.setValue(light);
+  }
+
+  protected chooseIlluminant(illuminant: InstrumentIlluminant): void {
+    this.form.controls.illuminant.setValue(illuminant);
   }
 
   protected chooseLeaf(leaf: string): void {
@@ -307,7 +317,7 @@ export class ReadingForm {
 
   private rememberChoices(): void {
     const v = this.form.getRawValue();
-    this.memory.remember({ accessionId: v.accessionId, characterId: v.characterId, light: v.light, method: v.method, instrument: v.instrument });
+    this.memory.remember({ accessionId: v.accessionId, characterId: v.characterId, light: v.light, method: v.method, instrument: v.instrument, illuminant: v.illuminant });
   }
 
   /** Opened from a plant sheet: the plant and character from the link, method, light and instrument from the last reading. */
@@ -317,7 +327,7 @@ export class ReadingForm {
     if (sameRow) this.form.patchValue(draft);
     else {
       const method = READING_METHODS.find((m) => m === remembered.method && m !== 'photo') ?? null;
-      this.form.patchValue({ characterId, light: remembered.light as ReadingFormValue['light'], method, instrument: remembered.instrument ?? null });
+      this.form.patchValue({ characterId, light: remembered.light as ReadingFormValue['light'], method, instrument: remembered.instrument ?? null, illuminant: illuminantOf(remembered.illuminant) });
     }
     this.sheetPlantId.set(plantId);
   }
@@ -396,7 +406,7 @@ export class ReadingForm {
       return;
     }
     const remembered = this.memory.recall();
-    this.form.patchValue({ accessionId: remembered.accessionId, characterId: remembered.characterId, light: remembered.light as ReadingFormValue['light'] });
+    this.form.patchValue({ accessionId: remembered.accessionId, characterId: remembered.characterId, light: remembered.light as ReadingFormValue['light'], illuminant: illuminantOf(remembered.illuminant) });
   }
 
   /** Loads the reading being corrected into the form; edits kept for it in this tab go on top. */
@@ -451,6 +461,11 @@ export class ReadingForm {
     const target = el.matches(FOCUSABLE) ? el : el.querySelector<HTMLElement>(FOCUSABLE);
     target?.focus({ preventScroll: true });
   }
+}
+
+/** A remembered illuminant/observer, if it is still one of the choices. */
+function illuminantOf(value: string | null | undefined): InstrumentIlluminant | null {
+  return INSTRUMENT_ILLUMINANTS.find((i) => i === value) ?? null;
 }
 
 function positiveId(value: unknown): number | null {

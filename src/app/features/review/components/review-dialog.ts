@@ -15,7 +15,7 @@ import { PhotoCrop } from '../../../shared/photos/photo-crop';
 import { ReadingMatch } from '../../../shared/readings/reading-match';
 import { LIGHT_WORDS, METHOD_WORDS, STATUS_WORDS, wordsFor } from '../../../shared/readings/reading-words';
 import { ReadingsApi } from '../../../shared/readings/readings-api';
-import { CUT_SECONDS_WARN, type ReadingDetail } from '../../../../../shared/api/reading-answers.js';
+import { CUT_SECONDS_WARN, ILLUMINANT_LABELS, type ReadingDetail } from '../../../../../shared/api/reading-answers.js';
 import { REVIEW_COMMENT_MAX, REVIEW_DECISION_LABELS, type ReviewAnswer, type ReviewDecision, type ReviewQueueQuery } from '../../../../../shared/api/review-answers.js';
 import { DECISION_KEYS, decisionForKey } from '../data/review-keys';
 import { ReviewsApi } from '../data/reviews-api';
@@ -86,6 +86,7 @@ export class ReviewDialog {
   protected readonly cutWarn = CUT_SECONDS_WARN;
   protected readonly methodWords = METHOD_WORDS;
   protected readonly lightWords = LIGHT_WORDS;
+  protected readonly illuminantLabels = ILLUMINANT_LABELS;
   protected readonly statusWords = STATUS_WORDS;
   protected readonly wordsFor = wordsFor;
 
