@@ -1,6 +1,7 @@
 // What the queue screen shows of a reading saved on the phone, worked out on the phone: the
 // server's match replaces it when the reading arrives.
 import type { ChipDto } from '../../../../shared/api/reference-set-answers.js';
+import { labD50ToD65 } from '../../../../shared/colour/chromatic-adaptation.js';
 import { displayHex } from '../../../../shared/colour/display-hex.js';
 import { labFromTuple, type LabTuple } from '../../../../shared/colour/lab.js';
 import type { QueuedReadingBody, ReadingSummary } from '../../core/offline/queue-item';
@@ -33,7 +34,13 @@ export function readingSummary(body: QueuedReadingBody, names: SummaryNames, chi
   };
   switch (body.method) {
     case 'instrument':
-      return body.lab ? { ...base, lab: body.lab, hex: displayHex(labFromTuple(body.lab)).hex, code: nearest(body.lab), provisional: false } : empty(base);
+      if (!body.lab) return empty(base);
+      {
+        // As the server will store it: D50/2° numbers adapted to D65/2°.
+        const d65 = body.illuminant === 'D50/2' ? labD50ToD65(labFromTuple(body.lab)) : labFromTuple(body.lab);
+        const lab: LabTuple = [d65.l, d65.a, d65.b];
+        return { ...base, lab, hex: displayHex(d65).hex, code: nearest(lab), provisional: false };
+      }
     case 'chip': {
       const chip: ChipDto | undefined = body.chipCode ? chips?.chip(body.chipCode) : undefined;
       return { ...base, lab: chip?.lab ?? null, hex: chip?.hex ?? null, code: body.chipCode ?? null, provisional: false };

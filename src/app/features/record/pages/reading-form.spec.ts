@@ -10,6 +10,7 @@ import { IS_ONLINE } from '../../../core/offline/offline-queue';
 import { CUT_SECONDS_WARN } from '../../../../../shared/api/reading-answers.js';
 import { READING_DRAFT_KEY, READING_MEMORY_KEY } from '../data/reading-memory';
 import { TEST_ACCESSIONS, TEST_CHARACTERS, TEST_SITES } from '../../../shared/testing/collection-fixtures';
+import { TEST_CHIPS, TEST_SETS } from '../../../shared/testing/chip-fixtures';
 import { ReadingForm } from './reading-form';
 
 /** What GET /api/progress answers in these tests: 4 of 10 plants fully characterised. */
@@ -263,6 +264,33 @@ describe('ReadingForm', () => {
     expect(el.querySelector('.saved.queued')?.textContent).toContain('Saved — waiting to send.');
     expect(el.querySelector('a[href="/queue"]')).not.toBeNull();
     expect(el.textContent).toContain('Next plant');
+    // No chips on this phone yet: the screen says the server will match.
+    expect(el.querySelector('.provisional-none')?.textContent).toContain('worked out when the reading reaches the server');
+  });
+
+  it('should show the provisional chip, worked out on the phone, on the "saved — waiting to send" screen', async () => {
+    localStorage.setItem(READING_MEMORY_KEY, JSON.stringify({ accessionId: 1, characterId: 5, light: 'overcast' }));
+    const { fixture, el } = await open();
+    click(el, 'Instrument L*a*b*');
+    fixture.detectChanges();
+    click(el, 'D65 / 2°');
+    form(fixture).controls.lab.setValue({ l: 45.5, a: 40.2, b: 20.3 });
+    fixture.detectChanges();
+    // The chips the phone holds (the match preview asked for them once a colour was typed).
+    http.expectOne('/api/reference-sets').flush(TEST_SETS);
+    http.expectOne('/api/reference-sets/v2/chips').flush(TEST_CHIPS);
+    click(el, 'Save reading');
+    await settle();
+    http.expectOne('/api/readings').error(new ProgressEvent('error'));
+    await settle();
+    fixture.detectChanges();
+    const shown = el.querySelector('.saved.queued .provisional');
+    // Nearest of the five invented chips to L*a*b* 45.5, 40.2, 20.3 by ΔE00: F-001 (45, 40, 20).
+    expect(shown?.querySelector('.chip-code')?.textContent?.trim()).toBe('F-001');
+    expect(shown?.querySelector('.hl-swatch-surround .swatch')?.getAttribute('aria-label')).toBe('Chip F-001');
+    expect(shown?.textContent).toContain('Provisional:');
+    expect(shown?.textContent).toContain('server\'s match replaces it');
+    expect(el.querySelector('.provisional-none')).toBeNull();
   });
 
   it('should open a correction filled in, ask the reason and post it to the supersede route', async () => {

@@ -32,7 +32,8 @@ import { LabFields } from '../components/lab-fields';
 import { LabelScanner } from '../components/label-scanner';
 import { MatchPreview } from '../components/match-preview';
 import { parseHex } from '../../../../../shared/colour/parse.js';
-import type { Lab } from '../../../../../shared/colour/lab.js';
+import type { Lab, LabTuple } from '../../../../../shared/colour/lab.js';
+import { provisionalChip } from '../data/provisional-chip';
 import { PhotoSummary } from '../components/photo-summary';
 import { SwatchPicker } from '../components/swatch-picker';
 import { photoSourceFromParams, photoSourceParams } from '../data/photo-source';
@@ -142,6 +143,14 @@ export class ReadingForm {
   protected readonly queued = signal(false);
   /** Whether the phone has no connection now, so the recorder knows before saving that it will wait on the phone. */
   protected readonly offline = signal(!this.isOnline());
+  /** The reading last kept on the phone, and its photo's preview colour: what the provisional chip is worked out from. */
+  private readonly queuedBody = signal<QueuedReadingBody | null>(null);
+  private readonly queuedPreview = signal<LabTuple | null>(null);
+  /** The nearest chip of the reading kept on the phone, from the chips the phone holds; null without them. */
+  protected readonly provisional = computed(() => {
+    const body = this.queuedBody();
+    return body ? provisionalChip(body, this.chips.set(), this.queuedPreview()) : null;
+  });
   /** Refusals that name no field on the form, shown above the save button. */
   protected readonly problems = signal<string[]>([]);
 
@@ -252,9 +261,12 @@ export class ReadingForm {
       const queued: QueuedReadingBody = local && photo ? { ...body, photo: { localPhotoId: local, region: photo.region, ...(photo.neutral ? { neutral: { region: photo.neutral } } : {}) } } : body;
       const names = { accession: this.accession(), character: this.character(), method: METHOD_WORDS[body.method].label, plant: this.plants().find((p) => p.id === body.plantId) ?? null };
       (local ? this.queue.photo(local).then((p) => p?.preview ?? null) : Promise.resolve(null))
-        .then((preview) => this.queue.submitReading(queued, readingSummary(queued, names, this.chips.set(), preview)))
+        .then((preview) => {
+          this.queuedPreview.set(preview?.lab ?? null);
+          return this.queue.submitReading(queued, readingSummary(queued, names, this.chips.set(), preview));
+        })
         .then(
-          (result) => (result.queued ? this.savedOnPhone() : this.savedAs(result.reading)),
+          (result) => (result.queued ? this.savedOnPhone(queued) : this.savedAs(result.reading)),
           (error: unknown) => this.refused(error),
         );
       return;
@@ -277,6 +289,8 @@ export class ReadingForm {
     this.form.patchValue(keep);
     this.saved.set(null);
     this.queued.set(false);
+    this.queuedBody.set(null);
+    this.queuedPreview.set(null);
     this.photo.set(null);
     this.eyeChipOpen.set(false);
     this.correctingId.set(null);
@@ -295,8 +309,11 @@ export class ReadingForm {
     this.host.nativeElement.scrollIntoView?.({ block: 'start' });
   }
 
-  /** Kept in the queue: the form is done with it, as after a save, and says where it waits. */
-  private savedOnPhone(): void {
+  /** Kept in the queue: the form is done with it, as after a save, and says where it waits and its provisional chip. */
+  private savedOnPhone(body: QueuedReadingBody): void {
+    this.queuedBody.set(body);
+    // The chips come from this phone's cache when it has them; without them the screen says the server will match.
+    this.chips.load();
     this.rememberChoices();
     this.drafts.drop();
     this.saving.set(false);
@@ -374,6 +391,8 @@ export class ReadingForm {
     this.form.patchValue(keep);
     this.saved.set(null);
     this.queued.set(false);
+    this.queuedBody.set(null);
+    this.queuedPreview.set(null);
     this.problems.set([]);
     this.eyeChipOpen.set(false);
     this.photo.set(null);
