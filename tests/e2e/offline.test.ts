@@ -123,8 +123,16 @@ describe('offline on a phone: cached app, queued readings, sent once back in ran
     await page.locator('hl-chip-picker .families hl-swatch-grid button.chip').nth(20).click();
     await page.locator('hl-chip-picker .fines-heading').waitFor();
     await page.locator('hl-chip-picker hl-swatch-grid').first().locator('button.chip').nth(2).click();
+    const picked = (await page.locator('hl-chip-picker .chosen-row').innerText()).match(/F-\d{3}\.\d{3}/)?.[0];
+    assert.ok(picked, 'a fine chip is chosen');
+    // The instrument before asked no light; a chip read by eye does.
+    await page.getByRole('radio', { name: 'Open shade' }).click();
     await page.getByRole('button', { name: 'Save reading' }).click();
     await page.getByText('Saved — waiting to send.').waitFor();
+    // The provisional chip, worked out on the phone, on grey with its code under it.
+    await page.locator('.saved.queued .provisional .chip-code', { hasText: picked }).waitFor();
+    assert.match(await page.locator('.saved.queued .provisional').innerText(), /Provisional: nearest chip F-\d{3}\.\d{3}/);
+    await screenshot(page, 'offline-saved-provisional-chip');
     const indicator = page.getByRole('link', { name: '2 readings waiting to send' });
     await indicator.waitFor();
     const box = await indicator.boundingBox();
