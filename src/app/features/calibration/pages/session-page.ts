@@ -5,7 +5,7 @@ import { MatExpansionModule } from '@angular/material/expansion';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressSpinnerModule } from '@angular/material/progress-spinner';
 import { MatSnackBar } from '@angular/material/snack-bar';
-import { ActivatedRoute, Router, RouterLink } from '@angular/router';
+import { Router, RouterLink } from '@angular/router';
 
 import type { CalibrationResults, CalibrationSessionDetail, SpecimenView } from '../../../../../shared/api/calibration-answers.js';
 import { AuthStore } from '../../../core/auth/auth-store';
@@ -40,7 +40,6 @@ export class SessionPage implements OnInit {
   private readonly api = inject(CalibrationApi);
   private readonly dialog = inject(MatDialog);
   private readonly snackBar = inject(MatSnackBar);
-  private readonly route = inject(ActivatedRoute);
   private readonly router = inject(Router);
   protected readonly role = inject(AuthStore).role;
   /** The session's id, from the route (component input binding). */
@@ -62,7 +61,7 @@ export class SessionPage implements OnInit {
 
   ngOnInit(): void {
     if (!runsSessions(this.role())) {
-      void this.router.navigate(['take'], { relativeTo: this.route, replaceUrl: true });
+      void this.router.navigate(['/calibration/sessions', this.id(), 'take'], { replaceUrl: true });
       return;
     }
     this.loadSession();

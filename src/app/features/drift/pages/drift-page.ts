@@ -1,9 +1,9 @@
-import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
-import { rxResource, toSignal } from '@angular/core/rxjs-interop';
+import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
+import { rxResource } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
-import { ActivatedRoute, Router, RouterLink } from '@angular/router';
+import { Router, RouterLink } from '@angular/router';
 
 import { CollectionApi } from '../../../shared/collection/collection-api';
 import { AbPlane } from '../components/ab-plane';
@@ -37,13 +37,15 @@ export class DriftPage {
   private readonly api = inject(AnalysisApi);
   private readonly collection = inject(CollectionApi);
   private readonly router = inject(Router);
-  private readonly route = inject(ActivatedRoute);
   private readonly me = inject(AuthStore).currentUser;
   /** Whether the signed-in role may take readings: reviewers are not offered a Record link the guard would refuse. */
   protected readonly mayRecord = computed(() => mayOpen(this.me()?.role, '/record'));
 
-  private readonly params = toSignal(this.route.queryParams, { initialValue: this.route.snapshot.queryParams });
-  protected readonly choice = computed(() => choiceFromParams(this.params()));
+  // The choice lives in the address's query parameters (component input binding).
+  readonly accessionId = input<string>();
+  readonly characterId = input<string>();
+  readonly siteId = input<string>();
+  protected readonly choice = computed(() => choiceFromParams({ accessionId: this.accessionId(), characterId: this.characterId(), siteId: this.siteId() }));
   protected readonly carried = computed(() => ({ accessionId: this.choice().accessionId, characterId: this.choice().characterId }));
 
   protected readonly accessions = rxResource({ stream: () => this.collection.accessions() });
@@ -79,6 +81,6 @@ export class DriftPage {
   });
 
   protected choose(change: Partial<DriftChoice>): void {
-    void this.router.navigate([], { relativeTo: this.route, queryParams: paramsFromChoice({ ...this.choice(), ...change }) });
+    void this.router.navigate([], { queryParams: paramsFromChoice({ ...this.choice(), ...change }) });
   }
 }

@@ -1,9 +1,9 @@
-import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
-import { rxResource, toSignal } from '@angular/core/rxjs-interop';
+import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
+import { rxResource } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
-import { ActivatedRoute, Router, RouterLink } from '@angular/router';
+import { Router, RouterLink } from '@angular/router';
 
 import { CollectionApi } from '../../../shared/collection/collection-api';
 import { DriftPicker } from '../components/drift-picker';
@@ -89,22 +89,25 @@ export class SitesPage {
   private readonly api = inject(AnalysisApi);
   private readonly collection = inject(CollectionApi);
   private readonly router = inject(Router);
-  private readonly route = inject(ActivatedRoute);
   private readonly me = inject(AuthStore).currentUser;
   /** Whether the signed-in role may take readings: reviewers are not offered a Record link the guard would refuse. */
   protected readonly mayRecord = computed(() => mayOpen(this.me()?.role, '/record'));
 
-  private readonly params = toSignal(this.route.queryParams, { initialValue: this.route.snapshot.queryParams });
-  protected readonly choice = computed(() => ({ ...choiceFromParams(this.params()), siteId: null }));
+  // The choice and the season group live in the address's query parameters (component input binding).
+  readonly accessionId = input<string>();
+  readonly characterId = input<string>();
+  readonly seasonParam = input<string>(undefined, { alias: 'season' });
+  readonly seasonYear = input<string>();
+  protected readonly choice = computed(() => ({ ...choiceFromParams({ accessionId: this.accessionId(), characterId: this.characterId() }), siteId: null }));
   protected readonly carried = computed(() => ({ accessionId: this.choice().accessionId, characterId: this.choice().characterId }));
 
   protected readonly accessions = rxResource({ stream: () => this.collection.accessions() });
   protected readonly characters = rxResource({ stream: () => this.collection.characters() });
   /** One season group from the URL (the overview's site differences open with it), else every season together. */
   protected readonly season = computed(() => {
-    const p = this.params();
-    const year = Number(p['seasonYear']);
-    return typeof p['season'] === 'string' && p['season'] && Number.isInteger(year) ? { season: p['season'] as string, seasonYear: year } : null;
+    const season = this.seasonParam();
+    const year = Number(this.seasonYear());
+    return season && Number.isInteger(year) ? { season, seasonYear: year } : null;
   });
   protected readonly comparison = rxResource({
     params: () => {
@@ -126,6 +129,6 @@ export class SitesPage {
   });
 
   protected choose(change: Partial<DriftChoice>): void {
-    void this.router.navigate([], { relativeTo: this.route, queryParams: { ...paramsFromChoice({ ...this.choice(), ...change, siteId: null }), season: null, seasonYear: null } });
+    void this.router.navigate([], { queryParams: { ...paramsFromChoice({ ...this.choice(), ...change, siteId: null }), season: null, seasonYear: null } });
   }
 }

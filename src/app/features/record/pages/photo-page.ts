@@ -1,11 +1,11 @@
-import { ChangeDetectionStrategy, Component, DestroyRef, computed, inject, signal, viewChild } from '@angular/core';
+import { ChangeDetectionStrategy, Component, DestroyRef, type OnInit, computed, inject, input, signal, viewChild } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatProgressSpinnerModule } from '@angular/material/progress-spinner';
 import { MatSliderModule } from '@angular/material/slider';
-import { ActivatedRoute, Router } from '@angular/router';
+import { Router } from '@angular/router';
 import type { Subscription } from 'rxjs';
 
 import type { PhotoDto, PhotoSample } from '../../../../../shared/api/photo-answers.js';
@@ -19,6 +19,7 @@ import { SampleResult } from '../components/sample-result';
 import { previewRegion, type Pixels } from '../data/photo-preview';
 import { PhotosApi } from '../../../shared/photos/photos-api';
 import { photoSourceFromParams, photoSourceParams } from '../data/photo-source';
+import type { PhotoSource } from '../data/reading-draft';
 import { defaultRadius, describeRegion, type Tool } from '../../../shared/photos/region-drawing';
 import { ProblemNotice } from '../../../shared/problem-notice';
 
@@ -57,12 +58,19 @@ const TOOLS: readonly { tool: Tool; icon: string; label: string; hint: string }[
   styleUrl: './photo-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
-export class PhotoPage {
+export class PhotoPage implements OnInit {
   private readonly api = inject(PhotosApi);
   private readonly router = inject(Router);
-  private readonly route = inject(ActivatedRoute);
   private readonly canvas = viewChild(PhotoCanvas);
   private readonly queue = inject(OfflineQueue);
+
+  // The address's query parameters (component input binding): a photo to open again with the
+  // region and card the reading form sent back, and the reading being corrected, if any.
+  readonly photoParam = input<string>(undefined, { alias: 'photo' });
+  readonly localPhoto = input<string>();
+  readonly region = input<string>();
+  readonly cardParam = input<string>(undefined, { alias: 'card' });
+  readonly correct = input<string>();
 
   protected readonly tools = TOOLS;
   protected readonly photo = signal<PhotoDto | null>(null);
@@ -117,10 +125,10 @@ export class PhotoPage {
       this.sampleRun?.unsubscribe();
       if (this.localUrl) URL.revokeObjectURL(this.localUrl);
     });
-    const id = Number(this.route.snapshot.queryParamMap.get('photo'));
-    if (Number.isSafeInteger(id) && id > 0) this.reopen(id);
-    const local = this.route.snapshot.queryParamMap.get('localPhoto');
-    if (local) void this.reopenLocal(local);
+  }
+
+  ngOnInit(): void {
+    this.reopenFromAddress();
   }
 
   /** Into the reading form with this photo, region and card (carried in the form's address). */
@@ -128,7 +136,7 @@ export class PhotoPage {
     const photo = this.photo();
     const region = this.tissue();
     if (!photo || !region) return;
-    const correct = this.route.snapshot.queryParamMap.get('correct');
+    const correct = this.correct() ?? null;
     const local = this.localPhotoId();
     if (local) {
       const pv = this.preview();
@@ -253,12 +261,20 @@ export class PhotoPage {
     this.show({ id: 0, ...size, sha256: '', sourceProfile: 'none', mime: file.type, capturedAt: null, orientation: 1, byteSize: file.size, uploadedById: 0, createdAt: new Date().toISOString(), imageUrl: this.localUrl, thumbUrl: this.localUrl });
   }
 
+  /** Opens the photo the address names again (back from the reading form), with the region and card it sent back. */
+  private reopenFromAddress(): void {
+    const source = photoSourceFromParams({ photo: this.photoParam(), localPhoto: this.localPhoto(), region: this.region(), card: this.cardParam() });
+    const id = Number(this.photoParam());
+    if (Number.isSafeInteger(id) && id > 0) this.reopen(id, source);
+    const local = this.localPhoto();
+    if (local) void this.reopenLocal(local, source);
+  }
+
   /** Opens a photo kept on the phone again, with the region sent back from the reading form. */
-  private async reopenLocal(id: string): Promise<void> {
+  private async reopenLocal(id: string, source: PhotoSource | null): Promise<void> {
     const kept = await this.queue.photo(id);
     if (!kept) return this.problem.set('That photo is no longer on this phone; take or choose it again.');
     await this.keepOnPhone(kept.blob, kept.name, id);
-    const source = photoSourceFromParams(this.route.snapshot.queryParams);
     if (source?.localPhotoId === id) {
       this.tissue.set(source.region);
       this.card.set(source.neutral);
@@ -266,8 +282,7 @@ export class PhotoPage {
   }
 
   /** Opens a stored photo again; a region sent back from the reading form is drawn and measured again. */
-  private reopen(id: number): void {
-    const source = photoSourceFromParams(this.route.snapshot.queryParams);
+  private reopen(id: number, source: PhotoSource | null): void {
     this.api.get(id).subscribe({
       next: (photo) => {
         this.show(photo);
@@ -292,7 +307,7 @@ export class PhotoPage {
     if (photo.id > 0) this.localPhotoId.set(null);
     const local = this.localPhotoId();
     // The reading being corrected, if any, stays in the address for the way back to the form.
-    void this.router.navigate([], { queryParams: { ...(local ? { localPhoto: local } : { photo: photo.id }), correct: this.route.snapshot.queryParamMap.get('correct') }, replaceUrl: true });
+    void this.router.navigate([], { queryParams: { ...(local ? { localPhoto: local } : { photo: photo.id }), correct: this.correct() ?? null }, replaceUrl: true });
   }
 }
 
