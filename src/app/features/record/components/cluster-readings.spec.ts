@@ -7,6 +7,7 @@ import type { PhotoSample, RegionCluster } from '../../../../../shared/api/photo
 import type { CreateReadingsRequest, ReadingDetail } from '../../../../../shared/api/reading-answers.js';
 import type { Region } from '../../../../../shared/photo/region.js';
 import { errorInterceptor } from '../../../core/http/error-interceptor';
+import { IS_ONLINE } from '../../../core/offline/offline-queue';
 import { TEST_ACCESSIONS, TEST_CHARACTERS } from '../../../shared/testing/collection-fixtures';
 import { READING_DRAFT_KEY } from '../data/reading-memory';
 import { ClusterReadings } from './cluster-readings';
@@ -18,12 +19,14 @@ const SAMPLE = { photoId: 12, region: REGION, uniform: false, clusters: [cluster
 
 describe('ClusterReadings', () => {
   let http: HttpTestingController;
+  let online = true;
 
   beforeEach(() => {
+    online = true;
     sessionStorage.clear();
     // The reading form's half-filled draft: accession HL-0001, plant P1, the upper third, overcast.
     sessionStorage.setItem(READING_DRAFT_KEY, JSON.stringify({ accessionId: 1, plantId: 11, characterId: 5, light: 'overcast' }));
-    TestBed.configureTestingModule({ providers: [provideRouter([]), provideHttpClient(withInterceptors([errorInterceptor])), provideHttpClientTesting()] });
+    TestBed.configureTestingModule({ providers: [provideRouter([]), provideHttpClient(withInterceptors([errorInterceptor])), provideHttpClientTesting(), { provide: IS_ONLINE, useValue: () => online }] });
     http = TestBed.inject(HttpTestingController);
   });
 
@@ -86,6 +89,18 @@ describe('ClusterReadings', () => {
     expect(el.textContent).toContain('2 readings saved');
     expect([...el.querySelectorAll('.saved-list a')].map((a) => a.getAttribute('href'))).toEqual(['/readings/41', '/readings/42']);
     expect(sessionStorage.getItem(READING_DRAFT_KEY)).toBeNull();
+  });
+
+  it('should say out of range that the colours need the server, sending nothing', async () => {
+    online = false;
+    const fixture = await open();
+    const el = fixture.nativeElement as HTMLElement;
+    fixture.componentInstance['chooseCharacter'](1, 7);
+    fixture.detectChanges();
+    saveButton(el).click();
+    fixture.detectChanges();
+    http.expectNone('/api/readings/batch');
+    expect(el.textContent).toContain('No connection: saving the colours separately needs the server.');
   });
 
   it('should point out one character given to two colours and send nothing', async () => {

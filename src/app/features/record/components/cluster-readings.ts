@@ -13,6 +13,7 @@ import type { PhotoSample } from '../../../../../shared/api/photo-answers.js';
 import { LIGHTS, type Light, type ReadingDetail } from '../../../../../shared/api/reading-answers.js';
 import type { Region } from '../../../../../shared/photo/region.js';
 import { ApiError } from '../../../core/http/api-error';
+import { IS_ONLINE } from '../../../core/offline/offline-queue';
 import { CollectionApi } from '../../../shared/collection/collection-api';
 import { ReadingsApi, newIdempotencyKey } from '../../../shared/readings/readings-api';
 import { LIGHT_WORDS } from '../../../shared/readings/reading-words';
@@ -48,6 +49,7 @@ export class ClusterReadings {
   private readonly drafts = inject(ReadingDraftStore);
   private readonly memory = inject(ReadingMemory);
   private readonly destroyRef = inject(DestroyRef);
+  private readonly isOnline = inject(IS_ONLINE);
 
   readonly sample = input.required<PhotoSample>();
   readonly photoId = input.required<number>();
@@ -120,6 +122,8 @@ export class ClusterReadings {
     const missing = [accessionId === null ? 'the accession' : '', light === null ? 'the light' : '', this.chosenCount() === 0 ? 'a character for at least one colour' : ''].filter(Boolean);
     if (missing.length) return this.problem.set(`Choose ${missing.join(', ')} (required).`);
     if (repeatedCharacter(this.characterIds()) >= 0) return this.problem.set('Two colours have the same character: give each its own, or leave one unsaved.');
+    // The colours are split on the server from the stored photo, so they are saved there at once, never queued.
+    if (!this.isOnline()) return this.problem.set('No connection: saving the colours separately needs the server. Try again in range, or save the whole region with Save as reading.');
     const { body, clusterOf } = clusterBatch({ accessionId: accessionId!, plantId: this.plantId.value, light: light!, characterIds: this.characterIds() }, { photoId: this.photoId(), region: this.region(), card: this.card() });
     this.saveKey ??= newIdempotencyKey();
     this.saving.set(true);
