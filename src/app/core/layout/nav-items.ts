@@ -38,6 +38,7 @@ export const NAV_ITEMS: readonly NavItem[] = [
   { label: 'Users', icon: 'group', path: '/admin/users', roles: ['admin'], group: 'Admin' },
   { label: 'Outbox', icon: 'outgoing_mail', path: '/admin/outbox', roles: ['admin'], group: 'Admin' },
   { label: 'BrAPI tokens', icon: 'key', path: '/admin/api-tokens', roles: ['admin'], group: 'Admin' },
+  { label: 'Walk order', icon: 'format_list_numbered', path: '/admin/walk-order', roles: ['admin'], group: 'Admin' },
   { label: 'Audit', icon: 'history', path: '/admin/audit', roles: ['admin'], group: 'Admin' },
   { label: 'Account', icon: 'manage_accounts', path: '/account', roles: EVERYONE },
 ];

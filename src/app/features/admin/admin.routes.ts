@@ -19,6 +19,11 @@ export const ADMIN_ROUTES: Routes = [
     loadComponent: () => import('./pages/api-tokens-page').then((m) => m.ApiTokensPage),
   },
   {
+    path: 'walk-order',
+    title: 'Walk order · Hueledger',
+    loadComponent: () => import('./pages/walk-order-page').then((m) => m.WalkOrderPage),
+  },
+  {
     path: 'audit',
     title: 'Audit · Hueledger',
     loadComponent: () => import('./pages/audit-page').then((m) => m.AuditPage),
