@@ -39,9 +39,12 @@ export function invitedMail(to: string, name: string, title: string, heldOn: str
   };
 }
 
-/** The in-app notice of an invitation. */
-export function invitedNotice(title: string, heldOn: string): string {
-  return `You are invited to the calibration session "${title}" of ${heldOn}: open it and pick a chip for each specimen.`;
+/**
+ * The in-app notice of an invitation. It names no date: the text is stored once, while the app
+ * writes dates in each reader's own style (the notice shows when it came, the session its day).
+ */
+export function invitedNotice(title: string): string {
+  return `You are invited to the calibration session "${title}": open it and pick a chip for each specimen.`;
 }
 
 /** The in-app notice that a session's results are out, with the observer's own outcome. */

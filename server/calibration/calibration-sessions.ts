@@ -134,7 +134,7 @@ export async function inviteParticipants(ds: DataSource, actor: Actor, sessionId
       if (row?.invited) continue;
       if (row) await m.update(Participant, { id: row.id }, { invited: true });
       else await m.insert(Participant, { session: { id: sessionId }, user: { id }, invited: true });
-      await m.insert(Notification, { userId: id, kind: 'calibration-invited', readingId: null, sessionId, message: invitedNotice(session.title, session.heldOn), readAt: null });
+      await m.insert(Notification, { userId: id, kind: 'calibration-invited', readingId: null, sessionId, message: invitedNotice(session.title), readAt: null });
       newly.push(users.find((u) => u.id === id)!);
       count++;
     }

@@ -17,14 +17,16 @@ export function noticeKindOf(decision: ReviewDecision): NotificationKind | null 
   return decision === 'flag' ? 'reading-flagged' : decision === 'reread' ? 'reread-requested' : null;
 }
 
-function what(r: ReviewedReading): string {
-  return `${r.characterLabel} of ${r.accessionNumber} ${r.accessionName} at ${r.siteCode}, observed ${r.observedAt.toISOString().slice(0, 10)}`;
+/** Which reading: the mail names the day it was observed; the in-app notice does not, since the app writes dates in each reader's own style beside it. */
+function what(r: ReviewedReading, withDay = true): string {
+  const which = `${r.characterLabel} of ${r.accessionNumber} ${r.accessionName} at ${r.siteCode}`;
+  return withDay ? `${which}, observed ${r.observedAt.toISOString().slice(0, 10)}` : `reading ${r.id}, ${which}`;
 }
 
 /** The in-app notice's plain words: what the reviewer decided, on which reading, and their comment. */
 export function noticeMessage(kind: NotificationKind, reviewerName: string, reading: ReviewedReading, comment: string): string {
   const decided = kind === 'reading-flagged' ? 'flagged your reading' : 'asked you to read again';
-  return `${reviewerName} ${decided}: ${what(reading)}. "${comment}"`;
+  return `${reviewerName} ${decided}: ${what(reading, false)}. "${comment}"`;
 }
 
 /** The mail a recorder gets when a reviewer flags one of their readings or asks for a re-read, with a link to the reading. */

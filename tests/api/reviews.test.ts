@@ -137,6 +137,9 @@ describe('reviews, the queue and notices', () => {
       const notice = notices.items.find((n) => n.readingId === id)!;
       assert.deepEqual([notice.kind, notice.readAt], ['reading-flagged', null]);
       assert.ok(notice.message.includes(FLAG));
+      // The stored notice names the reading, never a raw date: the app writes dates in each reader's style.
+      assert.ok(notice.message.includes(`reading ${id}`), notice.message);
+      assert.doesNotMatch(notice.message, /\d{4}-\d{2}-\d{2}/);
       assert.ok(notices.unread >= 1);
     });
 
