@@ -6,7 +6,7 @@
 import assert from 'node:assert/strict';
 import { before, describe, test } from 'node:test';
 import type { Page } from 'playwright-core';
-import { screenshot, signIn, useApp, waitForValue } from './browser.js';
+import { navigateTo, screenshot, signIn, useApp, waitForValue } from './browser.js';
 
 const app = useApp();
 
@@ -317,5 +317,31 @@ describe('a reviewer follows the progress table', () => {
     assert.equal(await page.getByRole('button', { name: /^Skip / }).count(), 0, 'nothing to skip on a sheet to look at');
     assert.equal(await page.locator('.rows a[href]').count(), 0, 'no row opens an entry form');
     await wholePage(page, 'plant-sheet-reviewer-desk');
+  });
+});
+
+describe('an admin on a phone changes the walk order', () => {
+  test('should move a row up with a 48 px button, save, and find the new order on the server', async () => {
+    const page = await app.newPage({ phone: true });
+    await signIn(page, app.url, 'admin@demo.test');
+    await navigateTo(page, 'Walk order');
+    const rows = page.locator('ol.walk li.entry');
+    await rows.nth(1).waitFor();
+    const second = (await rows.nth(1).locator('.label').innerText()).trim();
+    const first = (await rows.nth(0).locator('.label').innerText()).trim();
+    const up = page.getByRole('button', { name: `Move ${second} up` });
+    const box = await up.boundingBox();
+    assert.ok(box && box.width >= 48 && box.height >= 48, `the move button is a 48 px target (${JSON.stringify(box)})`);
+    await up.click();
+    // The list is redrawn in the app's own time: wait for the moved row at the top.
+    await rows.nth(0).locator('.label', { hasText: second }).waitFor();
+    // The keyboard stays on the row that moved (it is at the top now, so on its down arrow).
+    await page.waitForFunction((name) => document.activeElement?.getAttribute('aria-label') === `Move ${name} down`, second);
+    assert.equal(await page.evaluate(() => document.documentElement.scrollWidth), 390, 'nothing is pushed off the phone screen');
+    await wholePage(page, 'walk-order-phone');
+    await page.getByRole('button', { name: 'Save walk order' }).click();
+    await page.getByText('Walk order saved').waitFor();
+    const order = await api<{ label: string }[]>(page, '/api/catalogue/order');
+    assert.deepEqual(order.slice(0, 2).map((e) => e.label), [second, first]);
   });
 });
