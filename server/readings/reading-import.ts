@@ -8,8 +8,10 @@
 //   accessionNumber  required  e.g. HL-0001
 //   characterCode    required  e.g. petiole.third.upper
 //   observedAt       required  ISO 8601 with an offset, e.g. 2026-02-10T09:30:00+12:00
-//   L, a, b          required  CIELAB D65/2° as the instrument gives it (L 0–100, a and b ±200)
-//   light            required  direct-sun, open-shade, overcast, indoor-lamp or viewing-booth
+//   L, a, b          required  CIELAB as the instrument gives it (L 0–100, a and b ±200)
+//   illuminant       optional  D65/10, D65/2, D50/2 or other: what the instrument reports; D50/2 is
+//                              adapted to D65/2 (Bradford) as POST /api/readings does
+//   light            optional  ambient light, kept if given (the instrument lights the sample itself)
 //   plantLabel       optional  a plant of that accession, e.g. P2
 //   siteCode         optional  default: the plant's site, else the accession's
 //   instrument, eyeChipCode, secondsSinceCut, leafPosition, notes   optional
@@ -27,7 +29,7 @@ import { controlCharacterErrors } from '../core/validate.js';
 import { prepareReading, type ReadingValues } from './reading-input.js';
 import { insertReading, type ReadingsDeps } from './readings.js';
 
-const REQUIRED: readonly string[] = ['accessionNumber', 'characterCode', 'observedAt', 'L', 'a', 'b', 'light'];
+const REQUIRED: readonly string[] = ['accessionNumber', 'characterCode', 'observedAt', 'L', 'a', 'b'];
 
 /** The import was refused: 422 problem+json whose `rows` lists every bad row; nothing was written. */
 export class ImportRefused extends AppError {
@@ -128,6 +130,7 @@ function bodyOf(row: Record<string, string>, names: Awaited<ReturnType<typeof na
     method: 'instrument',
     lab,
     light: text('light'),
+    illuminant: text('illuminant'),
     instrument: text('instrument'),
     eyeChipCode: text('eyeChipCode'),
     secondsSinceCut: Number.isNaN(numbers.secondsSinceCut) ? undefined : numbers.secondsSinceCut,

@@ -249,8 +249,8 @@ export interface ReadingList {
   total: number;
 }
 
-/** The columns of the instrument-reading CSV import, in this order; accessionNumber … light are required, the rest optional. */
-export const IMPORT_COLUMNS = ['accessionNumber', 'characterCode', 'observedAt', 'L', 'a', 'b', 'light', 'plantLabel', 'siteCode', 'instrument', 'eyeChipCode', 'secondsSinceCut', 'leafPosition', 'notes'] as const;
+/** The columns of the instrument-reading CSV import, in this order; accessionNumber … b are required, the rest optional (light too: the instrument lights the sample). */
+export const IMPORT_COLUMNS = ['accessionNumber', 'characterCode', 'observedAt', 'L', 'a', 'b', 'illuminant', 'light', 'plantLabel', 'siteCode', 'instrument', 'eyeChipCode', 'secondsSinceCut', 'leafPosition', 'notes'] as const;
 export const IMPORT_ROWS_MAX = 5000;
 
 /** One row of an import's report (row 1 is the header, so data start at row 2). */

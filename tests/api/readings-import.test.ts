@@ -4,6 +4,7 @@ import { after, before, describe, test } from 'node:test';
 import assert from 'node:assert/strict';
 import type { ImportReport, ImportRowReport, ReadingDetail } from '../../shared/api/reading-answers.js';
 import { AuditEvent } from '../../server/audit/audit-event.entity.js';
+import { labD50ToD65 } from '../../shared/colour/chromatic-adaptation.js';
 import { assertInvalidFields, assertProblem } from './assert-problem.js';
 import { rowCounts, signedInAs, startHarness, type Client, type Harness } from './harness.js';
 import { readingWorld, type ReadingWorld } from './reading-fixtures.js';
@@ -102,6 +103,21 @@ describe('importing instrument readings from CSV', () => {
     const imported = await h.ds.getRepository(AuditEvent).findBy({ action: 'readings.imported' });
     assert.equal(imported.length, 1);
     assert.equal(imported[0]!.detail!['count'], 4);
+  });
+
+  test('should take a file without a light column, adapting D50/2° rows to D65/2° and refusing an unknown illuminant by column', async () => {
+    const header = 'accessionNumber,plantLabel,characterCode,observedAt,L,a,b,illuminant';
+    const bad = await upload(recorder, [header, 'RT-V,P1,petiole.third.upper,2026-02-20T09:30:00+12:00,38.2,24.5,-12.1,A/10'].join('\n'));
+    assertProblem(bad, 422);
+    assert.deepEqual((bad.body as { rows: ImportRowReport[] }).rows[0]!.errors.map((e) => e.field), ['illuminant']);
+    const res = await upload(recorder, [header, 'RT-V,P1,petiole.third.upper,2026-02-20T09:30:00+12:00,38.2,24.5,-12.1,D50/2', 'RT-V,P1,petiole.third.upper,2026-02-21T09:30:00+12:00,38.2,24.5,-12.1,D65/10'].join('\n'));
+    assert.equal(res.status, 201, res.text);
+    const [d50, d65] = await Promise.all((res.body as ImportReport).readingIds.map(async (id) => (await recorder.get(`/api/readings/${id}`).expect(200)).body as ReadingDetail));
+    assert.deepEqual([d50!.light, d50!.provenance.illuminant, d50!.provenance.reportedLab], [null, 'D50/2', [38.2, 24.5, -12.1]]);
+    // The same adaptation as a reading posted one at a time (shared/colour/chromatic-adaptation.ts, checked against Bradford in tests/reference).
+    const adapted = labD50ToD65({ l: 38.2, a: 24.5, b: -12.1 });
+    assert.deepEqual(d50!.lab, [adapted.l, adapted.a, adapted.b]);
+    assert.deepEqual([d65!.lab, d65!.provenance.illuminant, d65!.provenance.reportedLab], [[38.2, 24.5, -12.1], 'D65/10', null]);
   });
 
   test('should refuse a reviewer with 403, writing nothing', async () => {
