@@ -88,6 +88,8 @@ export const EXPORT_COLUMNS: readonly ExportColumn[] = [
   { header: 'superseded by', width: 10, value: (r) => r.supersededById },
   { header: 'set id', width: 7, value: (r) => r.setId },
   { header: 'instrument', width: 14, value: (r) => r.instrument },
+  { header: 'illuminant/observer', width: 10, value: (r) => r.illuminant },
+  { header: 'reported L*a*b*', width: 20, value: (r) => (r.reportedLab ? r.reportedLab.join(' ') : null) },
   { header: 'photo id', width: 8, value: (r) => r.photoId },
   { header: 'provenance link', width: 36, value: (r, url) => `${url}/readings/${r.id}` },
 ];

@@ -54,7 +54,7 @@ describe('readings exports', () => {
     assert.ok(headers.includes('plant petiole.length (m)'));
     // 40 in × 0.0254 m/in = 1.016 m (NIST SP 811, exact).
     assert.equal(Number(rows.find((r) => Number(r['id']) === first.id)!['plant petiole.length (m)']), 1.016);
-    for (const h of ['observed at (site local)', 'observed at (UTC)', 'L*', 'a*', 'b*', 'C*ab', 'h°ab', 'hex', 'best chip', 'ΔE00', 'eye chip', 'eye ΔE00', 'light', 'seconds since cut', 'leaf', 'notes', 'status', 'supersedes', 'superseded by', 'set id', 'provenance link', 'season', 'season-year']) {
+    for (const h of ['observed at (site local)', 'observed at (UTC)', 'L*', 'a*', 'b*', 'C*ab', 'h°ab', 'hex', 'best chip', 'ΔE00', 'eye chip', 'eye ΔE00', 'light', 'seconds since cut', 'leaf', 'notes', 'status', 'supersedes', 'superseded by', 'set id', 'instrument', 'illuminant/observer', 'reported L*a*b*', 'provenance link', 'season', 'season-year']) {
       assert.ok(h in rows[0]!, `column ${h}`);
     }
     assert.deepEqual(rows.map((r) => Number(r['id'])).sort((a, b) => a - b), [first.id, corrected.id]);
