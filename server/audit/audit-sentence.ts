@@ -10,12 +10,23 @@ const str = (v: unknown) => (typeof v === 'string' ? v : v === null || v === und
 const list = (v: unknown) => (Array.isArray(v) ? v.map(str).join(', ') : str(v));
 /** "accession:12" → "accession 12". */
 const subjectWords = (s: string | null) => (s ? s.replace(':', ' ') : 'something');
+/**
+ * A calendar day ("2026-04-02") in the reader's language, in the app's date style (day, short
+ * month, year; "2 Apr 2026" in en-GB, "Apr 2, 2026" in en-US), as the screens write every date;
+ * anything else as it is. A language Intl does not know falls back to the runtime's own.
+ */
+export function dayWords(v: unknown, locale?: string): string {
+  const m = typeof v === 'string' ? /^(\d{4})-(\d{2})-(\d{2})$/.exec(v) : null;
+  if (!m) return str(v);
+  const known = locale && Intl.DateTimeFormat.supportedLocalesOf([locale]).length ? locale : undefined;
+  return new Intl.DateTimeFormat(known, { year: 'numeric', month: 'short', day: 'numeric', timeZone: 'UTC' }).format(Date.UTC(Number(m[1]), Number(m[2]) - 1, Number(m[3])));
+}
 const changedFields = (d: Detail) => (d ? Object.keys(d).join(', ') : 'nothing named');
 
 const DECISION_WORDS: Record<string, string> = { approve: 'approved', flag: 'flagged', reread: 'asked for a re-read of' };
 
 /** Sentence builders by action; each gets the actor's name (or "The system") and the event. */
-const SENTENCES: Record<string, (who: string, subject: string | null, d: Detail) => string> = {
+const SENTENCES: Record<string, (who: string, subject: string | null, d: Detail, day: (v: unknown) => string) => string> = {
   'reading.created': (who, s, d) => `${who} recorded ${subjectWords(s)} by ${str(d?.['method']) || 'some method'}: ${lab(d?.['lab'])}, nearest chip ${str(d?.['bestChip'])} at ΔE00 ${num(d?.['deltaE00'])}.`,
   'reading.superseded': (who, s, d) => {
     const from = d?.['from'] as Detail;
@@ -29,7 +40,7 @@ const SENTENCES: Record<string, (who: string, subject: string | null, d: Detail)
     return `${who} ${verb} ${subjectWords(s)}${comment}.`;
   },
   'readings.imported': (who, _s, d) => `${who} imported ${str(d?.['count'] ?? 'some')} readings from a file (readings ${str(d?.['first'])} to ${str(d?.['last'])}).`,
-  'print-batch.created': (who, s, d) => `${who} recorded ${subjectWords(s)}: the ${str(d?.['kind'])} of set ${str(d?.['setId'])} printed on ${str(d?.['printedOn'])}.`,
+  'print-batch.created': (who, s, d, day) => `${who} recorded ${subjectWords(s)}: the ${str(d?.['kind'])} of set ${str(d?.['setId'])} printed on ${day(d?.['printedOn'])}.`,
   'print-batch.measured': (who, s, d) => `${who} entered ${str(d?.['patches'])} measured patches of ${subjectWords(s)}.`,
   'auth.sign-in': (who) => `${who} signed in.`,
   'auth.sign-in-failed': (_who, s, d) => `A sign-in as ${s?.startsWith('email:') ? s.slice(6) : 'someone'} was refused${d?.['reason'] ? ` (${str(d['reason'])})` : ''}.`,
@@ -42,14 +53,14 @@ const SENTENCES: Record<string, (who: string, subject: string | null, d: Detail)
   'user.password-changed': (who) => `${who} changed their password.`,
   'invitation.created': (who, _s, d) => `${who} invited ${str(d?.['email']) || 'someone'}${d?.['role'] ? ` as ${str(d['role'])}` : ''}.`,
   'notification.read': (who, s) => `${who} read ${subjectWords(s)}.`,
-  'calibration.session.created': (who, s, d) => `${who} opened calibration ${subjectWords(s)}, "${str(d?.['title'])}", held on ${str(d?.['heldOn'])}.`,
+  'calibration.session.created': (who, s, d, day) => `${who} opened calibration ${subjectWords(s)}, "${str(d?.['title'])}", held on ${day(d?.['heldOn'])}.`,
   'calibration.specimen.added': (who, s, d) => `${who} added specimen "${str(d?.['label'])}" (${lab(d?.['lab'])}) to calibration ${subjectWords(s)}.`,
   'calibration.participants.invited': (who, s, d) => `${who} invited users ${list(d?.['userIds'])} to calibration ${subjectWords(s)}.`,
   'calibration.response.recorded': (who, s, d) => `${who} picked ${str(d?.['chipCode'])} for specimen ${str(d?.['specimenId'])} in calibration ${subjectWords(s)}.`,
   'calibration.response.replaced': (who, s, d) => `${who} changed their pick for specimen ${str(d?.['specimenId'])} from ${str(d?.['from'])} to ${str(d?.['to'])} in calibration ${subjectWords(s)}.`,
   'calibration.session.closed': (who, s, d) => `${who} closed calibration ${subjectWords(s)}: Fleiss' κ ${num(d?.['fleissKappa'])}, ${str(d?.['responses'])} of ${str(d?.['expected'])} answers, ${Array.isArray(d?.['certified']) ? d['certified'].length : 0} certified.`,
   'calibration.certified': (who, s, d) => `${who} certified ${subjectWords(s)} for reference set ${str(d?.['referenceSetId'])} (κ ${num(d?.['kappa'])}, mean ΔE00 ${num(d?.['meanDeltaE00'])}).`,
-  'calibration.screening.recorded': (who, s, d) => `${who} recorded a colour-vision screening of ${subjectWords(s)} on ${str(d?.['screenedOn'])}: ${str(d?.['result'])}.`,
+  'calibration.screening.recorded': (who, s, d, day) => `${who} recorded a colour-vision screening of ${subjectWords(s)} on ${day(d?.['screenedOn'])}: ${str(d?.['result'])}.`,
 };
 
 /** What an action is about, for actions without a sentence of their own: "accession.updated" → "updated accession". */
@@ -61,10 +72,13 @@ function fallback(who: string, action: string, subject: string | null, d: Detail
   return `${who} ${verb} ${what}${fields}.`;
 }
 
-/** The event as a sentence; `actorName` null means the system or a signed-out caller. */
-export function auditSentence(actorName: string | null, action: string, subject: string | null, detail: Detail): string {
+/**
+ * The event as a sentence; `actorName` null means the system or a signed-out caller. `locale` is
+ * the reader's language (the request's Accept-Language), for the days a sentence names.
+ */
+export function auditSentence(actorName: string | null, action: string, subject: string | null, detail: Detail, locale?: string): string {
   const who = actorName ?? 'The system';
-  return (SENTENCES[action] ?? ((w, s, d) => fallback(w, action, s, d)))(who, subject, detail);
+  return (SENTENCES[action] ?? ((w, s, d) => fallback(w, action, s, d)))(who, subject, detail, (v) => dayWords(v, locale));
 }
 
 /** The first word of each action family, for the audit page's "what" filter. */

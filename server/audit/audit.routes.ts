@@ -37,9 +37,11 @@ export function auditRoutes(ctx: AppContext): Router {
     const [rows, total] = await qb.orderBy('e.id', 'DESC').skip((q.page - 1) * q.pageSize).take(q.pageSize).getManyAndCount();
     const ids = [...new Set(rows.map((r) => r.actorId).filter((x): x is number => x !== null))];
     const names = new Map((ids.length ? await ctx.ds.getRepository(User).find({ where: { id: In(ids) }, select: { id: true, name: true } }) : []).map((u) => [u.id, u.name]));
+    // The reader's language writes the days the sentences name, as the screens write every date.
+    const locale = req.acceptsLanguages().find((l) => l !== '*');
     const items: AuditEventRow[] = rows.map((r) => {
       const actorName = r.actorId === null ? null : (names.get(r.actorId) ?? r.actorEmail);
-      return { id: r.id, at: r.at.toISOString(), actorId: r.actorId, actorEmail: r.actorEmail, actorName, action: r.action, subject: r.subject, detail: r.detail, ip: r.ip, sentence: auditSentence(actorName, r.action, r.subject, r.detail) };
+      return { id: r.id, at: r.at.toISOString(), actorId: r.actorId, actorEmail: r.actorEmail, actorName, action: r.action, subject: r.subject, detail: r.detail, ip: r.ip, sentence: auditSentence(actorName, r.action, r.subject, r.detail, locale) };
     });
     res.json({ items, total });
   });

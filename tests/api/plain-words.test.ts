@@ -134,6 +134,18 @@ describe('records in plain words', () => {
     for (const id of [a, b]) assert.equal(((await recorder.get(`/api/readings/${id}`).expect(200)).body as ReadingDetail).status, 'approved');
   });
 
+  test("should write the days the audit sentences name in the reader's language (Accept-Language), never as ISO", async () => {
+    await admin.post('/api/calibration/sessions', { title: 'Days in words', heldOn: '2026-04-02' }).expect(201);
+    const sentenceIn = async (language: string) => {
+      const page = (await admin.get('/api/audit?action=calibration.session.created&pageSize=50').set('Accept-Language', language).expect(200)).body as Page<AuditEventRow>;
+      return page.items.find((e) => e.sentence.includes('"Days in words"'))!.sentence;
+    };
+    // The same style as the screens' dates (formatDateTime's 'date' style), for each language.
+    assert.match(await sentenceIn('en-GB,en;q=0.8'), /, held on 2 Apr 2026\.$/);
+    assert.match(await sentenceIn('en-US'), /, held on Apr 2, 2026\.$/);
+    assert.doesNotMatch(await sentenceIn('xx-unknown'), /2026-04-02/, 'an unknown language still gets a written day');
+  });
+
   test('should refuse From after To with a 400 naming "to", and keep the audit trail from non-admins', async () => {
     assertInvalidFields(await admin.get('/api/audit?from=2026-05-02&to=2026-05-01'), 'to');
     assertInvalidFields(await recorder.get('/api/readings?from=2026-05-02&to=2026-05-01'), 'to');
