@@ -123,6 +123,19 @@ describe('ReadingDetailPage', () => {
     expect(el.querySelector('[data-testid="reading-cluster"]')?.textContent).toContain("Colour 2 of 2 in the region (25 % of it, spread ΔE00 0.2), not the region's mean");
   });
 
+  it("should show an instrument reading's illuminant/observer and the numbers it reported, and no light", async () => {
+    const el = await open({ id: 4, role: 'recorder' }, {
+      ...DETAIL,
+      method: 'instrument',
+      light: null,
+      provenance: { ...DETAIL.provenance, photoId: null, region: null, instrument: 'Bench spectro A', illuminant: 'D50/2', reportedLab: [38.2, 24.5, -12.1] },
+    } as ReadingDetail);
+    const facts = [...el.querySelectorAll('dt')].map((dt) => dt.textContent?.trim());
+    expect(facts).not.toContain('Light');
+    const dt = [...el.querySelectorAll('dt')].find((d) => d.textContent?.includes('Illuminant / observer'))!;
+    expect(dt.nextElementSibling?.textContent?.replace(/\s+/g, ' ')).toContain('D50 / 2° as the instrument reported · reported L*a*b* 38.2, 24.5, -12.1, adapted to D65 / 2° (Bradford)');
+  });
+
   it('should show the colour matched against the other reference set too, beside the set it was stored with', async () => {
     const other = {
       setId: 'v2',
