@@ -2,7 +2,7 @@ import { provideHttpClient, withInterceptors } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { signal } from '@angular/core';
 import { TestBed, type ComponentFixture } from '@angular/core/testing';
-import { ActivatedRoute, provideRouter } from '@angular/router';
+import { provideRouter } from '@angular/router';
 
 import { AuthStore } from '../../../core/auth/auth-store';
 import { errorInterceptor } from '../../../core/http/error-interceptor';
@@ -46,9 +46,10 @@ describe('ReadingForm', () => {
   });
 
   async function open(queryParams: Record<string, string> = {}): Promise<{ fixture: ComponentFixture<ReadingForm>; el: HTMLElement }> {
-    TestBed.overrideProvider(ActivatedRoute, { useValue: { snapshot: { queryParams } } });
     http = TestBed.inject(HttpTestingController);
     const fixture = TestBed.createComponent(ReadingForm);
+    // The router binds the address's query parameters to inputs of the same name.
+    for (const [name, value] of Object.entries(queryParams)) fixture.componentRef.setInput(name, value);
     fixture.detectChanges();
     http.expectOne('/api/accessions').flush(TEST_ACCESSIONS);
     http.expectOne('/api/sites').flush(TEST_SITES);

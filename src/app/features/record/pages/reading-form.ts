@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, DestroyRef, ElementRef, ErrorHandler, computed, effect, inject, signal, untracked } from '@angular/core';
+import { ChangeDetectionStrategy, Component, DestroyRef, ElementRef, ErrorHandler, type OnInit, computed, effect, inject, input, signal, untracked } from '@angular/core';
 import { rxResource, takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
 import { ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
@@ -7,14 +7,13 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatProgressSpinnerModule } from '@angular/material/progress-spinner';
 import { MatSelectModule } from '@angular/material/select';
-import { ActivatedRoute, Router, RouterLink } from '@angular/router';
+import { Router, RouterLink } from '@angular/router';
 import { startWith } from 'rxjs';
 
 import type { Accession, Plant } from '../../../../../shared/api/collection-answers.js';
 import { ApiError } from '../../../core/http/api-error';
-import { IS_ONLINE, OfflineQueue } from '../../../core/offline/offline-queue';
+import { IS_ONLINE } from '../../../core/offline/offline-queue';
 import type { QueuedReadingBody } from '../../../core/offline/queue-item';
-import { readingSummary } from '../../../shared/readings/reading-summary';
 import { ChipCatalogue } from '../../../shared/chips/chip-catalogue';
 import { applyFieldErrors } from '../../../core/http/field-errors';
 import { CollectionApi } from '../../../shared/collection/collection-api';
@@ -22,7 +21,8 @@ import { ProgressSummary } from '../../../shared/collection/progress-summary';
 import { CUT_SECONDS_WARN, ILLUMINANT_LABELS, INSTRUMENT_ILLUMINANTS, LIGHTS, READING_METHODS, type InstrumentIlluminant, type ReadingDetail, type ReadingMethod } from '../../../../../shared/api/reading-answers.js';
 import { labD50ToD65 } from '../../../../../shared/colour/chromatic-adaptation.js';
 import { ReadingMatch } from '../../../shared/readings/reading-match';
-import { ReadingsApi, newIdempotencyKey } from '../../../shared/readings/readings-api';
+import { ReadingsApi } from '../../../shared/readings/readings-api';
+import { ReadingSaveFlow } from '../data/reading-save-flow';
 import { LIGHT_WORDS, METHOD_WORDS } from '../../../shared/readings/reading-words';
 import { AccessionPicker } from '../components/accession-picker';
 import { CharacterPicker } from '../components/character-picker';
@@ -95,24 +95,34 @@ const LEAF_CHOICES = ['2nd open leaf', '3rd open leaf', '4th open leaf'] as cons
     RouterLink,
     SwatchPicker,
   ],
+  providers: [ReadingSaveFlow],
   templateUrl: './reading-form.html',
   styleUrl: './reading-form.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
-export class ReadingForm {
+export class ReadingForm implements OnInit {
   private readonly collection = inject(CollectionApi);
   private readonly readings = inject(ReadingsApi);
+  private readonly saveFlow = inject(ReadingSaveFlow);
   private readonly memory = inject(ReadingMemory);
   private readonly drafts = inject(ReadingDraftStore);
   private readonly router = inject(Router);
-  private readonly route = inject(ActivatedRoute);
   private readonly errors = inject(ErrorHandler);
   private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
   private readonly destroyRef = inject(DestroyRef);
-  private readonly queue = inject(OfflineQueue);
   private readonly chips = inject(ChipCatalogue);
   private readonly sheets = inject(PlantSheetApi);
   private readonly isOnline = inject(IS_ONLINE);
+
+  // The address's query parameters (component input binding): a reading to correct, a plant sheet
+  // and character it was opened from, a photo region sent back from the photo page.
+  readonly correct = input<string>();
+  readonly sheet = input<string>();
+  readonly characterParam = input<string>(undefined, { alias: 'character' });
+  readonly photoParam = input<string>(undefined, { alias: 'photo' });
+  readonly localPhoto = input<string>();
+  readonly region = input<string>();
+  readonly cardParam = input<string>(undefined, { alias: 'card' });
 
   protected readonly form = buildReadingForm();
   protected readonly methods = READING_METHODS;
@@ -154,8 +164,6 @@ export class ReadingForm {
   /** Refusals that name no field on the form, shown above the save button. */
   protected readonly problems = signal<string[]>([]);
 
-  /** One key per reading being saved: kept across retries of the same answers, new once they change. */
-  private saveKey: string | null = null;
   private readonly value = toSignal(this.form.valueChanges.pipe(startWith(null)), { initialValue: null });
   private readonly formValue = computed(() => (this.value(), this.form.getRawValue()));
   protected readonly method = computed(() => this.formValue().method);
@@ -181,20 +189,6 @@ export class ReadingForm {
   protected readonly photoMissing = computed(() => photoProblem(this.method(), this.photo()));
 
   constructor() {
-    const params = this.route.snapshot.queryParams;
-    const correct = Number(params['correct']);
-    const sheetPlant = positiveId(params['sheet']);
-    const draft = this.drafts.read<KeptDraft>();
-    if (Number.isSafeInteger(correct) && correct > 0) this.startCorrection(correct, draft?.correcting === correct ? draft : null);
-    else if (sheetPlant) this.startFromSheet(sheetPlant, positiveId(params['character']), draft);
-    else this.restore(draft && !draft.correcting ? draft : null);
-    const source = photoSourceFromParams(params);
-    if (source) {
-      this.photo.set(source);
-      this.form.controls.method.setValue('photo');
-    }
-    this.followChanges();
-    this.followConnection();
     // A remembered or drafted accession is known before the list arrives: its site follows once it does.
     effect(() => {
       const accession = this.accession();
@@ -210,6 +204,12 @@ export class ReadingForm {
       if (plantId === null || !this.accessions.hasValue()) return;
       untracked(() => this.placeSheetPlant(plantId));
     });
+  }
+
+  ngOnInit(): void {
+    this.startFromAddress();
+    this.followChanges();
+    this.followConnection();
   }
 
   protected chooseMethod(method: ReadingMethod): void {
@@ -252,34 +252,19 @@ export class ReadingForm {
     }
     const body = readingRequest(this.form.getRawValue(), this.photo(), this.cut());
     const correcting = this.correctingId();
-    if (!correcting) {
-      // New readings go through the offline queue: sent at once when online, kept on the phone when not.
-      this.saving.set(true);
-      // A photo still on the phone goes by its local id; the queue uploads it first and its preview is the provisional colour.
-      const photo = this.photo();
-      const local = body.method === 'photo' ? photo?.localPhotoId : undefined;
-      const queued: QueuedReadingBody = local && photo ? { ...body, photo: { localPhotoId: local, region: photo.region, ...(photo.neutral ? { neutral: { region: photo.neutral } } : {}) } } : body;
-      const names = { accession: this.accession(), character: this.character(), method: METHOD_WORDS[body.method].label, plant: this.plants().find((p) => p.id === body.plantId) ?? null };
-      (local ? this.queue.photo(local).then((p) => p?.preview ?? null) : Promise.resolve(null))
-        .then((preview) => {
-          this.queuedPreview.set(preview?.lab ?? null);
-          return this.queue.submitReading(queued, readingSummary(queued, names, this.chips.set(), preview));
-        })
-        .then(
-          (result) => (result.queued ? this.savedOnPhone(queued) : this.savedAs(result.reading)),
-          (error: unknown) => this.refused(error),
-        );
+    this.saving.set(true);
+    if (correcting) {
+      this.saveFlow
+        .saveCorrection(correcting, body, this.form.controls.reason.value!.trim())
+        .pipe(takeUntilDestroyed(this.destroyRef))
+        .subscribe({ next: (reading) => this.savedAs(reading), error: (error: unknown) => this.refused(error) });
       return;
     }
-    this.saveKey ??= newIdempotencyKey();
-    const request = correcting
-      ? this.readings.supersede(correcting, { ...body, reason: this.form.controls.reason.value!.trim() }, this.saveKey)
-      : this.readings.create(body, this.saveKey);
-    this.saving.set(true);
-    request.pipe(takeUntilDestroyed(this.destroyRef)).subscribe({
-      next: (reading) => this.savedAs(reading),
-      error: (error: unknown) => this.refused(error),
-    });
+    const names = { accession: this.accession(), character: this.character(), method: METHOD_WORDS[body.method].label, plant: this.plants().find((p) => p.id === body.plantId) ?? null };
+    this.saveFlow.saveNew(body, this.photo(), names).then(
+      (outcome) => (outcome.queued ? this.savedOnPhone(outcome.body, outcome.preview) : this.savedAs(outcome.reading)),
+      (error: unknown) => this.refused(error),
+    );
   }
 
   /** Keeps accession, character, light and site for the next plant of the row; the rest starts empty. */
@@ -301,7 +286,7 @@ export class ReadingForm {
   }
 
   private savedAs(reading: ReadingDetail): void {
-    this.saveKey = null;
+    this.saveFlow.done();
     this.rememberChoices();
     this.drafts.drop();
     this.saving.set(false);
@@ -310,8 +295,9 @@ export class ReadingForm {
   }
 
   /** Kept in the queue: the form is done with it, as after a save, and says where it waits and its provisional chip. */
-  private savedOnPhone(body: QueuedReadingBody): void {
+  private savedOnPhone(body: QueuedReadingBody, preview: LabTuple | null): void {
     this.queuedBody.set(body);
+    this.queuedPreview.set(preview);
     // The chips come from this phone's cache when it has them; without them the screen says the server will match.
     this.chips.load();
     this.rememberChoices();
@@ -335,6 +321,21 @@ export class ReadingForm {
   private rememberChoices(): void {
     const v = this.form.getRawValue();
     this.memory.remember({ accessionId: v.accessionId, characterId: v.characterId, light: v.light, method: v.method, instrument: v.instrument, illuminant: v.illuminant });
+  }
+
+  /** A correction, a plant sheet's next character, or a new reading (the draft or the last choices); a photo region on top. */
+  private startFromAddress(): void {
+    const correct = positiveId(this.correct());
+    const sheetPlant = positiveId(this.sheet());
+    const draft = this.drafts.read<KeptDraft>();
+    if (correct) this.startCorrection(correct, draft?.correcting === correct ? draft : null);
+    else if (sheetPlant) this.startFromSheet(sheetPlant, positiveId(this.characterParam()), draft);
+    else this.restore(draft && !draft.correcting ? draft : null);
+    const source = photoSourceFromParams({ photo: this.photoParam(), localPhoto: this.localPhoto(), region: this.region(), card: this.cardParam() });
+    if (source) {
+      this.photo.set(source);
+      this.form.controls.method.setValue('photo');
+    }
   }
 
   /** Opened from a plant sheet: the plant and character from the link, method, light and instrument from the last reading. */
@@ -462,7 +463,7 @@ export class ReadingForm {
       else if (accession) c.siteId.setValue(accession.siteId);
     });
     this.form.valueChanges.pipe(takeUntilDestroyed(this.destroyRef)).subscribe(() => {
-      this.saveKey = null;
+      this.saveFlow.answersChanged();
       if (!this.saved()) this.keepDraft();
     });
   }
