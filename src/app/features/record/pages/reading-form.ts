@@ -18,7 +18,7 @@ import { ChipCatalogue } from '../../../shared/chips/chip-catalogue';
 import { applyFieldErrors } from '../../../core/http/field-errors';
 import { CollectionApi } from '../../../shared/collection/collection-api';
 import { ProgressSummary } from '../../../shared/collection/progress-summary';
-import { CUT_SECONDS_WARN, ILLUMINANT_LABELS, INSTRUMENT_ILLUMINANTS, LIGHTS, READING_METHODS, type InstrumentIlluminant, type ReadingDetail, type ReadingMethod } from '../../../../../shared/api/reading-answers.js';
+import { CUT_SECONDS_WARN, INSTRUMENT_ILLUMINANTS, LIGHTS, READING_METHODS, type InstrumentIlluminant, type ReadingDetail, type ReadingMethod } from '../../../../../shared/api/reading-answers.js';
 import { labD50ToD65 } from '../../../../../shared/colour/chromatic-adaptation.js';
 import { ReadingMatch } from '../../../shared/readings/reading-match';
 import { ReadingsApi } from '../../../shared/readings/readings-api';
@@ -28,7 +28,7 @@ import { AccessionPicker } from '../components/accession-picker';
 import { CharacterPicker } from '../components/character-picker';
 import { ChipPicker } from '../components/chip-picker';
 import { CutTimer } from '../components/cut-timer';
-import { LabFields } from '../components/lab-fields';
+import { InstrumentPanel } from '../components/instrument-panel';
 import { LabelScanner } from '../components/label-scanner';
 import { MatchPreview } from '../components/match-preview';
 import { parseHex } from '../../../../../shared/colour/parse.js';
@@ -78,7 +78,7 @@ const LEAF_CHOICES = ['2nd open leaf', '3rd open leaf', '4th open leaf'] as cons
     CharacterPicker,
     ChipPicker,
     CutTimer,
-    LabFields,
+    InstrumentPanel,
     LabelScanner,
     LocalDateTimePipe,
     MatchPreview,
@@ -127,8 +127,6 @@ export class ReadingForm implements OnInit {
   protected readonly form = buildReadingForm();
   protected readonly methods = READING_METHODS;
   protected readonly lights = LIGHTS;
-  protected readonly illuminants = INSTRUMENT_ILLUMINANTS;
-  protected readonly illuminantLabels = ILLUMINANT_LABELS;
   protected readonly methodWords = METHOD_WORDS;
   protected readonly lightWords = LIGHT_WORDS;
   protected readonly leafChoices = LEAF_CHOICES;
@@ -168,7 +166,6 @@ export class ReadingForm implements OnInit {
   private readonly formValue = computed(() => (this.value(), this.form.getRawValue()));
   protected readonly method = computed(() => this.formValue().method);
   protected readonly formValueLight = computed(() => this.formValue().light);
-  protected readonly formValueIlluminant = computed(() => this.formValue().illuminant);
   protected readonly accession = computed<Accession | null>(() => this.accessionById(this.formValue().accessionId));
   protected readonly plants = computed<Plant[]>(() => this.accession()?.plants ?? []);
   protected readonly character = computed(() => (this.characters.hasValue() ? (this.characters.value().find((c) => c.id === this.formValue().characterId) ?? null) : null));
@@ -227,10 +224,6 @@ export class ReadingForm implements OnInit {
 
   protected chooseLight(light: (typeof LIGHTS)[number]): void {
     this.form.controls.light.setValue(light);
-  }
-
-  protected chooseIlluminant(illuminant: InstrumentIlluminant): void {
-    this.form.controls.illuminant.setValue(illuminant);
   }
 
   protected chooseLeaf(leaf: string): void {
