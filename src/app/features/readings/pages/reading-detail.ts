@@ -10,11 +10,12 @@ import { EarlierReadings } from '../../../shared/readings/earlier-readings';
 import { cutWarning, limitWords } from '../../../shared/readings/cut-clock';
 import { PhotoCrop } from '../../../shared/photos/photo-crop';
 import { ReadingMatch } from '../../../shared/readings/reading-match';
-import { CUT_SECONDS_WARN, ILLUMINANT_LABELS, type ReadingDetail } from '../../../../../shared/api/reading-answers.js';
-import { LIGHT_WORDS, METHOD_WORDS, STATUS_WORDS, wordsFor } from '../../../shared/readings/reading-words';
+import { CUT_SECONDS_WARN, type ReadingDetail } from '../../../../../shared/api/reading-answers.js';
+import { METHOD_WORDS, STATUS_WORDS, wordsFor } from '../../../shared/readings/reading-words';
 import { ReadingsApi } from '../../../shared/readings/readings-api';
 import { ageWords, correctionText } from '../data/provenance-words';
 import { LocalDateTimePipe } from '../../../core/format/local-date-time';
+import { LightFacts } from '../../../shared/readings/light-facts';
 
 /** Roles that may correct anybody's reading; others only their own (issue 5, item 2). */
 const CORRECTS_ANY = 'admin';
@@ -26,7 +27,7 @@ const CORRECTS_ANY = 'admin';
  */
 @Component({
   selector: 'hl-reading-detail',
-  imports: [EarlierReadings, LocalDateTimePipe, MatButtonModule, MatIconModule, MatProgressSpinnerModule, PhotoCrop, ReadingMatch, RouterLink],
+  imports: [LightFacts, EarlierReadings, LocalDateTimePipe, MatButtonModule, MatIconModule, MatProgressSpinnerModule, PhotoCrop, ReadingMatch, RouterLink],
   templateUrl: './reading-detail.html',
   styleUrl: './reading-detail.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -40,8 +41,6 @@ export class ReadingDetailPage {
 
   protected readonly reading = rxResource({ params: () => this.id(), stream: ({ params }) => this.api.get(params) });
   protected readonly methodWords = METHOD_WORDS;
-  protected readonly lightWords = LIGHT_WORDS;
-  protected readonly illuminantLabels = ILLUMINANT_LABELS;
   protected readonly statusWords = STATUS_WORDS;
   protected readonly wordsFor = wordsFor;
   protected readonly ageWords = ageWords;

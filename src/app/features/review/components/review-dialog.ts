@@ -13,14 +13,15 @@ import { ApiError } from '../../../core/http/api-error';
 import { EarlierReadings } from '../../../shared/readings/earlier-readings';
 import { PhotoCrop } from '../../../shared/photos/photo-crop';
 import { ReadingMatch } from '../../../shared/readings/reading-match';
-import { LIGHT_WORDS, METHOD_WORDS, STATUS_WORDS, wordsFor } from '../../../shared/readings/reading-words';
+import { METHOD_WORDS, STATUS_WORDS, wordsFor } from '../../../shared/readings/reading-words';
 import { ReadingsApi } from '../../../shared/readings/readings-api';
-import { CUT_SECONDS_WARN, ILLUMINANT_LABELS, type ReadingDetail } from '../../../../../shared/api/reading-answers.js';
+import { CUT_SECONDS_WARN, type ReadingDetail } from '../../../../../shared/api/reading-answers.js';
 import { REVIEW_COMMENT_MAX, REVIEW_DECISION_LABELS, type ReviewAnswer, type ReviewDecision, type ReviewQueueQuery } from '../../../../../shared/api/review-answers.js';
 import { DECISION_KEYS, decisionForKey } from '../data/review-keys';
 import { ReviewsApi } from '../data/reviews-api';
 import { LocalDateTimePipe } from '../../../core/format/local-date-time';
 import { ProblemNotice } from '../../../shared/problem-notice';
+import { LightFacts } from '../../../shared/readings/light-facts';
 
 /** What the queue page opens the dialog with. */
 export interface ReviewDialogData {
@@ -47,7 +48,7 @@ const COMMENT_LABELS: Record<Exclude<ReviewDecision, 'approve'>, { label: string
  */
 @Component({
   selector: 'hl-review-dialog',
-  imports: [ProblemNotice, EarlierReadings, LocalDateTimePipe, MatButtonModule, MatDialogModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressBarModule, PhotoCrop, ReactiveFormsModule, ReadingMatch, RouterLink],
+  imports: [LightFacts, ProblemNotice, EarlierReadings, LocalDateTimePipe, MatButtonModule, MatDialogModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressBarModule, PhotoCrop, ReactiveFormsModule, ReadingMatch, RouterLink],
   templateUrl: './review-dialog.html',
   styleUrl: './review-dialog.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -85,8 +86,6 @@ export class ReviewDialog {
   /** Corm flesh and sap brown after the cut (our own threshold, not a standard). */
   protected readonly cutWarn = CUT_SECONDS_WARN;
   protected readonly methodWords = METHOD_WORDS;
-  protected readonly lightWords = LIGHT_WORDS;
-  protected readonly illuminantLabels = ILLUMINANT_LABELS;
   protected readonly statusWords = STATUS_WORDS;
   protected readonly wordsFor = wordsFor;
 
