@@ -10,11 +10,12 @@ import { AuthApi } from '../../../core/auth/auth-api';
 import { ApiError } from '../../../core/http/api-error';
 import { PublicFrame } from '../components/public-frame';
 import { ProblemNotice } from '../../../shared/problem-notice';
+import { EmailField } from '../components/email-field';
 
 /** Ask for a password reset link by e-mail. The answer never says whether the address has an account. */
 @Component({
   selector: 'hl-forgot-password-page',
-  imports: [ProblemNotice, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, PublicFrame, ReactiveFormsModule, RouterLink],
+  imports: [EmailField, ProblemNotice, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, PublicFrame, ReactiveFormsModule, RouterLink],
   templateUrl: './forgot-password-page.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

@@ -54,6 +54,18 @@ describe('SignInPage', () => {
     expect(element.textContent).toContain('Enter your password.');
   });
 
+  it('should not send the form without an e-mail address, and say so', async () => {
+    await submit('', 'demo-pass-2026');
+    http.expectNone('/api/auth/login');
+    expect(element.textContent).toContain('Enter your e-mail address.');
+  });
+
+  it('should not send the form with something that is not an e-mail address, and say so', async () => {
+    await submit('not-an-address', 'demo-pass-2026');
+    http.expectNone('/api/auth/login');
+    expect(element.textContent).toContain('That is not an e-mail address.');
+  });
+
   it('should go to the returnUrl after signing in', async () => {
     const navigate = vi.spyOn(TestBed.inject(Router), 'navigateByUrl').mockResolvedValue(true);
     fixture.componentRef.setInput('returnUrl', '/admin/users');

@@ -11,11 +11,12 @@ import { ApiError } from '../../../core/http/api-error';
 import { PublicFrame } from '../components/public-frame';
 import { safeReturnUrl } from '../data/return-url';
 import { ProblemNotice } from '../../../shared/problem-notice';
+import { EmailField } from '../components/email-field';
 
 /** Sign in with e-mail and password, then go where the person was heading. */
 @Component({
   selector: 'hl-sign-in-page',
-  imports: [ProblemNotice, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, PublicFrame, ReactiveFormsModule, RouterLink],
+  imports: [EmailField, ProblemNotice, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, PublicFrame, ReactiveFormsModule, RouterLink],
   templateUrl: './sign-in-page.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
