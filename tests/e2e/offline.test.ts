@@ -122,7 +122,9 @@ describe('offline on a phone: cached app, queued readings, sent once back in ran
     await page.getByRole('radio', { name: /Chip by eye/ }).click();
     await page.locator('hl-chip-picker .families hl-swatch-grid button.chip').nth(20).click();
     await page.locator('hl-chip-picker .fines-heading').waitFor();
-    await page.locator('hl-chip-picker hl-swatch-grid').first().locator('button.chip').nth(2).click();
+    // A fine chip of that field chip, and wait until the picker shows it chosen.
+    await page.locator('hl-chip-picker .fines-heading + hl-swatch-grid button.chip').nth(2).click();
+    await page.locator('hl-chip-picker .fines-heading + hl-swatch-grid button.chip[aria-pressed=true]').waitFor();
     const picked = (await page.locator('hl-chip-picker .chosen-row').innerText()).match(/F-\d{3}\.\d{3}/)?.[0];
     assert.ok(picked, 'a fine chip is chosen');
     // The instrument before asked no light; a chip read by eye does.

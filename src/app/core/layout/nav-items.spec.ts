@@ -4,7 +4,7 @@ const paths = (items: NavItem[]) => items.map((item) => item.path);
 
 describe('nav items', () => {
   it('should show an admin every built section', () => {
-    expect(paths(navItemsFor('admin'))).toEqual(['/record', '/queue', '/readings', '/drift', '/review', '/collection', '/calibration', '/reference-set', '/admin/users', '/admin/outbox', '/admin/api-tokens', '/admin/audit', '/account']);
+    expect(paths(navItemsFor('admin'))).toEqual(['/record', '/queue', '/readings', '/drift', '/review', '/collection', '/calibration', '/reference-set', '/admin/users', '/admin/outbox', '/admin/api-tokens', '/admin/walk-order', '/admin/audit', '/account']);
   });
 
   it('should hide the admin section from a recorder', () => {
@@ -50,7 +50,7 @@ describe('nav items', () => {
   it('should gather the admin entries under one Admin heading', () => {
     const sections = navSectionsFor('admin');
     expect(sections.map((section) => section.heading)).toEqual([null, 'Admin', null]);
-    expect(paths(sections[1].items)).toEqual(['/admin/users', '/admin/outbox', '/admin/api-tokens', '/admin/audit']);
+    expect(paths(sections[1].items)).toEqual(['/admin/users', '/admin/outbox', '/admin/api-tokens', '/admin/walk-order', '/admin/audit']);
   });
 
   it('should show a newly added entry only to its roles', () => {
