@@ -6,11 +6,9 @@ export const TEST_SITES: Site[] = [
   { id: 2, code: 'HTG', name: 'Hobbenvale Trial Garden', timezone: 'Asia/Bangkok', latitude: null, longitude: null, elevationM: null, seasons: [] },
 ];
 
-export const TEST_ACCESSIONS: Accession[] = [
-  {
-    id: 1,
-    accessionNumber: 'HL-0001',
-    name: 'Purple Dawn',
+/** An invented accession with empty passport fields; `overrides` sets what a spec needs. */
+export function testAccession(overrides: Partial<Accession> & Pick<Accession, 'id' | 'accessionNumber' | 'name'>): Accession {
+  return {
     otherNames: [],
     instituteCode: null,
     genus: 'Colocasia',
@@ -27,11 +25,21 @@ export const TEST_ACCESSIONS: Accession[] = [
     donorName: null,
     remarks: null,
     siteId: 1,
+    plants: [],
+    ...overrides,
+  };
+}
+
+export const TEST_ACCESSIONS: Accession[] = [
+  testAccession({
+    id: 1,
+    accessionNumber: 'HL-0001',
+    name: 'Purple Dawn',
     plants: [
       { id: 11, accessionId: 1, siteId: 1, label: 'P1', plantedOn: '2025-01-20' },
       { id: 12, accessionId: 1, siteId: 2, label: 'P2', plantedOn: '2025-06-02' },
     ],
-  },
+  }),
 ];
 
 const CAUTION = 'Wear gloves and never taste raw tissue.';

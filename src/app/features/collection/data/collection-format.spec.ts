@@ -1,4 +1,5 @@
 import type { Accession, Site } from '../../../../../shared/api/collection-answers.js';
+import { testAccession } from '../../../shared/testing/collection-fixtures';
 import { accessionRows, matchAccessions, seasonLabel, seasonsLabel, sortAccessions } from './collection-format';
 
 const site: Site = {
@@ -16,28 +17,14 @@ const site: Site = {
 };
 
 function accession(id: number, accessionNumber: string, name: string, plants = 0): Accession {
-  return {
+  return testAccession({
     id,
     accessionNumber,
     name,
     otherNames: id === 1 ? ['Dusk Stem', 'Red Ring'] : [],
-    instituteCode: null,
-    genus: 'Colocasia',
-    species: 'esculenta',
-    speciesAuthor: '(L.) Schott',
-    cropName: 'taro',
-    originCountry: null,
-    collectingSite: null,
-    collectingLatitude: null,
-    collectingLongitude: null,
-    collectingElevationM: null,
-    acquisitionDate: null,
-    sampleStatus: null,
-    donorName: null,
-    remarks: null,
     siteId: 7,
     plants: Array.from({ length: plants }, (_, i) => ({ id: i, accessionId: id, siteId: 7, label: `P${i}`, plantedOn: '2025-01-01' })),
-  };
+  });
 }
 
 describe('collection formatting', () => {

@@ -1,30 +1,10 @@
 import type { Accession } from '../../../../../shared/api/collection-answers.js';
+import { testAccession } from '../../../shared/testing/collection-fixtures';
 import { filterAccessions, readLabel } from './label-text';
 
 /** Invented accessions, as the demo's: numbers that prefix one another on purpose. */
 function accession(id: number, accessionNumber: string, name: string, plants: string[] = [], otherNames: string[] = []): Accession {
-  return {
-    id,
-    accessionNumber,
-    name,
-    otherNames,
-    instituteCode: null,
-    genus: 'Colocasia',
-    species: 'esculenta',
-    speciesAuthor: '(L.) Schott',
-    cropName: 'taro',
-    originCountry: null,
-    collectingSite: null,
-    collectingLatitude: null,
-    collectingLongitude: null,
-    collectingElevationM: null,
-    acquisitionDate: null,
-    sampleStatus: null,
-    donorName: null,
-    remarks: null,
-    siteId: 1,
-    plants: plants.map((label, i) => ({ id: id * 10 + i, accessionId: id, siteId: 1, label, plantedOn: '2025-01-20' })),
-  };
+  return testAccession({ id, accessionNumber, name, otherNames, plants: plants.map((label, i) => ({ id: id * 10 + i, accessionId: id, siteId: 1, label, plantedOn: '2025-01-20' })) });
 }
 
 const LIST = [
