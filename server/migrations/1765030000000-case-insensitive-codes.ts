@@ -12,6 +12,18 @@ export class CaseInsensitiveCodes1765030000000 implements MigrationInterface {
     name = 'CaseInsensitiveCodes1765030000000'
 
     public async up(queryRunner: QueryRunner): Promise<void> {
+        // A database written before the API refused such pairs may hold some: name them, rather than
+        // stopping on SQLite's bare "UNIQUE constraint failed", so an admin knows which to rename.
+        const clashes: string[] = [];
+        for (const [table, column, what] of [['accession', 'accessionNumber', 'accession numbers'], ['site', 'code', 'site codes']] as const) {
+            const rows: { ids: string; values: string }[] = await queryRunner.query(
+                `SELECT GROUP_CONCAT("id", ', ') AS ids, GROUP_CONCAT("${column}", ', ') AS "values" FROM "${table}" GROUP BY LOWER("${column}") HAVING COUNT(*) > 1`,
+            );
+            for (const row of rows) clashes.push(`${what} ${row.values} (ids ${row.ids}) differ only in letter case`);
+        }
+        if (clashes.length) {
+            throw new Error(`Cannot make accession numbers and site codes unique regardless of case: ${clashes.join('; ')}. Rename all but one of each, then start again.`);
+        }
         await queryRunner.query(`CREATE UNIQUE INDEX "IDX_accession_number_lower" ON "accession" (LOWER("accessionNumber"))`);
         await queryRunner.query(`CREATE UNIQUE INDEX "IDX_site_code_lower" ON "site" (LOWER("code"))`);
     }

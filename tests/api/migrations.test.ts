@@ -7,6 +7,7 @@ import { seedCharacterCatalogue, seedDescriptorCatalogue } from '../../server/co
 import { openDatabase } from '../../server/data-source.js';
 import { seedDemo } from '../../server/demo/seed-demo.js';
 import { InstrumentIlluminant1765000000000 } from '../../server/migrations/1765000000000-instrument-illuminant.js';
+import { CaseInsensitiveCodes1765030000000 } from '../../server/migrations/1765030000000-case-insensitive-codes.js';
 import { loadReferenceSets } from '../../server/reference-sets/load-reference-sets.js';
 
 test('should leave no difference between the migrated schema and the entities', async () => {
@@ -68,6 +69,31 @@ test('should rebuild the reading table (light made nullable) on a database full 
     assert.deepEqual(await ds.query('PRAGMA foreign_key_check'), []);
     const pending = await ds.driver.createSchemaBuilder().log();
     assert.deepEqual(pending.upQueries.map((q) => q.query), [], 'the rebuilt table still matches the entity, indexes included');
+  } finally {
+    await ds.destroy();
+    rmSync(dir, { recursive: true, force: true });
+  }
+});
+
+test('should refuse, naming the rows, to make codes case-insensitive unique where an older database already holds a pair', async () => {
+  const dir = mkdtempSync(path.join(tmpdir(), 'hueledger-migrations-'));
+  const ds = await openDatabase(path.join(dir, 'hueledger.sqlite'));
+  try {
+    // Undo the migration, write two accession numbers that differ only in case (as an older API let
+    // through), then run it again: it stops with both numbers named and creates no index.
+    const migration = new CaseInsensitiveCodes1765030000000();
+    const runner = ds.createQueryRunner();
+    await migration.down(runner);
+    await ds.query(`INSERT INTO "site" ("code", "name", "timezone") VALUES ('TST', 'Invented test plot', 'UTC')`);
+    await ds.query(`INSERT INTO "accession" ("accessionNumber", "name", "otherNames", "siteId") VALUES ('HL-0001', 'Invented A', '[]', 1), ('hl-0001', 'Invented B', '[]', 1)`);
+    await assert.rejects(() => migration.up(runner), /accession numbers HL-0001, hl-0001 \(ids 1, 2\) differ only in letter case/);
+    const indexes = (await ds.query(`SELECT name FROM sqlite_master WHERE type = 'index' AND name LIKE 'IDX_%_lower'`)) as { name: string }[];
+    assert.deepEqual(indexes, []);
+    // Renamed, the same migration goes through.
+    await ds.query(`UPDATE "accession" SET "accessionNumber" = 'HL-0002' WHERE "id" = 2`);
+    await migration.up(runner);
+    await runner.release();
+    assert.equal(((await ds.query(`SELECT COUNT(*) AS n FROM sqlite_master WHERE type = 'index' AND name LIKE 'IDX_%_lower'`)) as { n: number }[])[0]!.n, 2);
   } finally {
     await ds.destroy();
     rmSync(dir, { recursive: true, force: true });
