@@ -221,7 +221,7 @@ describe('a trainer runs a calibration session with three observers', () => {
     await trainer.getByRole('dialog').getByText('Close this session?').waitFor();
     await trainer.getByRole('dialog').getByRole('button', { name: 'Close session' }).click();
     await trainer.getByText(/Session closed: \d+ observers? certified/).waitFor();
-    await trainer.getByText(/Closed on \d{4}-\d{2}-\d{2}: results are frozen/).waitFor();
+    await trainer.getByText(/Closed on [A-Z][a-z]{2} \d{1,2}, \d{4}: results are frozen/).waitFor();
     await trainer.locator('th', { hasText: 'Certified' }).waitFor();
 
     for (const [i, o] of observers.entries()) {
