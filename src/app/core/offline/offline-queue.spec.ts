@@ -5,7 +5,7 @@ import { of } from 'rxjs';
 import type { UserSummary } from '../../../../shared/api/auth.js';
 import { AuthStore } from '../auth/auth-store';
 import { ApiError } from '../http/api-error';
-import { IS_ONLINE, OfflineQueue, QUEUE_TRANSPORT } from './offline-queue';
+import { IS_ONLINE, OfflineQueue, QUEUE_TRANSPORT, RECONNECT_RETRY_MS } from './offline-queue';
 import { MemoryQueueStorage, QUEUE_STORAGE } from './queue-storage';
 import { noConnection, pendingReading, refusedAccession, ScriptedTransport } from './testing/queue-fakes';
 
@@ -97,6 +97,28 @@ describe('OfflineQueue', () => {
     await queue.discard(queue.items()[0]!.id);
     expect(queue.pending()).toBe(0);
     expect(await storage.photos()).toEqual([]);
+  });
+
+  it('should try again seconds after an online event when the server cannot be reached yet, not only on the half-minute tick', async () => {
+    vi.useFakeTimers();
+    try {
+      online = false;
+      await queue.submitReading(body, summary);
+      online = true;
+      transport.online = false;
+      queue.start();
+      window.dispatchEvent(new Event('online'));
+      await vi.advanceTimersByTimeAsync(100);
+      expect(transport.readingCalls).toEqual([]);
+      // The connection carries requests a moment later: the first quick retry sends the reading.
+      transport.online = true;
+      await vi.advanceTimersByTimeAsync(RECONNECT_RETRY_MS[0]);
+      expect(transport.readingCalls.length).toBe(1);
+      expect(queue.pending()).toBe(0);
+    } finally {
+      TestBed.resetTestingModule();
+      vi.useRealTimers();
+    }
   });
 
   it('should refuse to queue when nobody is signed in', async () => {

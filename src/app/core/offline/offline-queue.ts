@@ -18,6 +18,13 @@ export const IS_ONLINE = new InjectionToken<() => boolean>('IS_ONLINE', { provid
 /** How often due items are retried while the app is open (our own: each item's backoff decides whether it goes). */
 const TICK_MS = 30_000;
 
+/**
+ * After the browser's `online` event, when the server cannot be reached yet, try again after these
+ * waits before leaving it to the half-minute tick (our own: a phone that re-joins a network often
+ * reports "online" a few seconds before requests get through).
+ */
+export const RECONNECT_RETRY_MS = [2_000, 5_000, 10_000] as const;
+
 /** What `submitReading` resolves with: the server's answer, or word that it waits in the queue. */
 export type SubmitResult = { queued: false; reading: ReadingDetail } | { queued: true; id: string };
 
@@ -31,7 +38,8 @@ export interface NewPhoto {
 
 /**
  * The offline queue: readings and photos saved on the phone first, sent when the server can be
- * reached (at start, on the browser's `online` event, every half minute while items are due, and
+ * reached (at start, on the browser's `online` event and again 2, 5 and 10 s later while the server
+ * is not reachable yet, every half minute while items are due, and
  * on "Send now"), each with its idempotency key so a resend never stores a reading twice.
  */
 @Injectable({ providedIn: 'root' })
@@ -170,11 +178,22 @@ export class OfflineQueue {
   }
 
   private tick: ReturnType<typeof setInterval> | null = null;
-  private readonly onOnline = () => void this.send({ force: true });
+  private readonly onOnline = () => void this.sendAfterReconnect();
+
+  /** Sends at once on `online`; if the server is not reachable yet, again a few seconds later. */
+  private async sendAfterReconnect(): Promise<void> {
+    if ((await this.send({ force: true })).offline === false) return;
+    for (const wait of RECONNECT_RETRY_MS) {
+      await new Promise((resolve) => setTimeout(resolve, wait));
+      if (!this.started || this.readingList().length + this.photoList().length === 0) return;
+      if ((await this.send({ force: true })).offline === false) return;
+    }
+  }
 
   private stop(): void {
     if (typeof window !== 'undefined') window.removeEventListener('online', this.onOnline);
     if (this.tick) clearInterval(this.tick);
+    this.started = false;
   }
 
   /** Sends what is due, if anything is and somebody is signed in. */
