@@ -23,6 +23,8 @@ interface PairSummary {
 
 /** Below this many readings to analyse, worker threads cost more to wake than they save (our own measure). */
 const WORKER_MIN_READINGS = 20_000;
+/** Batches the readings are read in when workers analyse them (our own choice: on 2 cores 1 and 4 batches measured alike, 7–9× the floor; more cores overlap more). */
+const FETCH_BATCHES = 4;
 
 /** The overview of one app: its cache of pair flags and, optionally, a worker pool. */
 export class DriftOverview {
@@ -61,9 +63,8 @@ export class DriftOverview {
     const live = summaries.filter((s) => thresholds.get(s.characterId)?.colour);
     const stale = live.filter((s) => this.cache.get(keyOf(s))?.signature !== signatureOf(s));
 
-    const inputs = await this.inputsOf(stale, thresholds);
-    const total = inputs.reduce((sum, p) => sum + p.l.length, 0);
-    const results = this.pool && total >= WORKER_MIN_READINGS ? await this.pool.run(inputs) : inputs.map(pairFlags);
+    const total = stale.reduce((sum, s) => sum + Number(s.n), 0);
+    const results = this.pool && total >= WORKER_MIN_READINGS ? await this.inWorkers(this.pool, stale, thresholds) : (await this.inputsOf(stale, thresholds)).map(pairFlags);
     for (const [i, s] of stale.entries()) this.cache.set(keyOf(s), { signature: signatureOf(s), flags: results[i]! });
     const liveKeys = new Set(live.map(keyOf));
     for (const key of this.cache.keys()) if (!liveKeys.has(key)) this.cache.delete(key);
@@ -86,8 +87,26 @@ export class DriftOverview {
     return `${r.n}|${r.maxId}|${r.superseded}|${c.t}`;
   }
 
-  /** The readings of the stale pairs, in one query per batch of pairs, as plain columns. */
-  private async inputsOf(stale: readonly PairSummary[], thresholds: ReadonlyMap<number, { threshold: number }>): Promise<PairInput[]> {
+  /**
+   * The stale pairs analysed in the worker threads. Their readings are read in a few batches of
+   * accessions, each handed to the workers as soon as it is read, so the workers analyse one batch
+   * while this thread reads the next (reading 100,000 rows costs about as much as analysing them).
+   */
+  private async inWorkers(pool: DriftPool, stale: readonly PairSummary[], thresholds: ReadonlyMap<number, { threshold: number }>): Promise<PairFlags[]> {
+    const accessions = [...new Set(stale.map((s) => s.accessionId))].sort((x, y) => x - y);
+    const per = Math.ceil(accessions.length / FETCH_BATCHES);
+    const runs: Promise<PairFlags[]>[] = [];
+    for (let i = 0; i < accessions.length; i += per) {
+      const range: [number, number] = [accessions[i]!, accessions[Math.min(i + per, accessions.length) - 1]!];
+      const batch = stale.filter((s) => s.accessionId >= range[0] && s.accessionId <= range[1]);
+      runs.push(pool.run(await this.inputsOf(batch, thresholds, range)));
+    }
+    const byKey = new Map((await Promise.all(runs)).flat().map((r) => [r.key, r]));
+    return stale.map((s) => byKey.get(keyOf(s))!);
+  }
+
+  /** The readings of the stale pairs (of accessions in `range`, when given), as plain columns. */
+  private async inputsOf(stale: readonly PairSummary[], thresholds: ReadonlyMap<number, { threshold: number }>, range?: readonly [number, number]): Promise<PairInput[]> {
     if (!stale.length) return [];
     const wanted = new Set(stale.map(keyOf));
     const byKey = new Map<string, PairInput>(
@@ -98,8 +117,9 @@ export class DriftOverview {
     // per row, which dominates a 100,000-row read), with the instant as epoch milliseconds from
     // SQLite's julianday (TypeORM stores "YYYY-MM-DD HH:MM:SS.SSS" UTC text).
     const columns = `"accessionId", "characterId", "siteId", "l", "a", "b", "season", "seasonYear", ${OBSERVED_AT_MS_SQL}`;
-    const rows: RawRow[] =
-      stale.length > 50
+    const rows: RawRow[] = range
+      ? rawRows<RawRow>(this.ds, `SELECT ${columns} FROM "reading" WHERE "accessionId" BETWEEN ? AND ? AND "supersededById" IS NULL ORDER BY "observedAt", "id"`, range)
+      : stale.length > 50
         ? rawRows<RawRow>(this.ds, `SELECT ${columns} FROM "reading" WHERE "supersededById" IS NULL ORDER BY "observedAt", "id"`)
         : stale.flatMap((s) =>
             rawRows<RawRow>(this.ds, `SELECT ${columns} FROM "reading" WHERE "accessionId" = ? AND "characterId" = ? AND +"supersededById" IS NULL ORDER BY "observedAt", "id"`, [s.accessionId, s.characterId]),
