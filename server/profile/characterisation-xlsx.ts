@@ -35,6 +35,7 @@ const COLOUR_COLUMNS: readonly Column<CharacterProfile>[] = [
   { header: 'chip name', width: 24, means: 'The chip\'s name in words.', value: (_, c) => c.chip.name },
   { header: 'chip ΔE00', width: 9, numFmt: '0.00', means: 'CIEDE2000 difference between the accepted colour and the chip (kL = kC = kH = 1).', value: (_, c) => c.chip.deltaE00 },
   { header: 'verdict', width: 16, means: `ΔE00 in words: ≤ ${PERCEPTIBILITY_THRESHOLD_DE00} indistinguishable, ≤ ${ACCEPTABILITY_THRESHOLD_DE00} close, else clearly different (Paravina et al. 2015).`, value: (_, c) => c.chip.verdict },
+  { header: 'chip in each set', width: 44, means: 'The accepted colour\'s nearest chip in every stored reference set, oldest version first: set, code, ΔE00. Codes of different sets never coincide, so v1 and v2 codes can stand side by side.', value: (_, c) => c.setChips.map((s) => `${s.setId} ${s.chip.code} (ΔE00 ${s.chip.deltaE00.toFixed(2)})`).join('; ') },
   { header: 'spread ΔE00', width: 10, numFmt: '0.00', means: 'Mean ΔE00 of the basis readings from the accepted colour.', value: (_, c) => c.spreadDeltaE00 },
   { header: 'readings', width: 9, numFmt: '0', means: 'Readings the accepted colour rests on.', value: (_, c) => c.nReadings },
   { header: 'readings in force', width: 9, numFmt: '0', means: 'Readings not superseded, of any review status.', value: (_, c) => c.nCurrent },

@@ -188,6 +188,10 @@ describe('the characterisation record of an accession', () => {
     const rows = colours.getSheetValues().slice(2).map((r) => Object.fromEntries(header.map((h, i) => [h, (r as unknown[])[i + 1]])));
     const mine = rows.find((r) => r['accession'] === 'PW-0001' && r['character'] === 'petiole.profile.example') ?? assert.fail('a row for the worked example');
     assert.deepEqual([mine['L*'], mine['a*'], mine['b*'], mine['basis'], mine['readings'], mine['readings in force']], [51.25, 10.25, 5, 'approved', 2, 5]);
+    // The chip in v1 and in v2, as the record shows them.
+    const record = ((await reviewer.get(`/api/accessions/${ids.accession}/profile`).expect(200)).body as AccessionProfile).characters.find((x) => x.code === 'petiole.profile.example')!;
+    assert.equal(mine['chip in each set'], record.setChips.map((s) => `${s.setId} ${s.chip.code} (ΔE00 ${s.chip.deltaE00.toFixed(2)})`).join('; '));
+    assert.match(String(mine['chip in each set']), /^v1 F-\d{3}\.\d{3} \(ΔE00 \d+\.\d\d\); v2 F-\d{3}(\.\d{3})? \(ΔE00 \d+\.\d\d\)$/);
     const accessions = (await reviewer.get('/api/accessions').expect(200)).body as unknown[];
     assert.ok(new Set(rows.map((r) => r['accession'])).size >= accessions.length - 1, 'every accession with colour readings has rows');
     const about = book.getWorksheet('About')!.getSheetValues().map((r) => ((r as unknown[]) ?? []).slice(1).join(' ')).join('\n');
