@@ -184,6 +184,14 @@ describe('readings: create, list, detail', () => {
       });
     }
 
+    test('should say in words, not ISO dates, when a plant was planted after the reading', async () => {
+      const res = await recorder.post('/api/readings', instrumentBody(w, { plantId: w.violet.plants[1]!.id, observedAt: '2025-05-20T10:00:00-04:00' }));
+      const problem = assertProblem(res, 400);
+      const message = problem.errors!.find((e) => e.field === 'plantId')!.message;
+      assert.match(message, /^plant \S+ was planted on \d{1,2} [A-Z][a-z]{2} \d{4}, after this reading \(20 May 2025 at \S+\)$/);
+      assert.doesNotMatch(message, /\d{4}-\d{2}-\d{2}/);
+    });
+
     test('should name every unknown id at once', async () => {
       const res = await recorder.post('/api/readings', instrumentBody(w, { accessionId: 99998, characterId: 99997, plantId: null }));
       assertInvalidFields(res, 'accessionId', 'characterId');
