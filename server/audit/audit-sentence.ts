@@ -2,6 +2,8 @@
 // −7.40 to …, because …"), so the reading history and the Admin audit page read as a record, not
 // as stored JSON. Pure: the caller gives the actor's name.
 
+import { dayWords } from '../core/day-words.js';
+
 type Detail = Record<string, unknown> | null;
 
 const num = (v: unknown, digits = 2) => (typeof v === 'number' && Number.isFinite(v) ? v.toFixed(digits).replace('-', '−') : String(v));
@@ -10,17 +12,6 @@ const str = (v: unknown) => (typeof v === 'string' ? v : v === null || v === und
 const list = (v: unknown) => (Array.isArray(v) ? v.map(str).join(', ') : str(v));
 /** "accession:12" → "accession 12". */
 const subjectWords = (s: string | null) => (s ? s.replace(':', ' ') : 'something');
-/**
- * A calendar day ("2026-04-02") in the reader's language, in the app's date style (day, short
- * month, year; "2 Apr 2026" in en-GB, "Apr 2, 2026" in en-US), as the screens write every date;
- * anything else as it is. A language Intl does not know falls back to the runtime's own.
- */
-export function dayWords(v: unknown, locale?: string): string {
-  const m = typeof v === 'string' ? /^(\d{4})-(\d{2})-(\d{2})$/.exec(v) : null;
-  if (!m) return str(v);
-  const known = locale && Intl.DateTimeFormat.supportedLocalesOf([locale]).length ? locale : undefined;
-  return new Intl.DateTimeFormat(known, { year: 'numeric', month: 'short', day: 'numeric', timeZone: 'UTC' }).format(Date.UTC(Number(m[1]), Number(m[2]) - 1, Number(m[3])));
-}
 const changedFields = (d: Detail) => (d ? Object.keys(d).join(', ') : 'nothing named');
 
 const DECISION_WORDS: Record<string, string> = { approve: 'approved', flag: 'flagged', reread: 'asked for a re-read of' };

@@ -1,4 +1,5 @@
 import { calibrationSessionPath } from '../../shared/api/calibration-answers.js';
+import { serverDay } from '../core/day-words.js';
 import type { OutgoingMail } from '../mail/mailer.js';
 
 /** The mail every participant gets when a trainer closes a session: their own results are ready to read. */
@@ -10,7 +11,7 @@ export function resultsOutMail(to: string, name: string, title: string, heldOn: 
     text: [
       `Hello ${name},`,
       '',
-      `The calibration session "${title}" of ${heldOn} is closed, and your results are ready:`,
+      `The calibration session "${title}" of ${serverDay(heldOn)} is closed, and your results are ready:`,
       'for each specimen, the chip you picked beside the reference colour, your mean ΔE00,',
       'your bias in L*, a* and b*, and whether you met the session\'s thresholds.',
       '',
@@ -30,7 +31,7 @@ export function invitedMail(to: string, name: string, title: string, heldOn: str
     text: [
       `Hello ${name},`,
       '',
-      `You are invited to the calibration session "${title}" of ${heldOn}.`,
+      `You are invited to the calibration session "${title}" of ${serverDay(heldOn)}.`,
       'For each specimen laid out, pick the chip you see as nearest, under the light the trainer sets.',
       'Wear gloves when handling raw corm, leaf or sap, and never taste raw tissue.',
       '',

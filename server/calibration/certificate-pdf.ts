@@ -1,5 +1,6 @@
 import PDFDocument from 'pdfkit';
 import type { Certification } from '../../shared/api/calibration-answers.js';
+import { serverDay } from '../core/day-words.js';
 
 /**
  * A one-page A4 certificate: observer, session, date, the rules and the figures that met them, and
@@ -30,16 +31,16 @@ export function certificatePdf(cert: Certification): Promise<Buffer> {
   doc.moveDown();
   line('Observer', cert.name);
   line('Session', `"${cert.sessionTitle}" (session ${cert.sessionId})`);
-  line('Certified on', cert.certifiedOn);
-  line('Valid until', `${cert.validUntil}, unless a later session does not certify the observer`);
-  line('Status today', cert.status === 'current' ? 'current' : `lapsed on ${cert.lapsedOn}: ${cert.lapseReason}`);
+  line('Certified on', serverDay(cert.certifiedOn));
+  line('Valid until', `${serverDay(cert.validUntil)}, unless a later session does not certify the observer`);
+  line('Status today', cert.status === 'current' ? 'current' : `lapsed on ${serverDay(cert.lapsedOn ?? '')}: ${cert.lapseReason}`);
   doc.moveDown(0.5);
   doc.font('Helvetica-Bold').fontSize(13).text('Rules and figures');
   doc.moveDown(0.3);
   line('Group agreement (Fleiss\' kappa over field chips)', `${cert.kappa.toFixed(2)}, rule at least ${cert.thresholds.kappa}`);
   line('Observer\'s mean CIEDE2000 difference (dE00) from the references', `${cert.meanDeltaE00.toFixed(2)}, limit ${cert.thresholds.deltaE00}`);
   line('Specimens answered', `${cert.n}, every specimen of the session`);
-  line('Colour-vision screening (self-reported)', cert.screening ? `${cert.screening.result}, ${cert.screening.screenedOn}` : 'not recorded');
+  line('Colour-vision screening (self-reported)', cert.screening ? `${cert.screening.result}, ${serverDay(cert.screening.screenedOn)}` : 'not recorded');
   doc.moveDown();
   doc.font('Helvetica').fontSize(9).fillColor('#444444').text(
     `Certificate ${cert.id}, issued by Hueledger. Colours on screens and in print are approximate; the certificate covers judging colour under the session's viewing conditions only.`,

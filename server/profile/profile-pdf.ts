@@ -5,6 +5,7 @@
 import PDFDocument from 'pdfkit';
 import type { AccessionProfile, CharacterProfile, DescriptorSummary } from '../../shared/api/profile-answers.js';
 import { displayHex } from '../../shared/colour/display-hex.js';
+import { instantWords } from '../core/day-words.js';
 
 /** The caution every printed record carries. */
 export const RECORD_CAUTION =
@@ -45,7 +46,7 @@ export function profilePdf(profile: AccessionProfile, opts: { compress?: boolean
     .font('Helvetica')
     .fontSize(9)
     .fillColor('#333333')
-    .text(pdfText(`Reference set ${profile.referenceSet.id} (version ${profile.referenceSet.version}); CIELAB ${profile.referenceSet.white}, ${profile.referenceSet.observer} observer. Computed ${profile.computedAt.slice(0, 16).replace('T', ' ')} UTC.`), { width })
+    .text(pdfText(`Reference set ${profile.referenceSet.id} (version ${profile.referenceSet.version}); CIELAB ${profile.referenceSet.white}, ${profile.referenceSet.observer} observer. Computed ${instantWords(new Date(profile.computedAt))}.`), { width })
     .text(pdfText(`Accepted colour: the ${profile.statistic}. It rests on the approved readings once any are approved, else on every reading in force.`), { width })
     .moveDown(0.4);
   caution(doc, RECORD_CAUTION, width);

@@ -15,7 +15,7 @@ import { chipOf } from '../calibration/calibration-chips.js';
 import { Accession, Plant } from '../collection/accession.entity.js';
 import { Character } from '../collection/character.entity.js';
 import { Site } from '../collection/site.entity.js';
-import { dayWords } from '../audit/audit-sentence.js';
+import { serverDay } from '../core/day-words.js';
 import { AppError, type FieldError } from '../core/app-error.js';
 import type { PhotoFiles } from '../photos/photo-files.js';
 import { Photo } from '../photos/photo.entity.js';
@@ -172,7 +172,7 @@ export async function prepareReading(m: EntityManager, src: ColourSources, body:
   const eye = body.eyeChipCode ? chipOf(set, body.eyeChipCode, 'eyeChipCode') : null;
   const local = localDateOf(observedAt, site.timezone);
   // Days in words with the month named ("20 May 2025"): a refusal has no locale to follow, and an ISO date is not for people.
-  if (plant && plant.plantedOn > isoOfDate(local)) throw refuse([{ field: 'plantId', message: `plant ${plant.label} was planted on ${dayWords(plant.plantedOn, 'en-GB')}, after this reading (${dayWords(isoOfDate(local), 'en-GB')} at ${site.code})` }]);
+  if (plant && plant.plantedOn > isoOfDate(local)) throw refuse([{ field: 'plantId', message: `plant ${plant.label} was planted on ${serverDay(plant.plantedOn)}, after this reading (${serverDay(isoOfDate(local))} at ${site.code})` }]);
   const { season, seasonYear } = seasonOfDate(local, site.seasons);
   return {
     accessionId: accession.id,

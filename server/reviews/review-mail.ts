@@ -1,5 +1,6 @@
 import { readingUrl } from '../../shared/api/reading-answers.js';
 import type { NotificationKind, ReviewDecision } from '../../shared/api/review-answers.js';
+import { serverDay } from '../core/day-words.js';
 import type { OutgoingMail } from '../mail/mailer.js';
 
 /** What a review notice says about the reading it concerns. */
@@ -20,7 +21,7 @@ export function noticeKindOf(decision: ReviewDecision): NotificationKind | null 
 /** Which reading: the mail names the day it was observed; the in-app notice does not, since the app writes dates in each reader's own style beside it. */
 function what(r: ReviewedReading, withDay = true): string {
   const which = `${r.characterLabel} of ${r.accessionNumber} ${r.accessionName} at ${r.siteCode}`;
-  return withDay ? `${which}, observed ${r.observedAt.toISOString().slice(0, 10)}` : `reading ${r.id}, ${which}`;
+  return withDay ? `${which}, observed ${serverDay(r.observedAt.toISOString().slice(0, 10))}` : `reading ${r.id}, ${which}`;
 }
 
 /** The in-app notice's plain words: what the reviewer decided, on which reading, and their comment. */

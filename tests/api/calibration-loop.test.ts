@@ -121,7 +121,10 @@ describe('calibration results people can act on', () => {
     const body = res.body as Buffer;
     assert.equal(body.subarray(0, 5).toString('latin1'), '%PDF-');
     const text = pdfText(body);
-    for (const words of ['Observer A', 'Small group', `Valid until: ${cert.validUntil}`, 'rule at least 0.61', 'limit 1.8', `Certified on: ${cert.certifiedOn}`]) assert.ok(text.includes(words), `the PDF says "${words}"`);
+    // Days in words, day, short month, year (en-GB's style; the PDF has no reader's language), written here by Intl.
+    const day = (iso: string) => new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' }).format(new Date(`${iso}T00:00:00Z`));
+    for (const words of ['Observer A', 'Small group', `Valid until: ${day(cert.validUntil)}`, 'rule at least 0.61', 'limit 1.8', `Certified on: ${day(cert.certifiedOn)}`]) assert.ok(text.includes(words), `the PDF says "${words}"`);
+    assert.doesNotMatch(text, /\b\d{4}-\d{2}-\d{2}\b/, 'no ISO date in the certificate');
     await trainer.get(`/api/calibration/certifications/${cert.id}/certificate.pdf`).expect(200);
     assertProblem(await obs.C.client.get(`/api/calibration/certifications/${cert.id}/certificate.pdf`), 404);
   });
@@ -150,6 +153,7 @@ describe('calibration results people can act on', () => {
     assert.equal(mails.length, 1);
     assert.match(mails[0]!.text, new RegExp(`/calibration/sessions/${id}/take`));
     assert.match(mails[0]!.text, /gloves/);
+    assert.match(mails[0]!.text, /calibration session "Invited group" of 2 Apr 2026\./, 'the day in words, not ISO');
   });
 
   test('should lapse a certification when a later session does not certify the observer, and list current, lapsed and never-certified observers', async () => {

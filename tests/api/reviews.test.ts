@@ -133,6 +133,10 @@ describe('reviews, the queue and notices', () => {
       assert.match(mail.subject, /flagged/);
       assert.ok(mail.text.includes(`${PUBLIC_URL}/readings/${id}`), mail.text);
       assert.ok(mail.text.includes(FLAG), 'the mail carries the comment');
+      // The day observed in words (en-GB's style: a mail has no reader's language), never as an ISO date.
+      const observed = new Date(`${String(original['observedAt']).replace(' ', 'T')}Z`);
+      assert.ok(mail.text.includes(`observed ${new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' }).format(observed)}`), mail.text);
+      assert.doesNotMatch(mail.text, /\b\d{4}-\d{2}-\d{2}\b/);
       const notices = (await recorder.get('/api/notifications').expect(200)).body as NotificationList;
       const notice = notices.items.find((n) => n.readingId === id)!;
       assert.deepEqual([notice.kind, notice.readAt], ['reading-flagged', null]);
