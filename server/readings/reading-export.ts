@@ -91,6 +91,9 @@ export const EXPORT_COLUMNS: readonly ExportColumn[] = [
   { header: 'illuminant/observer', width: 10, value: (r) => r.illuminant },
   { header: 'reported L*a*b*', width: 20, value: (r) => (r.reportedLab ? r.reportedLab.join(' ') : null) },
   { header: 'photo id', width: 8, value: (r) => r.photoId },
+  // A region that split into colours: which one this reading took (1 = the largest share), of how many, and its share.
+  { header: 'photo colour', width: 9, value: (r) => (r.cluster ? `${r.cluster.index + 1} of ${r.cluster.of}` : null) },
+  { header: 'photo colour share', width: 9, numFmt: '0%', value: (r) => (r.cluster ? round(r.cluster.share, 3) : null) },
   { header: 'provenance link', width: 36, value: (r, url) => `${url}/readings/${r.id}` },
 ];
 

@@ -4,6 +4,7 @@
 // D65), nearest chips from the same exact search the Match page runs.
 import assert from 'node:assert/strict';
 import { randomUUID } from 'node:crypto';
+import { parse as parseCsv } from 'csv-parse/sync';
 import { after, before, describe, test } from 'node:test';
 import type { PhotoDto, PhotoSample } from '../../shared/api/photo-answers.js';
 import type { CreatedReadings, CreateReadingRequest, ReadingDetail } from '../../shared/api/reading-answers.js';
@@ -85,6 +86,12 @@ describe('POST /api/readings/batch: the colours of one region as readings of the
     assert.ok(Math.abs(ground!.provenance.cluster!.share - 0.75) < 0.02);
     assert.deepEqual(detail.provenance.region, REGION);
     assert.equal(detail.provenance.uniform, false);
+    // The readings export says the same: which colour of the region, of how many, and its share.
+    const csvOf = async (characterId: number) => parseCsv((await recorder.get(`/api/readings/export.csv?characterId=${characterId}`).expect(200)).text, { bom: true, columns: true }) as Record<string, string>[];
+    const rows = [...(await csvOf(ground!.characterId)), ...(await csvOf(stripe!.characterId))];
+    const exported = (id: number) => rows.find((r) => Number(r['id']) === id) ?? assert.fail(`reading ${id} is exported`);
+    assert.deepEqual([exported(ground!.id)['photo colour'], exported(stripe!.id)['photo colour']], ['1 of 2', '2 of 2']);
+    assert.ok(Math.abs(Number(exported(stripe!.id)['photo colour share']) - 0.25) < 0.02, exported(stripe!.id)['photo colour share']);
   });
 
   test('should keep a whole-region photo reading as the mean, with no colour index', async () => {
