@@ -171,6 +171,8 @@ function fromReading(r: Reading, part: ColourPart): Record<string, unknown> {
       light: r.light,
       reviewStatus: r.status,
       locationDbId: String(r.siteId),
+      // A photo region that split into colours: which one this reading took (1 = the largest share) and its share.
+      ...(r.cluster ? { photoColour: `${r.cluster.index + 1} of ${r.cluster.of}`, photoColourShare: r.cluster.share.toFixed(3) } : {}),
       ...(part === 'chip' ? { referenceSet: r.setId, chipName: r.bestChipName, deltaE00: r.deltaE00.toFixed(2) } : {}),
     },
   };

@@ -92,6 +92,11 @@ describe('POST /api/readings/batch: the colours of one region as readings of the
     const exported = (id: number) => rows.find((r) => Number(r['id']) === id) ?? assert.fail(`reading ${id} is exported`);
     assert.deepEqual([exported(ground!.id)['photo colour'], exported(stripe!.id)['photo colour']], ['1 of 2', '2 of 2']);
     assert.ok(Math.abs(Number(exported(stripe!.id)['photo colour share']) - 0.25) < 0.02, exported(stripe!.id)['photo colour share']);
+    // And so do the BrAPI observations of the stripe reading (its L*, a*, b* and chip).
+    const brapi = (await recorder.get(`/brapi/v2/observations?germplasmDbId=${stripe!.accessionId}&pageSize=1000`).expect(200)).body as { result: { data: { additionalInfo: Record<string, string> }[] } };
+    const infos = brapi.result.data.map((o) => o.additionalInfo).filter((i) => i['readingId'] === String(stripe!.id));
+    assert.equal(infos.length, 4);
+    for (const info of infos) assert.deepEqual([info['photoColour'], Math.abs(Number(info['photoColourShare']) - 0.25) < 0.02], ['2 of 2', true]);
   });
 
   test('should keep a whole-region photo reading as the mean, with no colour index', async () => {
