@@ -6,6 +6,7 @@ import { spawn } from 'node:child_process';
 import { readdirSync } from 'node:fs';
 import path from 'node:path';
 import { createInterface } from 'node:readline';
+import { ensureClientBuilt } from './client-build.mjs';
 
 const RATIO_MARK = '::bench-ratio::';
 const root = path.resolve(import.meta.dirname, '..');
@@ -29,6 +30,9 @@ function run(file) {
     child.on('close', (code) => resolve({ code, ratios }));
   });
 }
+
+// The load benchmark runs the real server, which serves the built client.
+if (files.includes('load.bench.ts')) ensureClientBuilt();
 
 let failed = 0;
 const all = [];

@@ -161,9 +161,22 @@ export async function navigateTo(page: Page, label: string): Promise<void> {
 
 /** Chooses an option of a Material select by its label and the option's text, and waits for the list to close. */
 export async function choose(page: Page, label: string, option: string | RegExp): Promise<void> {
-  await page.getByRole('combobox', { name: label }).click();
+  const box = page.getByRole('combobox', { name: label });
+  const list = page.getByRole('listbox');
+  // A Material select does not open while it has no options, and its options may still be on their
+  // way from the server: as a person would, tap again until the list opens (within a minute).
+  const deadline = Date.now() + 60_000;
+  for (;;) {
+    await box.click();
+    try {
+      await list.waitFor({ timeout: 2_000 });
+      break;
+    } catch (e) {
+      if (Date.now() > deadline) throw e;
+    }
+  }
   await page.getByRole('option', { name: option }).first().click();
-  await page.getByRole('listbox').waitFor({ state: 'detached' });
+  await list.waitFor({ state: 'detached' });
 }
 
 /**

@@ -1,10 +1,11 @@
-import { betweenWords, formatNumber, labText, normaliseCode } from './chip-words';
+import { betweenWords, chromaHueText, formatNumber, labText, normaliseCode } from './chip-words';
 
 describe('chip words', () => {
   it('should write negative numbers with a true minus sign and no "−0.00"', () => {
     expect(formatNumber(-15.814, 2)).toBe('−15.81');
     expect(formatNumber(-0.001, 2)).toBe('0.00');
     expect(labText([35.776, 32.847, -15.8146])).toBe('L* 35.78, a* 32.85, b* −15.81');
+    expect(chromaHueText([35.776, 36.456, 334.29])).toBe('C* 36.46, h° 334.3');
   });
 
   it('should say which chip a colour is nearer, or that it is about half-way', () => {

@@ -33,6 +33,11 @@ export function lchText(lch: readonly [number, number, number]): string {
   return `L* ${formatNumber(lch[0], 2)}, C* ${formatNumber(lch[1], 2)}, h° ${formatNumber(lch[2], 1)}`;
 }
 
+/** "C* 36.46, h° 334.3": chroma and hue, to write after labText without giving L* twice. */
+export function chromaHueText(lch: readonly [number, number, number]): string {
+  return `C* ${formatNumber(lch[1], 2)}, h° ${formatNumber(lch[2], 1)}`;
+}
+
 /** ΔE00 to two decimals: the figure a recorder writes down. */
 export function deltaEText(deltaE: number): string {
   return formatNumber(deltaE, 2);

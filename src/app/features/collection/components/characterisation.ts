@@ -7,7 +7,7 @@ import { RouterLink } from '@angular/router';
 
 import type { CharacterProfile, ProfilePhoto } from '../../../../../shared/api/profile-answers.js';
 import { UnitPreference } from '../../../core/units/unit-preference';
-import { deltaEText, labText, lchText } from '../../../shared/chips/chip-words';
+import { chromaHueText, deltaEText, labText } from '../../../shared/chips/chip-words';
 import { CHARACTERISATION_XLSX_URL, ProfileApi, profilePdfUrl } from '../data/profile-api';
 import { chipText, countsText, cropStyle, descriptorText, setChipText, stabilityText } from '../data/profile-words';
 import { LocalDateTimePipe } from '../../../core/format/local-date-time';
@@ -42,7 +42,7 @@ export class Characterisation {
   protected readonly cropSize = CROP_SIZE;
   protected readonly de = deltaEText;
   protected readonly labText = labText;
-  protected readonly lchText = lchText;
+  protected readonly chromaHueText = chromaHueText;
   protected readonly chipText = chipText;
   protected readonly setChipText = setChipText;
   protected readonly countsText = countsText;
