@@ -148,9 +148,18 @@ export async function signIn(page: Page, appUrl: string, email: string, password
  * that entry's route — not for a heading or tab that another screen may also show.
  */
 export async function navigateTo(page: Page, label: string): Promise<void> {
+  const link = page.locator('mat-sidenav').getByRole('link', { name: label, exact: true });
+  // The navigation lists a person's sections once their account has loaded: wait for the entry
+  // before deciding whether the drawer must be opened. If it never comes, say where the page is.
+  try {
+    await link.waitFor({ state: 'attached' });
+  } catch (e) {
+    const shown = await page.evaluate(() => document.body.innerText.slice(0, 300)).catch(() => '(no page)');
+    await screenshot(page, `navigate-to-${label.toLowerCase().replace(/\W+/g, '-')}-failed`).catch(() => undefined);
+    throw new Error(`no navigation entry "${label}" on ${page.url()}; the page shows: ${shown}`, { cause: e });
+  }
   const opener = page.getByRole('button', { name: 'Open navigation' });
   if (await opener.isVisible()) await opener.click();
-  const link = page.locator('mat-sidenav').getByRole('link', { name: label, exact: true });
   const href = await link.getAttribute('href');
   assert.ok(href, `the navigation entry ${label} has a link`);
   const target = new URL(href, page.url()).pathname;
