@@ -149,17 +149,19 @@ export async function signIn(page: Page, appUrl: string, email: string, password
  */
 export async function navigateTo(page: Page, label: string): Promise<void> {
   const link = page.locator('mat-sidenav').getByRole('link', { name: label, exact: true });
-  // The navigation lists a person's sections once their account has loaded: wait for the entry
-  // before deciding whether the drawer must be opened. If it never comes, say where the page is.
+  const opener = page.getByRole('button', { name: 'Open navigation' });
   try {
-    await link.waitFor({ state: 'attached' });
+    // Wait for the shell as a person would: on a phone the menu button (the closed drawer holds no
+    // entries until it opens), on a desk the entry itself. Deciding before the toolbar was drawn
+    // left the drawer shut and the entry never came.
+    await opener.or(link).first().waitFor();
+    if ((await opener.isVisible()) && !(await link.isVisible())) await opener.click();
+    await link.waitFor();
   } catch (e) {
     const shown = await page.evaluate(() => document.body.innerText.slice(0, 300)).catch(() => '(no page)');
     await screenshot(page, `navigate-to-${label.toLowerCase().replace(/\W+/g, '-')}-failed`).catch(() => undefined);
     throw new Error(`no navigation entry "${label}" on ${page.url()}; the page shows: ${shown}`, { cause: e });
   }
-  const opener = page.getByRole('button', { name: 'Open navigation' });
-  if (await opener.isVisible()) await opener.click();
   const href = await link.getAttribute('href');
   assert.ok(href, `the navigation entry ${label} has a link`);
   const target = new URL(href, page.url()).pathname;
