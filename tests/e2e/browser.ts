@@ -170,6 +170,18 @@ export async function navigateTo(page: Page, label: string): Promise<void> {
   await page.waitForURL((u) => u.pathname === target || u.pathname.startsWith(`${target}/`));
 }
 
+/**
+ * The open dialog, once it is ready to type into: Material moves the focus into a dialog (to its
+ * first field) when the opening animation ends, so text typed before that can land in that field
+ * instead of the one meant. Waits, as a person's eye does, for the cursor to settle in the dialog.
+ */
+export async function openDialog(page: Page): Promise<Locator> {
+  const dialog = page.getByRole('dialog');
+  await dialog.waitFor();
+  await page.waitForFunction(() => Boolean(document.activeElement?.closest('mat-dialog-container')));
+  return dialog;
+}
+
 /** Chooses an option of a Material select by its label and the option's text, and waits for the list to close. */
 export async function choose(page: Page, label: string, option: string | RegExp): Promise<void> {
   const box = page.getByRole('combobox', { name: label });

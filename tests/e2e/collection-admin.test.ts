@@ -6,7 +6,7 @@
 import assert from 'node:assert/strict';
 import { before, describe, test } from 'node:test';
 import type { Page } from 'playwright-core';
-import { navigateTo, screenshot, signIn, useApp, waitForValue } from './browser.js';
+import { navigateTo, openDialog, screenshot, signIn, useApp, waitForValue } from './browser.js';
 
 const app = useApp();
 
@@ -130,7 +130,7 @@ describe('an admin at a desk manages sites and accessions', () => {
     assert.match(await page.locator('.passport').innerText(), /Country of origin\s+ORIGCTY\s+FJI/);
 
     await page.getByRole('button', { name: 'Add plant' }).click();
-    const dialog = page.getByRole('dialog');
+    const dialog = await openDialog(page);
     await dialog.getByLabel('Plant label').fill('E2E-07');
     await dialog.getByLabel('Planted on').fill('2025-01-15');
     await dialog.getByRole('button', { name: 'Add plant' }).click();
@@ -155,7 +155,7 @@ describe('an admin at a desk manages sites and accessions', () => {
     const row = page.locator('tr', { hasText: 'upper third' }).first();
     const label = (await row.locator('td').nth(1).innerText()).split('\n')[0]!.trim();
     await row.getByRole('button', { name: `Edit ${label}` }).click();
-    const dialog = page.getByRole('dialog');
+    const dialog = await openDialog(page);
     await dialog.getByLabel('Drift threshold (ΔE00)').fill('2.5');
     await dialog.getByRole('button', { name: 'Save' }).click();
     await dialog.waitFor({ state: 'detached' });

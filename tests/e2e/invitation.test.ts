@@ -1,7 +1,7 @@
 import assert from 'node:assert/strict';
 import { after, before, test } from 'node:test';
 import type { BrowserContext } from 'playwright-core';
-import { screenshot, signIn, useApp } from './browser.js';
+import { openDialog, screenshot, signIn, useApp } from './browser.js';
 
 const app = useApp();
 let browser: BrowserContext;
@@ -19,7 +19,7 @@ test('should let an admin invite a trainer who follows the mailed link, sets a p
 
   await admin.goto(`${app.url}/admin/users`);
   await admin.getByRole('button', { name: /Invite/ }).click();
-  const dialog = admin.getByRole('dialog');
+  const dialog = await openDialog(admin);
   await dialog.getByLabel('E-mail').fill('new.trainer@demo.test');
   await dialog.getByLabel('Name').fill('Tamsin Ashgrove');
   await dialog.getByRole('combobox', { name: 'Role' }).click();

@@ -6,7 +6,7 @@ import assert from 'node:assert/strict';
 import { before, describe, test } from 'node:test';
 import type { Page } from 'playwright-core';
 import { DEMO_DRIFT } from '../../server/demo/demo-readings.js';
-import { choose, screenshot, signIn, useApp } from './browser.js';
+import { choose, openDialog, screenshot, signIn, useApp } from './browser.js';
 
 /** A calendar date as ISO 8601 writes it: never what a person should read on a page. */
 const ISO_DAY = /\b\d{4}-\d{2}-\d{2}\b/;
@@ -187,7 +187,7 @@ describe('records in plain words', () => {
   test('should show a conflict in words at the field that conflicts, not at the top of the dialog', async () => {
     await admin.goto(`${app.url}/collection`);
     await admin.getByRole('button', { name: 'New accession' }).click();
-    const dialog = admin.getByRole('dialog');
+    const dialog = await openDialog(admin);
     // The demo's first accession, typed in lower case: numbers are compared regardless of case.
     await dialog.getByLabel('Accession number').fill(DEMO_DRIFT.accessionNumber.toLowerCase());
     await dialog.getByRole('textbox', { name: /^Name/ }).fill('A second try');
