@@ -28,7 +28,7 @@ function startWorker(): Worker {
 export class DriftPool {
   private workers: Worker[] | null = null;
   private nextId = 1;
-  /** How many shares were analysed in this thread because their worker failed (a test and a log look at it). */
+  /** How many shares were analysed in this thread because their worker failed (tests keep it at 0). */
   fallbacks = 0;
 
   /** `size` workers; by default one per core the machine offers, at least 1 and at most 4. */

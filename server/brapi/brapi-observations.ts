@@ -3,6 +3,7 @@
 import { In, type DataSource } from 'typeorm';
 import { Observation } from '../collection/observation.entity.js';
 import { Reading } from '../readings/reading.entity.js';
+import { clusterWords } from '../../shared/api/reading-answers.js';
 import { parseSeasonDbId, numericId, seasonDbId, unitName } from './brapi-collection.js';
 import type { PageRequest } from './brapi-envelope.js';
 import { COLOUR_PARTS, colourVariableName, parseVariableDbId, variableDbId, type ColourPart } from './brapi-variables.js';
@@ -172,7 +173,7 @@ function fromReading(r: Reading, part: ColourPart): Record<string, unknown> {
       reviewStatus: r.status,
       locationDbId: String(r.siteId),
       // A photo region that split into colours: which one this reading took (1 = the largest share) and its share.
-      ...(r.cluster ? { photoColour: `${r.cluster.index + 1} of ${r.cluster.of}`, photoColourShare: r.cluster.share.toFixed(3) } : {}),
+      ...(r.cluster ? { photoColour: clusterWords(r.cluster), photoColourShare: r.cluster.share.toFixed(3) } : {}),
       ...(part === 'chip' ? { referenceSet: r.setId, chipName: r.bestChipName, deltaE00: r.deltaE00.toFixed(2) } : {}),
     },
   };

@@ -26,5 +26,5 @@ export function serverDay(iso: string): string {
 
 /** An instant as a day and a 24-hour UTC time in words ("3 Dec 2026, 06:05 UTC"). */
 export function instantWords(at: Date): string {
-  return `${dayWords(at.toISOString().slice(0, 10), SERVER_DAY_LOCALE)}, ${at.toISOString().slice(11, 16)} UTC`;
+  return `${serverDay(at.toISOString().slice(0, 10))}, ${at.toISOString().slice(11, 16)} UTC`;
 }

@@ -8,6 +8,7 @@ import { IsNull, Not, type DataSource } from 'typeorm';
 import { Descriptor } from '../collection/descriptor.entity.js';
 import { Observation } from '../collection/observation.entity.js';
 import type { ListReadingsQuery } from '../../shared/api/readings.js';
+import { clusterWords } from '../../shared/api/reading-answers.js';
 import { labToLch } from '../../shared/colour/lab.js';
 import { spreadsheetSafe } from '../core/spreadsheet-safe.js';
 import type { Reading } from './reading.entity.js';
@@ -92,7 +93,7 @@ export const EXPORT_COLUMNS: readonly ExportColumn[] = [
   { header: 'reported L*a*b*', width: 20, value: (r) => (r.reportedLab ? r.reportedLab.join(' ') : null) },
   { header: 'photo id', width: 8, value: (r) => r.photoId },
   // A region that split into colours: which one this reading took (1 = the largest share), of how many, and its share.
-  { header: 'photo colour', width: 9, value: (r) => (r.cluster ? `${r.cluster.index + 1} of ${r.cluster.of}` : null) },
+  { header: 'photo colour', width: 9, value: (r) => (r.cluster ? clusterWords(r.cluster) : null) },
   { header: 'photo colour share', width: 9, numFmt: '0%', value: (r) => (r.cluster ? round(r.cluster.share, 3) : null) },
   { header: 'provenance link', width: 36, value: (r, url) => `${url}/readings/${r.id}` },
 ];

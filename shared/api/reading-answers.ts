@@ -84,6 +84,11 @@ export interface ReadingCluster {
   spreadDeltaE00: number;
 }
 
+/** Which colour of its region a reading took, in words for exports: "2 of 2" (1 = the largest share). */
+export function clusterWords(cluster: ReadingCluster): string {
+  return `${cluster.index + 1} of ${cluster.of}`;
+}
+
 /** `POST /api/readings` body. Which colour field is needed depends on `method`. */
 export type CreateReadingRequest = CreateReadingBody;
 
