@@ -1,31 +1,12 @@
 import { Routes } from '@angular/router';
 
+import { pageRoute } from '../../shared/page-route';
+
 /** The Collection section: everyone reads; the pages show edit actions to admins only (the server checks again). */
 export const COLLECTION_ROUTES: Routes = [
-  {
-    path: '',
-    pathMatch: 'full',
-    title: 'Collection · Hueledger',
-    loadComponent: () => import('./pages/collection-page').then((m) => m.CollectionPage),
-  },
-  {
-    path: 'progress',
-    title: 'Characterisation progress · Hueledger',
-    loadComponent: () => import('./pages/progress-page').then((m) => m.ProgressPage),
-  },
-  {
-    path: 'sites/:id',
-    title: 'Site · Hueledger',
-    loadComponent: () => import('./pages/site-page').then((m) => m.SitePage),
-  },
-  {
-    path: 'accessions/:id/similar',
-    title: 'Look-alike accessions · Hueledger',
-    loadComponent: () => import('./pages/similar-page').then((m) => m.SimilarPage),
-  },
-  {
-    path: 'accessions/:id',
-    title: 'Accession · Hueledger',
-    loadComponent: () => import('./pages/accession-page').then((m) => m.AccessionPage),
-  },
+  pageRoute('', 'Collection', () => import('./pages/collection-page').then((m) => m.CollectionPage), { pathMatch: 'full' }),
+  pageRoute('progress', 'Characterisation progress', () => import('./pages/progress-page').then((m) => m.ProgressPage)),
+  pageRoute('sites/:id', 'Site', () => import('./pages/site-page').then((m) => m.SitePage)),
+  pageRoute('accessions/:id/similar', 'Look-alike accessions', () => import('./pages/similar-page').then((m) => m.SimilarPage)),
+  pageRoute('accessions/:id', 'Accession', () => import('./pages/accession-page').then((m) => m.AccessionPage)),
 ];
