@@ -1,32 +1,22 @@
 import { ChangeDetectionStrategy, Component, input, signal } from '@angular/core';
 import { ReactiveFormsModule } from '@angular/forms';
-import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
-import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 
 import { NewPasswordGroup, PASSWORD_MIN_LENGTH } from './password-rules';
+import { PasswordVisibility } from './password-visibility';
 
 /** "New password" and "Repeat it", with the length rule and a mismatch message in words. */
 @Component({
   selector: 'hl-new-password-fields',
-  imports: [MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, ReactiveFormsModule],
+  imports: [MatFormFieldModule, MatInputModule, PasswordVisibility, ReactiveFormsModule],
   changeDetection: ChangeDetectionStrategy.OnPush,
   template: `
     <div class="fields" [formGroup]="group()">
       <mat-form-field subscriptSizing="dynamic">
         <mat-label>{{ label() }}</mat-label>
         <input matInput [type]="hidden() ? 'password' : 'text'" formControlName="password" autocomplete="new-password" />
-        <button
-          mat-icon-button
-          matSuffix
-          type="button"
-          (click)="toggleVisibility()"
-          [attr.aria-label]="hidden() ? 'Show passwords' : 'Hide passwords'"
-          [attr.aria-pressed]="!hidden()"
-        >
-          <mat-icon>{{ hidden() ? 'visibility' : 'visibility_off' }}</mat-icon>
-        </button>
+        <hl-password-visibility matSuffix [(hidden)]="hidden" what="passwords" />
         <mat-hint>At least {{ minLength }} characters. A few words are easier to type than symbols.</mat-hint>
         @if (group().controls.password.hasError('required')) {
           <mat-error>Choose a password.</mat-error>
@@ -75,8 +65,4 @@ export class NewPasswordFields {
 
   protected readonly minLength = PASSWORD_MIN_LENGTH;
   protected readonly hidden = signal(true);
-
-  protected toggleVisibility(): void {
-    this.hidden.update((hidden) => !hidden);
-  }
 }

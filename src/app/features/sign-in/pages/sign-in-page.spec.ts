@@ -75,4 +75,16 @@ describe('SignInPage', () => {
     expect(navigate).toHaveBeenCalledWith('/admin/users');
     expect(TestBed.inject(AuthStore).role()).toBe('admin');
   });
+
+  it('should show the typed password while the eye button is pressed, and hide it again', async () => {
+    const password = element.querySelector<HTMLInputElement>('input[autocomplete="current-password"]')!;
+    const eye = element.querySelector<HTMLButtonElement>('hl-password-visibility button')!;
+    expect([password.type, eye.getAttribute('aria-label'), eye.getAttribute('aria-pressed')]).toEqual(['password', 'Show password', 'false']);
+    eye.click();
+    await fixture.whenStable();
+    expect([password.type, eye.getAttribute('aria-label'), eye.getAttribute('aria-pressed')]).toEqual(['text', 'Hide password', 'true']);
+    eye.click();
+    await fixture.whenStable();
+    expect(password.type).toBe('password');
+  });
 });

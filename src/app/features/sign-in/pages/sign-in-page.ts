@@ -2,11 +2,11 @@ import { ChangeDetectionStrategy, Component, inject, input, signal } from '@angu
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
-import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { Router, RouterLink } from '@angular/router';
 
 import { AuthStore } from '../../../core/auth/auth-store';
+import { PasswordVisibility } from '../../../core/auth/password-visibility';
 import { ApiError } from '../../../core/http/api-error';
 import { PublicFrame } from '../components/public-frame';
 import { safeReturnUrl } from '../data/return-url';
@@ -16,7 +16,7 @@ import { EmailField } from '../components/email-field';
 /** Sign in with e-mail and password, then go where the person was heading. */
 @Component({
   selector: 'hl-sign-in-page',
-  imports: [EmailField, ProblemNotice, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, PublicFrame, ReactiveFormsModule, RouterLink],
+  imports: [EmailField, ProblemNotice, MatButtonModule, MatFormFieldModule, MatInputModule, PasswordVisibility, PublicFrame, ReactiveFormsModule, RouterLink],
   templateUrl: './sign-in-page.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
@@ -50,10 +50,6 @@ export class SignInPage {
         this.problem.set(signInProblem(error));
       },
     });
-  }
-
-  protected togglePasswordVisibility(): void {
-    this.passwordHidden.update((hidden) => !hidden);
   }
 }
 
