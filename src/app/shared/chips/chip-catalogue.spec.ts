@@ -41,6 +41,18 @@ describe('ChipCatalogue', () => {
     expect(set.finesOf('F-001').map((c) => c.code)).toEqual(['F-001.001', 'F-001.002']);
   });
 
+  it('should give a chip’s family: a fine chip’s field chip is its parent, a field chip is its own', () => {
+    loadTestSet();
+    const set = catalogue.set()!;
+    const codes = (code: string) => {
+      const family = set.family(code);
+      return family && [family.chip.code, family.field?.code, family.fines.map((c) => c.code)];
+    };
+    expect(codes('F-001.002')).toEqual(['F-001.002', 'F-001', ['F-001.001', 'F-001.002']]);
+    expect(codes('F-002')).toEqual(['F-002', 'F-002', ['F-002.001']]);
+    expect(codes('F-999')).toBeNull();
+  });
+
   it('should list a chip’s nearest neighbours without the chip itself', () => {
     loadTestSet();
     const set = catalogue.set()!;

@@ -10,6 +10,14 @@ import { createMatcher, type Matcher } from '../../../../shared/colour/matcher.j
 import type { ChipMatch } from '../../../../shared/colour/nearest.js';
 import { ReferenceSetApi } from './reference-set-api';
 
+/** A chip seen with its kin, as the pickers offer them: the fine chips of its field chip. */
+export interface ChipFamily {
+  chip: ChipDto;
+  /** The field chip: the chip itself, or its parent; null if the parent is missing from the set. */
+  field: ChipDto | null;
+  fines: readonly ChipDto[];
+}
+
 /** The current reference set held in the browser, indexed for lookups and instant matching. */
 export class ChipSet {
   readonly matcher: Matcher<ChipDto>;
@@ -42,6 +50,14 @@ export class ChipSet {
   /** The fine chips that refine a field chip, in picker order: by sector, light to dark, strongest to greyest. */
   finesOf(fieldCode: string): readonly ChipDto[] {
     return this.finesByParent.get(fieldCode) ?? [];
+  }
+
+  /** The chip with this code, the field chip it belongs to (itself or its parent) and that field chip's fine chips; null for an unknown code. */
+  family(code: string): ChipFamily | null {
+    const chip = this.chip(code);
+    if (!chip) return null;
+    const field = chip.parent === null ? chip : this.chip(chip.parent);
+    return { chip, field: field ?? null, fines: field ? this.finesOf(field.code) : [] };
   }
 
   /** The `count` chips nearest a chip by ΔE00, itself left out. */

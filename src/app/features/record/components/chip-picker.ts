@@ -36,20 +36,14 @@ export class ChipPicker {
   protected readonly familyLabel = familyLabel;
   protected readonly codeProblem = signal<string | null>(null);
 
-  protected readonly chosen = computed(() => {
+  private readonly family = computed(() => {
     const code = this.value();
-    return code ? (this.catalogue.set()?.chip(code) ?? null) : null;
+    return code ? (this.catalogue.set()?.family(code) ?? null) : null;
   });
+  protected readonly chosen = computed(() => this.family()?.chip ?? null);
   /** The field chip whose fine chips are offered: the chosen chip or its parent. */
-  protected readonly field = computed(() => {
-    const chip = this.chosen();
-    if (!chip) return null;
-    return chip.parent === null ? chip : (this.catalogue.set()?.chip(chip.parent) ?? null);
-  });
-  protected readonly fines = computed(() => {
-    const field = this.field();
-    return field ? (this.catalogue.set()?.finesOf(field.code) ?? []) : [];
-  });
+  protected readonly field = computed(() => this.family()?.field ?? null);
+  protected readonly fines = computed(() => this.family()?.fines ?? []);
 
   constructor() {
     this.catalogue.load();

@@ -51,20 +51,14 @@ export class BrowsePage {
   protected readonly searchProblem = signal<string | null>(null);
   protected readonly familyLabel = familyLabel;
 
-  protected readonly selected = computed(() => {
+  private readonly family = computed(() => {
     const code = this.chip();
-    return code ? (this.catalogue.set()?.chip(code) ?? null) : null;
+    return code ? (this.catalogue.set()?.family(code) ?? null) : null;
   });
+  protected readonly selected = computed(() => this.family()?.chip ?? null);
   /** The field chip whose fine chips are shown: the chosen chip or its parent. */
-  protected readonly field = computed(() => {
-    const chip = this.selected();
-    if (!chip) return null;
-    return chip.parent === null ? chip : (this.catalogue.set()?.chip(chip.parent) ?? null);
-  });
-  protected readonly fines = computed(() => {
-    const field = this.field();
-    return field ? (this.catalogue.set()?.finesOf(field.code) ?? []) : [];
-  });
+  protected readonly field = computed(() => this.family()?.field ?? null);
+  protected readonly fines = computed(() => this.family()?.fines ?? []);
   protected readonly neighbours = computed(() => {
     const chip = this.selected();
     return chip ? (this.catalogue.set()?.neighbours(chip, NEIGHBOURS) ?? []) : [];
