@@ -1,13 +1,14 @@
 // A bounded load test on loopback: 50 signed-in recorders at once, each connection its own
 // session, saving instrument readings and listing readings, against GET /api/health with the same
 // 50 sessions in the same run (the floor: session lookup, CSRF cookie, JSON). The server is the
-// real one (server/main.ts) in a child process with a fresh data folder and the demo scenario, so
-// the load generator (autocannon) does not share its event loop. Prints throughput, p50 and p95
+// real one (server/main.ts) in a child process with a fresh data folder and the demo scenario (in
+// npm test's smoke run, a copy of that run's seeded folder), so the load generator (autocannon)
+// does not share its event loop. Prints throughput, p50 and p95
 // and the ratios; asserts nothing.
 //   node --import tsx bench/load.bench.ts [requests per phase]
 import autocannon from 'autocannon';
 import { signInOverHttp, type HttpSession } from '../tests/e2e/http-session.js';
-import { startServerProcess } from '../tests/e2e/server-process.js';
+import { startServer } from '../tests/e2e/server-process.js';
 import { benchSize, reportRatio, SMOKE } from './ratio.js';
 
 const RECORDERS = SMOKE ? 4 : 50;
@@ -71,7 +72,7 @@ async function phase(name: string, base: string, sessions: HttpSession[], reques
   };
 }
 
-const server = await startServerProcess();
+const server = await startServer({}, { needsClient: false });
 try {
   const base = server.url;
   const admin = await signInOverHttp(base, 'admin@demo.test', DEMO_PASSWORD);

@@ -12,7 +12,7 @@ import path from 'node:path';
 import { fromRaw } from '../api/photo-fixtures.js';
 import { mulberry32 } from '../../shared/random/mulberry32.js';
 import { signInOverHttp } from './http-session.js';
-import { startServerProcess } from './server-process.js';
+import { copyDemoTemplate, startServerProcess } from './server-process.js';
 
 const DEMO_PASSWORD = 'demo-pass-2026';
 const CONCURRENT = 100;
@@ -28,8 +28,9 @@ async function photo(n: number): Promise<Buffer> {
 }
 
 let dataDir: string;
-before(() => {
+before(async () => {
   dataDir = mkdtempSync(path.join(tmpdir(), 'hueledger-crash-'));
+  await copyDemoTemplate(dataDir);
 });
 after(() => rmSync(dataDir, { recursive: true, force: true }));
 

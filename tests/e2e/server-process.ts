@@ -86,7 +86,11 @@ export async function startServerProcess(opts: ServerOptions = {}): Promise<Serv
       if (child.exitCode === null && child.signalCode === null) {
         const done = exited();
         child.kill('SIGTERM');
-        await Promise.race([done, new Promise((r) => setTimeout(r, 5000))]);
+        // The timer is cleared once the server has gone: left running, it kept the test file's
+        // process alive for 5 s after its last test.
+        let timer: NodeJS.Timeout | undefined;
+        await Promise.race([done, new Promise((r) => (timer = setTimeout(r, 5000)))]);
+        clearTimeout(timer);
         if (child.exitCode === null && child.signalCode === null) child.kill('SIGKILL');
         await done;
       }
@@ -115,13 +119,24 @@ function demoTemplate(): Promise<string | null> {
   );
 }
 
-/** Starts the built app with the demo scenario (from the run's seeded copy when there is one); needs `npm run build` first. */
-export async function startServer(env: Record<string, string> = {}): Promise<ServerProcess> {
+/**
+ * Fills `dataDir` with the run's seeded copy of the demo scenario when there is one; otherwise it
+ * stays empty and the server migrates and seeds it on its first start, as it would anyway.
+ */
+export async function copyDemoTemplate(dataDir: string): Promise<void> {
   const template = await demoTemplate();
-  if (!template) return startServerProcess({ env, needsClient: true });
+  if (template) cpSync(template, dataDir, { recursive: true });
+}
+
+/**
+ * Starts the app with the demo scenario in a new data folder (from the run's seeded copy when there
+ * is one), removed on stop. Browser tests need the built client (`npm run build`); `needsClient:
+ * false` is for processes that only call the API (the load benchmark).
+ */
+export async function startServer(env: Record<string, string> = {}, { needsClient = true }: { needsClient?: boolean } = {}): Promise<ServerProcess> {
   const dataDir = mkdtempSync(path.join(tmpdir(), 'hueledger-e2e-'));
-  cpSync(template, dataDir, { recursive: true });
-  const server = await startServerProcess({ env, needsClient: true, dataDir });
+  await copyDemoTemplate(dataDir);
+  const server = await startServerProcess({ env, needsClient, dataDir });
   return {
     ...server,
     async stop() {
