@@ -1,29 +1,24 @@
-import { ChangeDetectionStrategy, Component, computed, inject, input, output } from '@angular/core';
-import { MatButtonModule } from '@angular/material/button';
+import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
 import { MatTableModule } from '@angular/material/table';
 
 import { ORGANS, type Character } from '../../../../../shared/api/collection-answers.js';
-import { Viewport } from '../../../core/layout/viewport';
 import { CatalogueCardEnd } from './catalogue-card-end';
+import { CatalogueEditColumn } from './catalogue-edit-column';
+import { CatalogueList } from './catalogue-list';
 
 /** The character catalogue: what to read and how, with cautions marked by icon and word; admins get an edit button per row. */
 @Component({
   selector: 'hl-character-list',
-  imports: [CatalogueCardEnd, MatButtonModule, MatIconModule, MatTableModule],
+  imports: [CatalogueCardEnd, CatalogueEditColumn, MatIconModule, MatTableModule],
   changeDetection: ChangeDetectionStrategy.OnPush,
   templateUrl: './character-list.html',
   styleUrl: './collection-lists.scss',
 })
-export class CharacterList {
+export class CharacterList extends CatalogueList<Character> {
   /** The characters to show. */
   readonly characters = input.required<readonly Character[]>();
-  /** Whether the person may edit characters (admins). */
-  readonly canEdit = input(false);
-  /** Asks to edit a character. */
-  readonly edit = output<Character>();
 
-  protected readonly handset = inject(Viewport).handset;
   protected readonly columns = ['organ', 'label', 'howToRead', 'caution', 'drift'];
   /** The catalogue by organ, in the order of the plant from leaf to flower, then by label. */
   protected readonly byOrgan = computed(() =>
@@ -34,5 +29,4 @@ export class CharacterList {
     const rows = this.byOrgan();
     return index === 0 || rows[index - 1].organ !== rows[index].organ;
   }
-  protected readonly shownColumns = computed(() => (this.canEdit() ? [...this.columns, 'actions'] : this.columns));
 }
