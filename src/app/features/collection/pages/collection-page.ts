@@ -18,6 +18,7 @@ import { AccessionDialog, type AccessionDialogData } from '../components/accessi
 import { AccessionList } from '../components/accession-list';
 import { CharacterDialog } from '../components/character-dialog';
 import { CharacterList } from '../components/character-list';
+import { CollectionTab } from '../components/collection-tab';
 import { LoadState } from '../../../shared/load-state';
 import { ProgressSummary } from '../../../shared/collection/progress-summary';
 import { SiteList } from '../components/site-list';
@@ -29,22 +30,11 @@ const TABS = ['accessions', 'sites', 'characters', 'descriptors'] as const;
 /** The collection: accessions, sites and their seasons, characters, descriptors; admins also add and edit. */
 @Component({
   selector: 'hl-collection-page',
-  imports: [AccessionList, CharacterList, DescriptorList, LoadState, MatButtonModule, MatIconModule, MatTabsModule, RouterLink, SiteList, ProgressSummary],
+  imports: [AccessionList, CharacterList, CollectionTab, DescriptorList, LoadState, MatButtonModule, MatIconModule, MatTabsModule, RouterLink, SiteList, ProgressSummary],
   templateUrl: './collection-page.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
   styles: `
-    .tab {
-      padding: 16px 0;
-    }
-    .tab-actions {
-      display: flex;
-      flex-wrap: wrap;
-      justify-content: flex-end;
-      gap: 8px;
-      margin-bottom: 12px;
-    }
-    .tab-actions a,
-    .tab-actions button {
+    [tabAction] {
       min-height: 48px;
     }
   `,
