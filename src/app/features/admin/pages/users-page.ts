@@ -25,7 +25,8 @@ import { LocalDateTimePipe } from '../../../core/format/local-date-time';
 /** People with access: roles, active or not, last sign-in; invitations waiting below. */
 @Component({
   selector: 'hl-users-page',
-  imports: [LocalDateTimePipe, 
+  imports: [
+    LocalDateTimePipe,
     InvitationList,
     MatButtonModule,
     MatFormFieldModule,

@@ -17,7 +17,8 @@ import { ProblemNotice } from '../../../shared/problem-notice';
 /** Adds a character to the catalogue, or edits one (code and organ stay: readings refer to them). Closes with the saved character. */
 @Component({
   selector: 'hl-character-dialog',
-  imports: [ProblemNotice, 
+  imports: [
+    ProblemNotice,
     MatButtonModule,
     MatDialogModule,
     MatFormFieldModule,

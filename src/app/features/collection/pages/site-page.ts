@@ -26,7 +26,8 @@ import { ProblemNotice } from '../../../shared/problem-notice';
 /** One site: everyone sees its time zone and season ring; an admin edits it, seasons included, and creates new ones. */
 @Component({
   selector: 'hl-site-page',
-  imports: [ProblemNotice, 
+  imports: [
+    ProblemNotice,
     MatButtonModule,
     MatFormFieldModule,
     MatIconModule,

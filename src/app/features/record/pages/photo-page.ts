@@ -42,7 +42,8 @@ const TOOLS: readonly { tool: Tool; icon: string; label: string; hint: string }[
  */
 @Component({
   selector: 'hl-photo-page',
-  imports: [ProblemNotice, 
+  imports: [
+    ProblemNotice,
     MatButtonModule,
     MatButtonToggleModule,
     MatIconModule,
