@@ -21,6 +21,16 @@ describe('ProgressSummary', () => {
     http.verify();
   });
 
+  it('should hold the summary’s place while the count loads, so the page does not jump under a tap', () => {
+    const http = TestBed.inject(HttpTestingController);
+    const fixture = TestBed.createComponent(ProgressSummary);
+    fixture.detectChanges();
+    const pending = (fixture.nativeElement as HTMLElement).querySelector('.summary');
+    expect(pending?.getAttribute('aria-busy')).toBe('true');
+    expect(pending?.textContent).toContain('Counting this season');
+    http.expectOne('/api/progress');
+  });
+
   it('should show nothing, and throw nothing, when the count cannot be had (no connection)', async () => {
     const http = TestBed.inject(HttpTestingController);
     const fixture = TestBed.createComponent(ProgressSummary);
@@ -28,7 +38,7 @@ describe('ProgressSummary', () => {
     http.expectOne('/api/progress').error(new ProgressEvent('error'));
     await fixture.whenStable();
     expect(() => fixture.detectChanges()).not.toThrow();
-    expect((fixture.nativeElement as HTMLElement).querySelector('a')).toBeNull();
+    expect((fixture.nativeElement as HTMLElement).querySelector('.summary')).toBeNull();
     http.verify();
   });
 });

@@ -25,6 +25,9 @@ import { PlantSheetApi } from './plant-sheet-api';
         >
         <mat-icon aria-hidden="true">chevron_right</mat-icon>
       </a>
+    } @else if (progress.isLoading()) {
+      <!-- Holds the summary's place while it loads, so the page below does not jump down under a finger about to tap. -->
+      <p class="summary pending" aria-busy="true">Counting this season's plants…</p>
     }
   `,
   styles: `
@@ -43,6 +46,9 @@ import { PlantSheetApi } from './plant-sheet-api';
     }
     .summary span {
       flex: 1;
+    }
+    .pending {
+      color: var(--mat-sys-on-surface-variant);
     }
   `,
 })
