@@ -31,6 +31,13 @@ export interface WindowOptions {
   phone?: boolean;
   /** The browser's language (BCP 47, e.g. `en-GB`), for tests of how dates read; Chromium's own otherwise. */
   locale?: string;
+  /**
+   * Whether the page plays its animations. Off by default: the context asks for reduced motion, as a
+   * person may in their system settings, and Angular Material then opens dialogs, selects and the
+   * drawer at once instead of over 150–300 ms each, hundreds of times a run. The files that type
+   * into dialogs or open the phone's drawer keep one test with motion on.
+   */
+  motion?: boolean;
 }
 
 /** The app under test and the browser that drives it, shared by every test of one file. */
@@ -66,6 +73,7 @@ async function openContext(origin: string, foreign: string[], opts: WindowOption
     isMobile: opts.phone ?? false,
     hasTouch: opts.phone ?? false,
     acceptDownloads: true,
+    reducedMotion: opts.motion ? 'no-preference' : 'reduce',
     ...(opts.locale ? { locale: opts.locale } : {}),
   });
   context.setDefaultTimeout(WAIT_MS);

@@ -7,7 +7,7 @@ const app = useApp();
 let browser: BrowserContext;
 
 before(async () => {
-  browser = await app.newContext();
+  browser = await app.newContext({ motion: true });
 });
 after(async () => {
   await browser?.close();

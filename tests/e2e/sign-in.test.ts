@@ -90,7 +90,7 @@ describe('a recorder on a phone', () => {
   let browser: BrowserContext;
 
   before(async () => {
-    browser = await app.newContext({ phone: true });
+    browser = await app.newContext({ phone: true, motion: true });
   });
   after(async () => {
     await browser?.close();
