@@ -1,5 +1,5 @@
 // npm test: type checks, Angular unit specs, client build, then API, reference, benchmark-smoke and
-// browser tests (node:test, two files at a time; its closing "# pass" / "# fail" lines are the
+// browser tests (node:test, two processes at a time; its closing "# pass" / "# fail" lines are the
 // summary). Stops at the first failing stage and ends with the time each stage took.
 import { spawnSync } from 'node:child_process';
 import { existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
