@@ -120,6 +120,14 @@ describe('drift, the review queue and the recorder’s notice', () => {
   test('should read drift on a phone, charts stacked and tall enough', async () => {
     await recorder.goto(`${app.url}/drift?accessionId=${drift.accessionId}&characterId=${drift.characterId}`);
     await recorder.locator('hl-time-charts canvas').nth(2).waitFor();
+    // A chart sizes its canvas when its box has been laid out, a frame or more after the canvas is
+    // there: wait for the sizes to settle (or fail below, on what they are after a minute).
+    await recorder
+      .waitForFunction(() => {
+        const boxes = [...document.querySelectorAll('hl-time-charts canvas')].slice(0, 3).map((c) => c.getBoundingClientRect());
+        return boxes.length === 3 && boxes.every((b) => b.height >= 280 && b.width <= 390);
+      })
+      .catch(() => undefined);
     const boxes = await Promise.all([0, 1, 2].map((i) => recorder.locator('hl-time-charts canvas').nth(i).boundingBox()));
     for (const b of boxes) assert.ok(b && b.height >= 280 && b.width <= 390, 'each time chart fits the phone and is at least 280 px tall');
     assert.ok(boxes[1]!.y > boxes[0]!.y && boxes[2]!.y > boxes[1]!.y, 'the three charts stack vertically');
