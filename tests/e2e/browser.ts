@@ -38,6 +38,11 @@ export interface WindowOptions {
    * into dialogs or open the phone's drawer keep one test with motion on.
    */
   motion?: boolean;
+  /**
+   * Whether the app's service worker may install. Off by default: on install it fetches and hashes
+   * the whole app (about 4 MB), in every context, which only the offline tests need.
+   */
+  serviceWorker?: boolean;
 }
 
 /** The app under test and the browser that drives it, shared by every test of one file. */
@@ -74,6 +79,7 @@ async function openContext(origin: string, foreign: string[], opts: WindowOption
     hasTouch: opts.phone ?? false,
     acceptDownloads: true,
     reducedMotion: opts.motion ? 'no-preference' : 'reduce',
+    serviceWorkers: opts.serviceWorker ? 'allow' : 'block',
     ...(opts.locale ? { locale: opts.locale } : {}),
   });
   context.setDefaultTimeout(WAIT_MS);

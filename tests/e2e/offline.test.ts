@@ -62,7 +62,7 @@ describe('offline on a phone: cached app, queued readings, sent once back in ran
 
   before(async () => {
     assert.ok(existsSync(path.join(root, 'dist/client/browser/ngsw-worker.js')), 'the production build has the service worker (npm run build)');
-    browser = await app.newContext({ phone: true });
+    browser = await app.newContext({ phone: true, serviceWorker: true });
     page = await browser.newPage();
     await signIn(page, app.url, 'recorder@demo.test');
     const mine = await myReadings(page);
@@ -204,7 +204,7 @@ describe('offline on a phone: a photo reading kept on the phone, measured again 
   let known: Set<number>;
 
   before(async () => {
-    browser = await app.newContext({ phone: true });
+    browser = await app.newContext({ phone: true, serviceWorker: true });
     page = await browser.newPage();
     await signIn(page, app.url, 'recorder@demo.test');
     await page.evaluate(async () => (await navigator.serviceWorker.ready).scope);
