@@ -3,8 +3,7 @@
 // 50 sessions in the same run (the floor: session lookup, CSRF cookie, JSON). The server is the
 // real one (server/main.ts) in a child process with a fresh data folder and the demo scenario (in
 // npm test's smoke run, a copy of that run's seeded folder), so the load generator (autocannon)
-// does not share its event loop. Prints throughput, p50 and p95
-// and the ratios; asserts nothing.
+// does not share its event loop. Prints throughput, p50 and p95 and the ratios; asserts nothing.
 //   node --import tsx bench/load.bench.ts [requests per phase]
 import autocannon from 'autocannon';
 import { signInOverHttp, type HttpSession } from '../tests/e2e/http-session.js';

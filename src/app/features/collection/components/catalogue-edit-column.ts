@@ -12,7 +12,19 @@ import { MatCellDef, MatColumnDef, MatHeaderCellDef, MatTable, MatTableModule } 
   selector: 'hl-catalogue-edit-column',
   imports: [MatButtonModule, MatIconModule, MatTableModule],
   changeDetection: ChangeDetectionStrategy.OnPush,
-  styleUrl: './collection-lists.scss',
+  // Only what its own cells need (the lists' cell padding and the button's place): the cells come
+  // from this template, so the lists' stylesheet does not reach them.
+  styles: `
+    td {
+      vertical-align: top;
+      padding-top: 12px;
+      padding-bottom: 12px;
+    }
+    .actions-cell {
+      white-space: nowrap;
+      text-align: end;
+    }
+  `,
   template: `
     <ng-container matColumnDef="actions">
       <th mat-header-cell *matHeaderCellDef><span class="cdk-visually-hidden">Actions</span></th>
