@@ -99,6 +99,8 @@ describe('a recorder on a phone', () => {
   test('should find the navigation behind the menu button', async () => {
     const page = await browser.newPage();
     await page.goto(`${app.url}/sign-in`);
+    // The page is drawn after it has loaded: photograph the form, not the blank page before it.
+    await page.getByRole('button', { name: 'Sign in' }).waitFor();
     await screenshot(page, 'sign-in-phone');
     await signIn(page, app.url, 'recorder@demo.test', DEMO_PASSWORD);
     await page.waitForURL((u) => u.pathname === '/record');
